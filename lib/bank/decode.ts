@@ -1,0 +1,167 @@
+import { crc32 } from "../checksums/crc32";
+import { toHex } from "../checksums/sha256";
+import type { CurveSettings, FanCurve, ProfileSettings } from "../profile/types";
+import {
+  BANK_FORMAT_VERSION,
+  BANK_MAGIC,
+  BYTES_PER_POINT,
+  CRC_BYTES,
+  CURVE_FIXED_BYTES,
+  HASH_PREFIX_BYTES,
+  HEADER_BYTES,
+  MAX_DUTY_CODE,
+  MAX_HYSTERESIS_CODE,
+  MAX_RAMP_CODE,
+  MAX_SLOTS,
+  MAX_TEMP_CODE,
+  NO_FAN_STOP,
+  SLOT_FIXED_BYTES,
+} from "./layout";
+import { dutyFromCode, hysteresisFromCode, rampFromCode, tempFromCode } from "./quantise";
+import type { BankIssue, DecodeBankResult, DecodedSlot } from "./types";
+
+const hex32 = (n: number): string => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
+
+class SlotReader {
+  constructor(
+    private readonly bytes: Uint8Array,
+    public at: number,
+    private readonly end: number,
+    private readonly errors: BankIssue[],
+    private readonly slotIndex: number,
+  ) {}
+
+  /** Next byte, or null (with an error) past the slot end. */
+  byte(): number | null {
+    if (this.at >= this.end) {
+      this.errors.push({ code: "bank.slot_truncated", message: `Slot ${this.slotIndex} ends at byte ${this.end} but its contents go on; the image is damaged.`, offset: this.at });
+      return null;
+    }
+    return this.bytes[this.at++]!;
+  }
+
+  /** Next byte that must be ≤ max (and ≥ min). */
+  code(field: string, max: number, min = 0): number | null {
+    const offset = this.at;
+    const v = this.byte();
+    if (v === null) return null;
+    if (v > max || v < min) {
+      this.errors.push({ code: "bank.value_out_of_range", message: `Slot ${this.slotIndex}: ${field} byte ${v} at offset ${offset} is outside ${min}–${max}.`, offset, actual: v });
+      return null;
+    }
+    return v;
+  }
+}
+
+function readCurve(r: SlotReader, name: string): CurveSettings | null {
+  const count = r.code(`${name} point count`, 255, 1);
+  const hyst = r.code(`${name} hysteresis`, MAX_HYSTERESIS_CODE);
+  const up = r.code(`${name} ramp-up`, MAX_RAMP_CODE, 1);
+  const down = r.code(`${name} ramp-down`, MAX_RAMP_CODE, 1);
+  if (count === null || hyst === null || up === null || down === null) return null;
+  const points = [];
+  for (let i = 0; i < count; i++) {
+    const t = r.code(`${name} point ${i} temperature`, MAX_TEMP_CODE);
+    const d = r.code(`${name} point ${i} duty`, MAX_DUTY_CODE);
+    if (t === null || d === null) return null;
+    points.push({ tempC: tempFromCode(t), dutyPct: dutyFromCode(d) });
+  }
+  return { points, hysteresisC: hysteresisFromCode(hyst), rampUpPctPerSec: rampFromCode(up), rampDownPctPerSec: rampFromCode(down) };
+}
+
+function readSlot(bytes: Uint8Array, offset: number, limit: number, index: number, errors: BankIssue[]): { slot: DecodedSlot | null; next: number } {
+  const length = bytes[offset]!;
+  const minLength = SLOT_FIXED_BYTES + 2 * (CURVE_FIXED_BYTES + BYTES_PER_POINT);
+  if (length < minLength || offset + length > limit) {
+    errors.push({ code: "bank.bad_slot_length", message: `Slot ${index} at offset ${offset} says it is ${length} bytes, which does not fit the image (${minLength} bytes at least, ${limit - offset} left).`, offset, actual: length });
+    return { slot: null, next: limit };
+  }
+  const end = offset + length;
+  const r = new SlotReader(bytes, offset + 1, end, errors, index);
+  const hash = toHex(bytes.subarray(offset + 1, offset + 1 + HASH_PREFIX_BYTES));
+  r.at += HASH_PREFIX_BYTES;
+  const version = `${r.byte()}.${r.byte()}.${r.byte()}`;
+  const critical = r.code("critical temperature", MAX_TEMP_CODE);
+  const sensorLoss = r.code("sensor-loss duty", MAX_DUTY_CODE);
+  const stop = r.byte();
+  const stopOk = stop === NO_FAN_STOP || (stop !== null && stop <= MAX_TEMP_CODE);
+  if (!stopOk && stop !== null) errors.push({ code: "bank.value_out_of_range", message: `Slot ${index}: fan stop byte ${stop} is neither 0xFF (none) nor 0–${MAX_TEMP_CODE}.`, offset: r.at - 1, actual: stop });
+  const pump = readCurve(r, "pump");
+  const fansCurve = pump ? readCurve(r, "fan") : null;
+  if (critical === null || sensorLoss === null || !stopOk || pump === null || fansCurve === null) return { slot: null, next: end };
+  if (r.at !== end) {
+    errors.push({ code: "bank.bad_slot_length", message: `Slot ${index} says it is ${length} bytes but its contents take ${r.at - offset}.`, offset, expected: length, actual: r.at - offset });
+    return { slot: null, next: end };
+  }
+  const fans: FanCurve = stop === NO_FAN_STOP ? fansCurve : { ...fansCurve, stopBelowTempC: tempFromCode(stop!) };
+  const settings: ProfileSettings = { criticalTempC: tempFromCode(critical), sensorLossDutyPct: dutyFromCode(sensorLoss), pump, fans };
+  return { slot: { index, offset, contentHashPrefix: hash, version, settings }, next: end };
+}
+
+/**
+ * Reads a bank image (or a memory dump that starts with one; bytes after the
+ * length the header gives are ignored). Checks magic, format version, length,
+ * CRC-32 trailer (stored vs computed) and every slot's bounds and value
+ * ranges. Never throws: problems come back in `errors`, and slots that could
+ * be read are returned even when the CRC does not match.
+ */
+export function decodeBank(bytes: Uint8Array): DecodeBankResult {
+  const errors: BankIssue[] = [];
+  const result: DecodeBankResult = { ok: false, slots: [], errors };
+  if (!(bytes instanceof Uint8Array)) {
+    errors.push({ code: "bank.not_bytes", message: "Expected the image as bytes (Uint8Array)." });
+    return result;
+  }
+  if (bytes.length < HEADER_BYTES + CRC_BYTES) {
+    errors.push({ code: "bank.truncated", message: `The image is ${bytes.length} bytes; a bank has at least ${HEADER_BYTES + CRC_BYTES}.`, expected: HEADER_BYTES + CRC_BYTES, actual: bytes.length });
+    return result;
+  }
+  for (let i = 0; i < BANK_MAGIC.length; i++) {
+    if (bytes[i] !== BANK_MAGIC[i]) {
+      errors.push({ code: "bank.bad_magic", message: `Bytes 0–3 are ${toHex(bytes.subarray(0, 4))}, not the bank magic ${toHex(BANK_MAGIC)} ("LKPB"): this is not a profile bank, or it starts at another address.`, offset: 0 });
+      return result;
+    }
+  }
+  result.formatVersion = bytes[4]!;
+  result.slotCount = bytes[5]!;
+  const byteLength = bytes[6]! | (bytes[7]! << 8);
+  result.byteLength = byteLength;
+  if (result.formatVersion !== BANK_FORMAT_VERSION) {
+    errors.push({ code: "bank.unsupported_format", message: `Format version ${result.formatVersion} is not supported (this tool reads ${BANK_FORMAT_VERSION}).`, offset: 4, expected: BANK_FORMAT_VERSION, actual: result.formatVersion });
+    return result;
+  }
+  if (byteLength < HEADER_BYTES + CRC_BYTES) {
+    errors.push({ code: "bank.bad_length", message: `The header gives a length of ${byteLength} bytes, less than the ${HEADER_BYTES + CRC_BYTES} of an empty bank.`, offset: 6, actual: byteLength });
+    return result;
+  }
+  if (byteLength > bytes.length) {
+    errors.push({ code: "bank.truncated", message: `The header gives ${byteLength} bytes but only ${bytes.length} are present: the dump is cut short.`, offset: bytes.length, expected: byteLength, actual: bytes.length });
+    return result;
+  }
+  const crcAt = byteLength - CRC_BYTES;
+  const stored = (bytes[crcAt]! | (bytes[crcAt + 1]! << 8) | (bytes[crcAt + 2]! << 16) | (bytes[crcAt + 3]! << 24)) >>> 0;
+  const computed = crc32(bytes, 0, 0, crcAt);
+  result.crc = { stored, computed };
+  if (stored !== computed) {
+    errors.push({ code: "bank.crc_mismatch", message: `CRC-32 mismatch: the image stores ${hex32(stored)} at offset ${crcAt} but its bytes give ${hex32(computed)}; the image is damaged.`, offset: crcAt, expected: stored, actual: computed });
+  }
+  if (result.slotCount > MAX_SLOTS) {
+    errors.push({ code: "bank.too_many_slots", message: `The header gives ${result.slotCount} slots; at most ${MAX_SLOTS} are allowed.`, offset: 5, actual: result.slotCount });
+    return result;
+  }
+  let at = HEADER_BYTES;
+  for (let i = 0; i < result.slotCount; i++) {
+    if (at >= crcAt) {
+      errors.push({ code: "bank.slot_truncated", message: `The header gives ${result.slotCount} slots but only ${i} fit before the CRC.`, offset: at });
+      break;
+    }
+    const { slot, next } = readSlot(bytes, at, crcAt, i, errors);
+    if (slot) result.slots.push(slot);
+    at = next;
+  }
+  if (errors.length === 0 && at !== crcAt) {
+    errors.push({ code: "bank.bad_length", message: `The slots end at byte ${at} but the CRC is at ${crcAt}.`, offset: at, expected: crcAt, actual: at });
+  }
+  result.ok = errors.length === 0;
+  return result;
+}

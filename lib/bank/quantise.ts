@@ -1,0 +1,60 @@
+import type { CoolingProfile, CurveSettings, ProfileSettings } from "../profile/types";
+import {
+  DUTY_STEP_PCT,
+  HYSTERESIS_STEP_C,
+  MAX_DUTY_CODE,
+  MAX_HYSTERESIS_CODE,
+  MAX_RAMP_CODE,
+  MAX_TEMP_CODE,
+  RAMP_STEP_PCT_PER_SEC,
+  TEMP_STEP_C,
+} from "./layout";
+
+// Guards against 0.3 / 0.1 = 2.9999999999999996 style floating-point error.
+const EPS = 1e-9;
+const clamp = (v: number, lo: number, hi: number): number => Math.min(hi, Math.max(lo, v));
+
+/*
+ * Every value is rounded in the direction that gives more cooling, so the
+ * as-flashed curve is never less safe than the authored one: duties and
+ * ramp-up limits up, temperatures, hysteresis and ramp-down limits down.
+ */
+export const tempCode = (tempC: number): number => clamp(Math.floor(tempC / TEMP_STEP_C + EPS), 0, MAX_TEMP_CODE);
+export const dutyCode = (dutyPct: number): number => clamp(Math.ceil(dutyPct / DUTY_STEP_PCT - EPS), 0, MAX_DUTY_CODE);
+export const hysteresisCode = (hysteresisC: number): number => clamp(Math.floor(hysteresisC / HYSTERESIS_STEP_C + EPS), 0, MAX_HYSTERESIS_CODE);
+export const rampUpCode = (pctPerSec: number): number => clamp(Math.ceil(pctPerSec / RAMP_STEP_PCT_PER_SEC - EPS), 1, MAX_RAMP_CODE);
+export const rampDownCode = (pctPerSec: number): number => clamp(Math.floor(pctPerSec / RAMP_STEP_PCT_PER_SEC + EPS), 1, MAX_RAMP_CODE);
+
+export const tempFromCode = (code: number): number => code * TEMP_STEP_C;
+export const dutyFromCode = (code: number): number => code * DUTY_STEP_PCT;
+// Rounded to one decimal so 3 × 0.1 reads back as 0.3, not 0.30000000000000004.
+export const hysteresisFromCode = (code: number): number => Math.round(code) / 10;
+export const rampFromCode = (code: number): number => code * RAMP_STEP_PCT_PER_SEC;
+
+function quantiseCurve<C extends CurveSettings>(curve: C): C {
+  return {
+    ...curve,
+    points: curve.points.map((p) => ({ tempC: tempFromCode(tempCode(p.tempC)), dutyPct: dutyFromCode(dutyCode(p.dutyPct)) })),
+    hysteresisC: hysteresisFromCode(hysteresisCode(curve.hysteresisC)),
+    rampUpPctPerSec: rampFromCode(rampUpCode(curve.rampUpPctPerSec)),
+    rampDownPctPerSec: rampFromCode(rampDownCode(curve.rampDownPctPerSec)),
+  };
+}
+
+/**
+ * The profile as the board will run it after encoding: temperatures in 0.5 °C
+ * steps (rounded down), duties in 0.5 % steps (rounded up), hysteresis in
+ * 0.1 °C steps (down), ramp limits in 0.5 %/s steps (up for rising, down for
+ * falling). Names and text are kept. For the editor's as-flashed preview.
+ */
+export function quantise<P extends ProfileSettings | CoolingProfile>(profile: P): P {
+  const fans = quantiseCurve(profile.fans);
+  if (profile.fans.stopBelowTempC !== undefined) fans.stopBelowTempC = tempFromCode(tempCode(profile.fans.stopBelowTempC));
+  return {
+    ...profile,
+    criticalTempC: tempFromCode(tempCode(profile.criticalTempC)),
+    sensorLossDutyPct: dutyFromCode(dutyCode(profile.sensorLossDutyPct)),
+    pump: quantiseCurve(profile.pump),
+    fans,
+  };
+}

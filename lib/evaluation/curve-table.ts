@@ -1,0 +1,57 @@
+import { coolerNoise } from "../acoustics/cooler-noise";
+import { requireFinite } from "../guards/input-error";
+import type { HardwareContext } from "../hardware/types";
+import type { ProfileSettings } from "../profile/types";
+import { fanStateAt, pumpStateAt } from "../speeds/at-temp";
+
+/** One row of the temperature → speed → noise table a profile is plotted from. */
+export interface CurveRow {
+  tempC: number;
+  pumpDutyPct: number;
+  pumpRpm: number;
+  fanDutyPct: number;
+  fanRpm: number;
+  fansStopped: boolean;
+  /** Fans and pump together at 1 m, dB(A). */
+  soundDbA1m: number;
+  /** Fans and pump together at the listener distance, dB(A). */
+  soundDbAAtDistance: number;
+}
+
+export interface CurveTableOptions {
+  fromC?: number;
+  toC?: number;
+  stepC?: number;
+  distanceM?: number;
+}
+
+/**
+ * Steady-state pump and fan duty, RPM and estimated noise at each liquid
+ * temperature from `fromC` to `toC` (default 20–70 °C in 1 °C steps), from
+ * `dutyAtTemp`, `dutyToRpm` and `coolerNoise`.
+ */
+export function evaluateCurves(profile: ProfileSettings, hw: HardwareContext, options: CurveTableOptions = {}): CurveRow[] {
+  const fromC = requireFinite("fromC", options.fromC ?? 20, -50, 150);
+  const toC = requireFinite("toC", options.toC ?? 70, fromC, 150);
+  const stepC = requireFinite("stepC", options.stepC ?? 1, 0.01, 100);
+  const distanceM = requireFinite("distanceM", options.distanceM ?? 1, 0.01, 1000);
+  const rows: CurveRow[] = [];
+  const count = Math.floor((toC - fromC) / stepC + 1e-9);
+  for (let i = 0; i <= count; i++) {
+    const tempC = fromC + i * stepC;
+    const pump = pumpStateAt(profile, hw, tempC);
+    const fans = fanStateAt(profile, hw, tempC);
+    const noise = coolerNoise(hw, fans.rpm, pump.rpm, distanceM);
+    rows.push({
+      tempC,
+      pumpDutyPct: pump.dutyPct,
+      pumpRpm: pump.rpm,
+      fanDutyPct: fans.dutyPct,
+      fanRpm: fans.rpm,
+      fansStopped: fans.stopped,
+      soundDbA1m: noise.totalDbA1m,
+      soundDbAAtDistance: noise.totalDbAAtDistance,
+    });
+  }
+  return rows;
+}

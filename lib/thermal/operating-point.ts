@@ -1,0 +1,132 @@
+import { coolerNoise, type NoiseEstimate } from "../acoustics/cooler-noise";
+import { requireFinite } from "../guards/input-error";
+import { DEFAULT_STOPPED_RESISTANCE_FACTOR, type HardwareContext } from "../hardware/types";
+import type { ProfileSettings } from "../profile/types";
+import { fanStateAt, pumpStateAt, type MotorState } from "../speeds/at-temp";
+import { coolantRiseK, pumpFlowLpm, WATER_25C, type Coolant } from "./coolant";
+import { radiatorResistanceKPerW } from "./resistance";
+
+/** Bisection stops when the bracket around the liquid temperature is this narrow. */
+export const DEFAULT_TOLERANCE_K = 0.001;
+
+export interface OperatingPointOptions {
+  heatLoadW: number;
+  ambientC: number;
+  /** Listener distance for the noise estimate, m (default 1). */
+  distanceM?: number;
+  coolant?: Coolant;
+  /** Width of the final bracket, K (default 0.001). */
+  toleranceK?: number;
+}
+
+/** Steady state of the loop at one heat load. */
+export interface OperatingPoint {
+  heatLoadW: number;
+  ambientC: number;
+  /** Steady liquid temperature, °C (middle of the final bracket). */
+  liquidTempC: number;
+  /** Final bracket [low, high] that holds the root, °C. */
+  bracketC: [number, number];
+  /** T − Tamb − P·R(N(T)) at liquidTempC, K. */
+  residualK: number;
+  /**
+   * True when the root sits on the fan-stop step: below it the fans stop and
+   * the liquid warms, at it they start and the liquid cools. The firmware then
+   * cycles around the stop temperature within its hysteresis.
+   */
+  onFanStopStep: boolean;
+  iterations: number;
+  thermalResistanceKPerW: number;
+  pump: MotorState;
+  fans: MotorState;
+  pumpFlowLpm: number;
+  /** Coolant temperature rise across the cold plate, K. */
+  coolantRiseK: number;
+  noise: NoiseEstimate;
+  /** False when the curve cannot hold this load below the critical temperature. */
+  holdsBelowCritical: boolean;
+}
+
+/** g(T) = T − Tamb − P·R(N_fan(T)); non-decreasing in T, so its root is unique. */
+export function heatBalanceResidualK(profile: ProfileSettings, hw: HardwareContext, heatLoadW: number, ambientC: number, tempC: number): number {
+  const fanRpm = fanStateAt(profile, hw, tempC).rpm;
+  return tempC - ambientC - heatLoadW * radiatorResistanceKPerW(hw, fanRpm);
+}
+
+/**
+ * Steady liquid temperature for heat load P and ambient Tamb: the root of
+ * T = Tamb + P·R(N_fan(T)), found by bisection to `toleranceK` (default 0.001 K).
+ * R falls as the fans speed up and the fan speed does not fall as T rises, so
+ * g(T) = T − Tamb − P·R(N(T)) is non-decreasing and the root is unique; the
+ * bracket [Tamb, Tamb + P·Rlargest] always holds it. Then: pump and fan speeds,
+ * noise (see coolerNoise), pump flow V̇ ∝ N and coolant rise ΔT = Q/(ṁ·c_p)
+ * (Incropera & DeWitt, ch. 1). An estimate from a lumped model: a release still
+ * needs lab measurement on real hardware.
+ */
+export function operatingPoint(profile: ProfileSettings, hw: HardwareContext, options: OperatingPointOptions): OperatingPoint {
+  const heatLoadW = requireFinite("heatLoadW", options.heatLoadW, 0, 100_000);
+  const ambientC = requireFinite("ambientC", options.ambientC, -50, 100);
+  const toleranceK = requireFinite("toleranceK", options.toleranceK ?? DEFAULT_TOLERANCE_K, 1e-9, 10);
+  const distanceM = requireFinite("distanceM", options.distanceM ?? 1, 0.01, 1000);
+  const coolant = options.coolant ?? WATER_25C;
+
+  const rSlow = hw.radiator.thermalResistanceAtMinFanKPerW;
+  const rLargest = Math.max(rSlow, hw.radiator.thermalResistanceFansStoppedKPerW ?? rSlow * DEFAULT_STOPPED_RESISTANCE_FACTOR);
+  let lo = ambientC;
+  let hi = ambientC + heatLoadW * rLargest;
+  let iterations = 0;
+  while (hi - lo > toleranceK && iterations < 200) {
+    const mid = (lo + hi) / 2;
+    if (heatBalanceResidualK(profile, hw, heatLoadW, ambientC, mid) < 0) lo = mid;
+    else hi = mid;
+    iterations++;
+  }
+  const liquidTempC = (lo + hi) / 2;
+  const residualK = heatBalanceResidualK(profile, hw, heatLoadW, ambientC, liquidTempC);
+  const stopC = profile.fans.stopBelowTempC;
+  const onFanStopStep = stopC !== undefined && Math.abs(residualK) > toleranceK * 100 && Math.abs(liquidTempC - stopC) <= toleranceK;
+
+  const pump = pumpStateAt(profile, hw, liquidTempC);
+  const fans = fanStateAt(profile, hw, liquidTempC);
+  const flowLpm = pumpFlowLpm(hw.pump.flowAtMaxRpmLpm, hw.pump.maxRpm, pump.rpm);
+  return {
+    heatLoadW,
+    ambientC,
+    liquidTempC,
+    bracketC: [lo, hi],
+    residualK,
+    onFanStopStep,
+    iterations,
+    thermalResistanceKPerW: radiatorResistanceKPerW(hw, fans.rpm),
+    pump,
+    fans,
+    pumpFlowLpm: flowLpm,
+    coolantRiseK: coolantRiseK(heatLoadW, flowLpm, coolant),
+    noise: coolerNoise(hw, fans.rpm, pump.rpm, distanceM),
+    holdsBelowCritical: liquidTempC < profile.criticalTempC,
+  };
+}
+
+export interface LoadSweepOptions extends Omit<OperatingPointOptions, "heatLoadW"> {
+  fromW?: number;
+  toW?: number;
+  /** Number of loads, evenly spaced, including both ends (default 31). */
+  count?: number;
+}
+
+/**
+ * Operating points over a range of heat loads (default 50–350 W in 31 steps of
+ * 10 W), the liquid temperatures, speeds and noise a user would live with.
+ */
+export function loadSweep(profile: ProfileSettings, hw: HardwareContext, options: LoadSweepOptions): OperatingPoint[] {
+  const fromW = requireFinite("fromW", options.fromW ?? 50, 0, 100_000);
+  const toW = requireFinite("toW", options.toW ?? 350, fromW, 100_000);
+  const count = requireFinite("count", options.count ?? 31, 1, 10_000);
+  const n = Math.floor(count);
+  const out: OperatingPoint[] = [];
+  for (let i = 0; i < n; i++) {
+    const heatLoadW = n === 1 ? fromW : fromW + ((toW - fromW) * i) / (n - 1);
+    out.push(operatingPoint(profile, hw, { ...options, heatLoadW }));
+  }
+  return out;
+}
