@@ -1,0 +1,123 @@
+import { bankBytes, DUTY_STEP_PCT, TEMP_STEP_C } from "../bank/layout";
+import { quantise } from "../bank/quantise";
+import type { HardwareContext } from "../hardware/types";
+import type { CoolingProfile, CurveKind, CurveSettings } from "../profile/types";
+import { dutyAtTemp, maxDutyPct } from "../speeds/curve";
+import type { ValidationIssue } from "./types";
+
+const CURVES: readonly CurveKind[] = ["pump", "fans"];
+const LABEL: Record<CurveKind, string> = { pump: "pump", fans: "fan" };
+const fmt = (n: number): string => String(Math.round(n * 1000) / 1000);
+
+const error = (code: string, path: string, message: string): ValidationIssue => ({ code, path, severity: "error", message });
+const warning = (code: string, path: string, message: string): ValidationIssue => ({ code, path, severity: "warning", message });
+
+function orderRules(kind: CurveKind, curve: CurveSettings, out: ValidationIssue[]): void {
+  curve.points.forEach((p, i) => {
+    const prev = curve.points[i - 1];
+    if (!prev) return;
+    if (!(p.tempC > prev.tempC)) {
+      out.push(error("curve.temps_not_increasing", `/${kind}/points/${i}/tempC`, `${LABEL[kind]} point ${i} is at ${fmt(p.tempC)} °C, not above point ${i - 1} at ${fmt(prev.tempC)} °C: temperatures must strictly increase; sort the points or remove the duplicate.`));
+    }
+    if (p.dutyPct < prev.dutyPct) {
+      out.push(error("curve.duties_decreasing", `/${kind}/points/${i}/dutyPct`, `${LABEL[kind]} point ${i} asks for ${fmt(p.dutyPct)} %, less than the ${fmt(prev.dutyPct)} % of point ${i - 1}: duties must not fall as the liquid warms; raise it to at least ${fmt(prev.dutyPct)} %.`));
+    }
+  });
+}
+
+function safetyRules(doc: CoolingProfile, out: ValidationIssue[]): void {
+  for (const kind of CURVES) {
+    const curve = doc[kind];
+    const atCritical = dutyAtTemp(curve.points, doc.criticalTempC);
+    if (atCritical < 100) {
+      out.push(error("curve.no_full_speed_at_critical", `/${kind}/points`, `The ${LABEL[kind]} curve reaches only ${fmt(atCritical)} % at the critical temperature ${fmt(doc.criticalTempC)} °C: add a point with 100 % at or below ${fmt(doc.criticalTempC)} °C.`));
+    }
+  }
+  const highest = Math.max(maxDutyPct(doc.pump.points), maxDutyPct(doc.fans.points));
+  if (doc.sensorLossDutyPct < highest) {
+    out.push(error("sensor_loss.below_curve_duty", "/sensorLossDutyPct", `The sensor-loss duty ${fmt(doc.sensorLossDutyPct)} % is below the highest curve duty ${fmt(highest)} %: with the sensor lost the liquid may be hot, so set it to at least ${fmt(highest)} % (100 % is usual).`));
+  }
+  doc.pump.points.forEach((p, i) => {
+    if (p.dutyPct <= 0) {
+      out.push(error("pump.zero_duty", `/pump/points/${i}/dutyPct`, "A pump must never stop while the CPU makes heat: give this point a duty above 0 %, at least the pump's minimum duty."));
+    }
+  });
+  const stop = doc.fans.stopBelowTempC;
+  if (stop !== undefined && stop >= doc.criticalTempC) {
+    out.push(error("fans.stop_at_or_above_critical", "/fans/stopBelowTempC", `The fans would stop below ${fmt(stop)} °C, at or above the critical temperature ${fmt(doc.criticalTempC)} °C: set the stop temperature well below it.`));
+  }
+}
+
+function hardwareRules(doc: CoolingProfile, hw: HardwareContext, out: ValidationIssue[]): void {
+  doc.pump.points.forEach((p, i) => {
+    if (p.dutyPct > 0 && p.dutyPct < hw.pump.minDutyPct) {
+      out.push(error("pump.below_min_duty", `/pump/points/${i}/dutyPct`, `${fmt(p.dutyPct)} % is below the pump's minimum duty ${fmt(hw.pump.minDutyPct)} %: raise it to at least ${fmt(hw.pump.minDutyPct)} %.`));
+    }
+  });
+  doc.fans.points.forEach((p, i) => {
+    if (p.dutyPct < hw.fan.minDutyPct) {
+      out.push(warning("fans.below_min_duty", `/fans/points/${i}/dutyPct`, `${fmt(p.dutyPct)} % is below the fan's minimum duty ${fmt(hw.fan.minDutyPct)} %: the fans hold their minimum ${fmt(hw.fan.rpmAtMinDuty)} RPM there. Raise it, or use stopBelowTempC to stop them.`));
+    }
+  });
+  const limit = hw.boardRevision.maxPointsPerCurve;
+  for (const kind of CURVES) {
+    const n = doc[kind].points.length;
+    if (n > limit) {
+      out.push(error("board.too_many_points", `/${kind}/points`, `The ${LABEL[kind]} curve has ${n} points; board revision ${hw.boardRevision.version} stores at most ${limit}: remove ${n - limit}.`));
+    }
+  }
+  const imageBytes = bankBytes([{ pumpPoints: doc.pump.points.length, fanPoints: doc.fans.points.length }]);
+  if (imageBytes > hw.boardRevision.memoryBytes) {
+    out.push(error("bank.exceeds_memory", "", `A bank holding this profile alone takes ${imageBytes} bytes; board revision ${hw.boardRevision.version} has ${hw.boardRevision.memoryBytes}: remove curve points.`));
+  }
+}
+
+function quantisationRules(doc: CoolingProfile, out: ValidationIssue[]): void {
+  const q = quantise(doc);
+  for (const kind of CURVES) {
+    const qPoints = q[kind].points;
+    doc[kind].points.forEach((p, i) => {
+      const qp = qPoints[i]!;
+      const prev = qPoints[i - 1];
+      if (prev && doc[kind].points[i - 1]!.tempC < p.tempC && !(qp.tempC > prev.tempC)) {
+        out.push(error("quantisation.temps_collide", `/${kind}/points/${i}/tempC`, `Stored in ${TEMP_STEP_C} °C steps this point falls on ${fmt(qp.tempC)} °C like the point before: space the points at least ${TEMP_STEP_C} °C apart.`));
+      }
+      if (qp.tempC !== p.tempC) {
+        out.push(warning("quantisation.loss", `/${kind}/points/${i}/tempC`, `Stored as ${fmt(qp.tempC)} °C (${TEMP_STEP_C} °C steps, rounded down); write ${fmt(qp.tempC)} to see exactly what the board runs.`));
+      }
+      if (qp.dutyPct !== p.dutyPct) {
+        out.push(warning("quantisation.loss", `/${kind}/points/${i}/dutyPct`, `Stored as ${fmt(qp.dutyPct)} % (${DUTY_STEP_PCT} % steps, rounded up); write ${fmt(qp.dutyPct)} to see exactly what the board runs.`));
+      }
+    });
+    for (const field of ["hysteresisC", "rampUpPctPerSec", "rampDownPctPerSec"] as const) {
+      if (q[kind][field] !== doc[kind][field]) {
+        out.push(warning("quantisation.loss", `/${kind}/${field}`, `Stored as ${fmt(q[kind][field])}; write that value to see exactly what the board runs.`));
+      }
+    }
+  }
+  const single: [keyof CoolingProfile & string, number | undefined, number | undefined][] = [
+    ["criticalTempC", doc.criticalTempC, q.criticalTempC],
+    ["sensorLossDutyPct", doc.sensorLossDutyPct, q.sensorLossDutyPct],
+  ];
+  for (const [field, before, after] of single) {
+    if (before !== after) out.push(warning("quantisation.loss", `/${field}`, `Stored as ${fmt(after ?? 0)}; write that value to see exactly what the board runs.`));
+  }
+  if (doc.fans.stopBelowTempC !== q.fans.stopBelowTempC) {
+    out.push(warning("quantisation.loss", "/fans/stopBelowTempC", `Stored as ${fmt(q.fans.stopBelowTempC ?? 0)} °C; write that value to see exactly what the board runs.`));
+  }
+}
+
+/**
+ * Semantic rules of a profile that passed the schema: point order, safety
+ * (full speed at the critical temperature, sensor-loss duty, a pump that never
+ * stops, fan stop below critical), board and component limits when `hw` is
+ * given, and the effects of quantisation to the stored format.
+ */
+export function profileRuleIssues(doc: CoolingProfile, hw?: HardwareContext): ValidationIssue[] {
+  const out: ValidationIssue[] = [];
+  for (const kind of CURVES) orderRules(kind, doc[kind], out);
+  safetyRules(doc, out);
+  if (hw) hardwareRules(doc, hw, out);
+  quantisationRules(doc, out);
+  return out;
+}
