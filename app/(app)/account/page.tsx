@@ -1,0 +1,25 @@
+import type { Metadata } from "next";
+import { requirePageActor } from "@/lib/server/guard";
+import { ROLE_LABELS } from "@/lib/auth/roles";
+import { PageHeader, Panel } from "@/components/ui/panel";
+import { ChangePasswordForm } from "@/components/account/change-password-form";
+import { TokenManager } from "@/components/account/token-manager";
+
+export const metadata: Metadata = { title: "Your account" };
+
+export default async function AccountPage() {
+  const actor = await requirePageActor("read");
+  return (
+    <>
+      <PageHeader title="Your account" subtitle={`${actor.email} · ${ROLE_LABELS[actor.role]}`} />
+      <div className="grid gap-5 xl:grid-cols-2">
+        <Panel title="Change password">
+          <ChangePasswordForm />
+        </Panel>
+        <Panel title="API tokens">
+          <TokenManager />
+        </Panel>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,78 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { requirePageActor } from "@/lib/server/guard";
+import { can } from "@/lib/auth/roles";
+import { getDb } from "@/db/client";
+import { countBuildsByStage, recentActivity, reviewsWaitingFor } from "@/db/dashboard";
+import { PageHeader, Panel } from "@/components/ui/panel";
+import { Table, Td, Th, EmptyRow } from "@/components/ui/table";
+import { STAGE_ORDER, STAGE_LABELS } from "@/lib/release/stages";
+
+export const metadata: Metadata = { title: "Dashboard" };
+
+export default async function DashboardPage() {
+  const actor = await requirePageActor("read");
+  const db = getDb();
+  const [byStage, waiting, activity] = await Promise.all([
+    countBuildsByStage(db),
+    can(actor.role, "build:review") ? reviewsWaitingFor(db, { userId: actor.userId }) : Promise.resolve([]),
+    recentActivity(db, { limit: 12 }),
+  ]);
+  return (
+    <>
+      <PageHeader title="Dashboard" subtitle={`Signed in as ${actor.name}`} />
+      <div className="grid gap-5 lg:grid-cols-3">
+        <Panel title="Builds by stage" className="lg:col-span-3">
+          <ol className="grid grid-cols-3 gap-3 md:grid-cols-6" aria-label="Builds by stage">
+            {STAGE_ORDER.map((stage) => (
+              <li key={stage} className="rounded border border-ink-200 px-3 py-2">
+                <p className="text-xs uppercase tracking-wide text-ink-600">{STAGE_LABELS[stage]}</p>
+                <p className="text-2xl font-semibold tabular-nums" data-testid={`stage-count-${stage}`}>
+                  {byStage[stage]}
+                </p>
+              </li>
+            ))}
+          </ol>
+        </Panel>
+        <Panel title="Reviews waiting for you">
+          {waiting.length === 0 ? (
+            <p className="text-sm text-ink-600">Nothing waits for your review.</p>
+          ) : (
+            <ul className="space-y-1.5 text-sm">
+              {waiting.map((b) => (
+                <li key={b.id}>
+                  <Link href={`/builds/${b.id}`}>
+                    {b.boardModel} {b.version}
+                  </Link>
+                </li>
+              ))}
+            </ul>
+          )}
+        </Panel>
+        <Panel title="Recent activity" className="lg:col-span-2">
+          <Table caption="Recent activity">
+            <thead>
+              <tr>
+                <Th>When</Th>
+                <Th>Who</Th>
+                <Th>What</Th>
+              </tr>
+            </thead>
+            <tbody>
+              {activity.length === 0 && <EmptyRow colSpan={3}>No activity yet.</EmptyRow>}
+              {activity.map((a) => (
+                <tr key={a.id}>
+                  <Td className="whitespace-nowrap tabular-nums text-ink-600">{a.createdAt.toISOString().slice(0, 16).replace("T", " ")}</Td>
+                  <Td>{a.actorLabel}</Td>
+                  <Td>
+                    <code className="text-xs">{a.action}</code> <span className="text-ink-600">{a.entityType}</span>
+                  </Td>
+                </tr>
+              ))}
+            </tbody>
+          </Table>
+        </Panel>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,10 @@
+import NextAuth from "next-auth";
+import { authOptions } from "@/lib/server/auth";
+
+async function handler(req: Request, ctx: { params: Promise<{ nextauth: string[] }> }) {
+  // next-auth v4 reads params synchronously; Next 16 hands them over as a promise.
+  const params = await ctx.params;
+  return (NextAuth(authOptions()) as (r: Request, c: { params: { nextauth: string[] } }) => Promise<Response>)(req, { params });
+}
+
+export { handler as GET, handler as POST };

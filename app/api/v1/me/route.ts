@@ -1,0 +1,10 @@
+import { apiRoute } from "@/lib/server/api";
+import { getMe } from "@/lib/api/operations/account";
+
+export const GET = apiRoute(getMe, async ({ actor }) => ({
+  id: actor.userId,
+  email: actor.email,
+  name: actor.name,
+  role: actor.role,
+  via: actor.via,
+}));

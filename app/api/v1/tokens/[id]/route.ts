@@ -1,0 +1,9 @@
+import { apiRoute } from "@/lib/server/api";
+import { revokeToken } from "@/lib/api/operations/account";
+import { getDb } from "@/db/client";
+import * as tokens from "@/db/tokens";
+import { auditActor } from "@/lib/server/actor";
+
+export const DELETE = apiRoute(revokeToken, async ({ actor, params, requestId }) => ({
+  token: await tokens.revokeToken(getDb(), auditActor(actor, requestId), { id: params.id, userId: actor.userId }),
+}));

@@ -1,0 +1,14 @@
+import { apiRoute } from "@/lib/server/api";
+import { createUser, listUsers } from "@/lib/api/operations/admin";
+import { getDb } from "@/db/client";
+import * as users from "@/db/users";
+import { auditActor } from "@/lib/server/actor";
+import { hashPassword } from "@/lib/server/password";
+
+export const GET = apiRoute(listUsers, async () => ({ items: await users.listUsers(getDb()) }));
+
+export const POST = apiRoute(createUser, async ({ actor, body, requestId }) => {
+  const { password, ...rest } = body;
+  const user = await users.createUser(getDb(), auditActor(actor, requestId), { ...rest, passwordHash: await hashPassword(password) });
+  return { user };
+});

@@ -1,0 +1,120 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useForm } from "react-hook-form";
+import { useState } from "react";
+import type { z } from "zod";
+import { apiFetch } from "@/lib/api/client";
+import { AppError } from "@/lib/api/errors";
+import { createTokenBody, type TokenView } from "@/lib/api/operations/account";
+import { Button } from "@/components/ui/button";
+import { Field, Input, describedBy } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
+import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { Badge } from "@/components/ui/badge";
+
+function fmt(iso: string | null): string {
+  return iso ? iso.slice(0, 16).replace("T", " ") : "—";
+}
+
+function tokenState(t: TokenView): { label: string; tone: "ok" | "neutral" | "fault" } {
+  if (t.revokedAt) return { label: "revoked", tone: "fault" };
+  if (new Date(t.expiresAt) < new Date()) return { label: "expired", tone: "neutral" };
+  return { label: "active", tone: "ok" };
+}
+
+export function TokenManager() {
+  const qc = useQueryClient();
+  const [secret, setSecret] = useState<string | null>(null);
+  const tokens = useQuery({ queryKey: ["tokens"], queryFn: () => apiFetch<{ items: TokenView[] }>("/api/v1/tokens") });
+  const form = useForm<z.input<typeof createTokenBody>, unknown, z.output<typeof createTokenBody>>({
+    resolver: zodResolver(createTokenBody),
+    defaultValues: { name: "", expiresInDays: 90 },
+  });
+  const create = useMutation({
+    mutationFn: (values: z.output<typeof createTokenBody>) => apiFetch<{ secret: string }>("/api/v1/tokens", { method: "POST", json: values }),
+    onSuccess: (res) => {
+      setSecret(res.secret);
+      form.reset({ name: "", expiresInDays: 90 });
+      void qc.invalidateQueries({ queryKey: ["tokens"] });
+    },
+  });
+  const revoke = useMutation({
+    mutationFn: (id: string) => apiFetch(`/api/v1/tokens/${id}`, { method: "DELETE" }),
+    onSuccess: () => void qc.invalidateQueries({ queryKey: ["tokens"] }),
+  });
+  const { errors } = form.formState;
+
+  return (
+    <div className="space-y-4">
+      <p className="text-sm text-ink-700">
+        Tokens let factory stations and firmware pipelines call <code>/api/v1</code> as you, with your role. Send one as{" "}
+        <code>Authorization: Bearer …</code>.
+      </p>
+      {secret && (
+        <Notice tone="ok" role="status" title="Copy this token now; it is not shown again">
+          <code className="break-all" data-testid="new-token-secret">
+            {secret}
+          </code>
+        </Notice>
+      )}
+      <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="flex flex-wrap items-end gap-3" noValidate>
+        <div className="min-w-48 flex-1">
+          <Field id="token-name" label="Name" error={errors.name?.message}>
+            <Input {...describedBy("token-name", errors.name?.message)} placeholder="Line 2 flashing station" {...form.register("name")} />
+          </Field>
+        </div>
+        <div className="w-28">
+          <Field id="token-days" label="Valid for (days)" error={errors.expiresInDays?.message}>
+            <Input type="number" min={1} max={366} {...describedBy("token-days", errors.expiresInDays?.message)} {...form.register("expiresInDays")} />
+          </Field>
+        </div>
+        <Button type="submit" disabled={create.isPending}>
+          Create token
+        </Button>
+      </form>
+      {create.error && <Notice tone="fault" role="alert">{(create.error as AppError).message}</Notice>}
+      <Table caption="Your API tokens">
+        <thead>
+          <tr>
+            <Th>Name</Th>
+            <Th>Starts with</Th>
+            <Th>Expires</Th>
+            <Th>Last used</Th>
+            <Th>State</Th>
+            <Th />
+          </tr>
+        </thead>
+        <tbody>
+          {tokens.isPending && <SkeletonRows rows={2} cols={6} />}
+          {tokens.isError && (
+            <EmptyRow colSpan={6}>
+              Could not load tokens. <button className="underline" onClick={() => void tokens.refetch()}>Retry</button>
+            </EmptyRow>
+          )}
+          {tokens.data?.items.length === 0 && <EmptyRow colSpan={6}>No tokens yet.</EmptyRow>}
+          {tokens.data?.items.map((t) => {
+            const st = tokenState(t);
+            return (
+              <tr key={t.id}>
+                <Td>{t.name}</Td>
+                <Td><code>{t.tokenPrefix}…</code></Td>
+                <Td className="tabular-nums">{fmt(t.expiresAt)}</Td>
+                <Td className="tabular-nums">{fmt(t.lastUsedAt)}</Td>
+                <Td><Badge tone={st.tone}>{st.label}</Badge></Td>
+                <Td>
+                  {st.label === "active" && (
+                    <Button variant="quiet" onClick={() => revoke.mutate(t.id)} aria-label={`Revoke ${t.name}`}>
+                      Revoke
+                    </Button>
+                  )}
+                </Td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </Table>
+    </div>
+  );
+}

@@ -1,0 +1,102 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import { usePathname, useRouter, useSearchParams } from "next/navigation";
+import { apiFetch } from "@/lib/api/client";
+import type { AuditEventView } from "@/lib/api/operations/admin";
+import { Button } from "@/components/ui/button";
+import { Input } from "@/components/ui/field";
+import { Panel } from "@/components/ui/panel";
+import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+
+const FILTERS = [
+  { key: "action", label: "Action contains" },
+  { key: "entityType", label: "Entity type" },
+  { key: "actor", label: "Who" },
+] as const;
+
+export function AuditLog() {
+  const sp = useSearchParams();
+  const router = useRouter();
+  const pathname = usePathname();
+  const page = Math.max(1, Number(sp.get("page") ?? "1") || 1);
+  const qs = new URLSearchParams();
+  for (const f of FILTERS) {
+    const v = sp.get(f.key);
+    if (v) qs.set(f.key, v);
+  }
+  qs.set("page", String(page));
+  const q = useQuery({
+    queryKey: ["audit", qs.toString()],
+    queryFn: () => apiFetch<{ items: AuditEventView[]; hasMore: boolean }>(`/api/v1/audit?${qs.toString()}`),
+  });
+
+  function setParams(next: Record<string, string>) {
+    const p = new URLSearchParams(sp.toString());
+    for (const [k, v] of Object.entries(next)) {
+      if (v) p.set(k, v);
+      else p.delete(k);
+    }
+    router.replace(`${pathname}?${p.toString()}`);
+  }
+
+  return (
+    <Panel>
+      <form
+        className="mb-4 flex flex-wrap items-end gap-3"
+        onSubmit={(e) => {
+          e.preventDefault();
+          const fd = new FormData(e.currentTarget);
+          setParams({ ...Object.fromEntries(FILTERS.map((f) => [f.key, fd.get(f.key)?.toString() ?? ""])), page: "" });
+        }}
+      >
+        {FILTERS.map((f) => (
+          <label key={f.key} className="text-sm">
+            <span className="mb-1 block font-medium text-ink-800">{f.label}</span>
+            <Input name={f.key} defaultValue={sp.get(f.key) ?? ""} className="w-48" />
+          </label>
+        ))}
+        <Button type="submit" variant="secondary">Filter</Button>
+      </form>
+      <Table caption="Audit events">
+        <thead>
+          <tr>
+            <Th>When (UTC)</Th>
+            <Th>Who</Th>
+            <Th>Action</Th>
+            <Th>Entity</Th>
+            <Th>Change</Th>
+          </tr>
+        </thead>
+        <tbody>
+          {q.isPending && <SkeletonRows cols={5} />}
+          {q.isError && (
+            <EmptyRow colSpan={5}>
+              Could not load the audit log. <button className="underline" onClick={() => void q.refetch()}>Retry</button>
+            </EmptyRow>
+          )}
+          {q.data?.items.length === 0 && <EmptyRow colSpan={5}>No events match.</EmptyRow>}
+          {q.data?.items.map((e) => (
+            <tr key={e.id}>
+              <Td className="whitespace-nowrap tabular-nums">{e.createdAt.slice(0, 19).replace("T", " ")}</Td>
+              <Td>{e.actorLabel}</Td>
+              <Td><code className="text-xs">{e.action}</code></Td>
+              <Td className="text-xs">{e.entityType} <span className="text-ink-500">{e.entityId.slice(0, 8)}</span></Td>
+              <Td>
+                <details className="text-xs">
+                  <summary className="cursor-pointer text-ink-700">before / after</summary>
+                  <pre className="mt-1 max-w-xl overflow-x-auto whitespace-pre-wrap rounded bg-ink-50 p-2">{JSON.stringify({ before: e.before, after: e.after }, null, 2)}</pre>
+                </details>
+              </Td>
+            </tr>
+          ))}
+        </tbody>
+      </Table>
+      <div className="mt-3 flex items-center gap-2 text-sm">
+        <Button variant="secondary" disabled={page <= 1} onClick={() => setParams({ page: String(page - 1) })}>Newer</Button>
+        <span className="tabular-nums text-ink-600">Page {page}</span>
+        <Button variant="secondary" disabled={!q.data?.hasMore} onClick={() => setParams({ page: String(page + 1) })}>Older</Button>
+      </div>
+    </Panel>
+  );
+}

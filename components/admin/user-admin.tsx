@@ -1,0 +1,113 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useForm } from "react-hook-form";
+import { apiFetch } from "@/lib/api/client";
+import type { AppError } from "@/lib/api/errors";
+import { createUserBody, type CreateUserBody, type UpdateUserBody, type UserView } from "@/lib/api/operations/admin";
+import { ROLES, ROLE_LABELS, type Role } from "@/lib/auth/roles";
+import { Button } from "@/components/ui/button";
+import { Field, Input, Select, describedBy } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
+import { Panel } from "@/components/ui/panel";
+import { Badge } from "@/components/ui/badge";
+import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+
+export function UserAdmin({ currentUserId }: { currentUserId: string }) {
+  const qc = useQueryClient();
+  const users = useQuery({ queryKey: ["users"], queryFn: () => apiFetch<{ items: UserView[] }>("/api/v1/users") });
+  const form = useForm<CreateUserBody>({ resolver: zodResolver(createUserBody), defaultValues: { role: "viewer" } });
+  const create = useMutation({
+    mutationFn: (v: CreateUserBody) => apiFetch("/api/v1/users", { method: "POST", json: v }),
+    onSuccess: () => {
+      form.reset({ email: "", name: "", password: "", role: "viewer" });
+      void qc.invalidateQueries({ queryKey: ["users"] });
+    },
+  });
+  const update = useMutation({
+    mutationFn: ({ id, ...patch }: UpdateUserBody & { id: string }) => apiFetch(`/api/v1/users/${id}`, { method: "PATCH", json: patch }),
+    onSettled: () => void qc.invalidateQueries({ queryKey: ["users"] }),
+  });
+  const { errors } = form.formState;
+
+  return (
+    <div className="space-y-5">
+      <Panel title="People">
+        {update.error && <div className="mb-3"><Notice tone="fault" role="alert">{(update.error as AppError).message}</Notice></div>}
+        <Table caption="Users">
+          <thead>
+            <tr>
+              <Th>Name</Th>
+              <Th>E-mail</Th>
+              <Th>Role</Th>
+              <Th>State</Th>
+              <Th />
+            </tr>
+          </thead>
+          <tbody>
+            {users.isPending && <SkeletonRows cols={5} />}
+            {users.isError && (
+              <EmptyRow colSpan={5}>
+                Could not load users. <button className="underline" onClick={() => void users.refetch()}>Retry</button>
+              </EmptyRow>
+            )}
+            {users.data?.items.map((u) => (
+              <tr key={u.id}>
+                <Td className="font-medium">{u.name}</Td>
+                <Td>{u.email}</Td>
+                <Td>
+                  <label className="sr-only" htmlFor={`role-${u.id}`}>Role of {u.name}</label>
+                  <Select
+                    id={`role-${u.id}`}
+                    value={u.role}
+                    disabled={u.id === currentUserId}
+                    onChange={(e) => update.mutate({ id: u.id, role: e.target.value as Role })}
+                    className="w-44 py-1"
+                  >
+                    {ROLES.map((r) => (
+                      <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+                    ))}
+                  </Select>
+                </Td>
+                <Td>{u.disabledAt ? <Badge tone="fault">disabled</Badge> : <Badge tone="ok">active</Badge>}</Td>
+                <Td>
+                  {u.id !== currentUserId && (
+                    <Button variant="quiet" onClick={() => update.mutate({ id: u.id, disabled: !u.disabledAt })}>
+                      {u.disabledAt ? "Re-enable" : "Disable"} <span className="sr-only">{u.name}</span>
+                    </Button>
+                  )}
+                </Td>
+              </tr>
+            ))}
+          </tbody>
+        </Table>
+      </Panel>
+      <Panel title="Add a user">
+        <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-3xl gap-3 md:grid-cols-2" noValidate>
+          {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{(create.error as AppError).message}</Notice></div>}
+          {create.isSuccess && <div className="md:col-span-2"><Notice tone="ok" role="status">User created.</Notice></div>}
+          <Field id="new-name" label="Name" error={errors.name?.message}>
+            <Input {...describedBy("new-name", errors.name?.message)} {...form.register("name")} />
+          </Field>
+          <Field id="new-email" label="E-mail" error={errors.email?.message}>
+            <Input type="email" {...describedBy("new-email", errors.email?.message)} {...form.register("email")} />
+          </Field>
+          <Field id="new-role" label="Role" error={errors.role?.message}>
+            <Select {...describedBy("new-role", errors.role?.message)} {...form.register("role")}>
+              {ROLES.map((r) => (
+                <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+              ))}
+            </Select>
+          </Field>
+          <Field id="new-password" label="First password" hint="At least 12 characters; they change it on the Account page." error={errors.password?.message}>
+            <Input type="password" autoComplete="new-password" {...describedBy("new-password", errors.password?.message)} {...form.register("password")} />
+          </Field>
+          <div className="md:col-span-2">
+            <Button type="submit" disabled={create.isPending}>Create user</Button>
+          </div>
+        </form>
+      </Panel>
+    </div>
+  );
+}

@@ -1,0 +1,24 @@
+import type { Capability } from "@/lib/auth/roles";
+
+export interface NavItem {
+  href: string;
+  label: string;
+  capability: Capability;
+}
+
+export interface NavGroup {
+  label: string;
+  items: NavItem[];
+}
+
+/** The sidebar; each entry is shown only to roles with its capability (the pages check again on the server). */
+export const NAV: NavGroup[] = [
+  { label: "Overview", items: [{ href: "/", label: "Dashboard", capability: "read" }] },
+  {
+    label: "Admin",
+    items: [
+      { href: "/admin/users", label: "Users and roles", capability: "admin" },
+      { href: "/admin/audit", label: "Audit log", capability: "admin" },
+    ],
+  },
+];

@@ -1,0 +1,50 @@
+import js from "@eslint/js";
+import tseslint from "typescript-eslint";
+import reactHooks from "eslint-plugin-react-hooks";
+import nextPlugin from "@next/eslint-plugin-next";
+
+export default tseslint.config(
+  {
+    ignores: [
+      "node_modules/**",
+      ".next/**",
+      ".next-test/**",
+      ".next-*/**",
+      ".data/**",
+      "drizzle/**",
+      "test-results/**",
+      "playwright-report/**",
+      "next-env.d.ts",
+    ],
+  },
+  js.configs.recommended,
+  ...tseslint.configs.recommendedTypeChecked.map((c) => ({ ...c, files: ["**/*.{ts,tsx}"] })),
+  {
+    files: ["**/*.{ts,tsx}"],
+    languageOptions: {
+      parserOptions: { projectService: true, tsconfigRootDir: import.meta.dirname },
+    },
+    plugins: { "react-hooks": reactHooks, "@next/next": nextPlugin },
+    rules: {
+      ...reactHooks.configs.recommended.rules,
+      ...nextPlugin.configs.recommended.rules,
+      "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],
+      "@typescript-eslint/no-misused-promises": ["error", { checksVoidReturn: { attributes: false } }],
+      "@typescript-eslint/only-throw-error": "off",
+      "@typescript-eslint/require-await": "off",
+    },
+  },
+  {
+    files: ["**/*.mjs"],
+    rules: { "no-unused-vars": ["error", { argsIgnorePattern: "^_" }] },
+    languageOptions: { globals: { process: "readonly", console: "readonly", URL: "readonly", setTimeout: "readonly", clearTimeout: "readonly", Buffer: "readonly" } },
+  },
+  {
+    // lib/ is pure domain logic shared by browser and server; components never reach the database.
+    files: ["lib/**/*.ts", "components/**/*.{ts,tsx}"],
+    ignores: ["lib/server/**"],
+    rules: {
+      "no-restricted-imports": ["error", { patterns: [{ group: ["@/db", "@/db/*", "pg", "drizzle-orm", "drizzle-orm/*"], message: "Only db/ and lib/server talk to PostgreSQL." }] }],
+    },
+  },
+);

@@ -1,0 +1,93 @@
+import { z } from "zod";
+import { defineOperation } from "../operation";
+import { ROLES } from "@/lib/auth/roles";
+
+export const idParams = z.strictObject({ id: z.uuid("Not a valid id.") });
+
+export const meResponse = z.object({
+  id: z.string(),
+  email: z.string(),
+  name: z.string(),
+  role: z.enum(ROLES),
+  via: z.enum(["session", "token"]),
+});
+
+export const getMe = defineOperation({
+  id: "getMe",
+  method: "GET",
+  path: "/api/v1/me",
+  summary: "The signed-in user or the token's user, with role",
+  tag: "Account",
+  access: "signed_in",
+  response: meResponse,
+});
+
+export const changePasswordBody = z.strictObject({
+  currentPassword: z.string().min(1, "Enter your current password.").max(1024),
+  newPassword: z
+    .string()
+    .min(12, "Use at least 12 characters.")
+    .max(256, "Use at most 256 characters."),
+});
+export type ChangePasswordBody = z.infer<typeof changePasswordBody>;
+
+export const changePassword = defineOperation({
+  id: "changePassword",
+  method: "POST",
+  path: "/api/v1/me/password",
+  summary: "Change your own password",
+  tag: "Account",
+  access: "signed_in",
+  body: changePasswordBody,
+  successStatus: 204,
+});
+
+export const tokenSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  tokenPrefix: z.string(),
+  expiresAt: z.string(),
+  revokedAt: z.string().nullable(),
+  lastUsedAt: z.string().nullable(),
+  createdAt: z.string(),
+});
+export type TokenView = z.infer<typeof tokenSchema>;
+
+export const listTokens = defineOperation({
+  id: "listTokens",
+  method: "GET",
+  path: "/api/v1/tokens",
+  summary: "Your API tokens (never their secret)",
+  tag: "Account",
+  access: "signed_in",
+  response: z.object({ items: z.array(tokenSchema) }),
+});
+
+export const createTokenBody = z.strictObject({
+  name: z.string().trim().min(1, "Name the token, e.g. the station or pipeline that uses it.").max(80),
+  expiresInDays: z.coerce.number().int().min(1, "At least 1 day.").max(366, "At most 366 days."),
+});
+export type CreateTokenBody = z.infer<typeof createTokenBody>;
+
+export const createToken = defineOperation({
+  id: "createToken",
+  method: "POST",
+  path: "/api/v1/tokens",
+  summary: "Create an API token; the secret is shown in this response only",
+  tag: "Account",
+  access: "signed_in",
+  body: createTokenBody,
+  response: z.object({ token: tokenSchema, secret: z.string() }),
+  successStatus: 201,
+});
+
+export const revokeToken = defineOperation({
+  id: "revokeToken",
+  method: "DELETE",
+  path: "/api/v1/tokens/{id}",
+  summary: "Revoke one of your API tokens",
+  tag: "Account",
+  access: "signed_in",
+  params: idParams,
+  response: z.object({ token: tokenSchema }),
+});

@@ -1,0 +1,12 @@
+import type { Operation } from "../operation";
+import * as account from "./account";
+import * as admin from "./admin";
+
+function opsOf(mod: Record<string, unknown>): Operation[] {
+  return Object.values(mod).filter(
+    (v): v is Operation => typeof v === "object" && v !== null && "method" in v && "path" in v && "access" in v,
+  );
+}
+
+/** Every /api/v1 operation; the OpenAPI document and the fuzz tests are generated from this list. */
+export const allOperations: Operation[] = [...opsOf(account), ...opsOf(admin)];

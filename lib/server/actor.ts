@@ -1,0 +1,50 @@
+import "server-only";
+import { createHash } from "node:crypto";
+import { getServerSession } from "next-auth";
+import { getDb } from "@/db/client";
+import { getUserById } from "@/db/users";
+import { findActiveToken, touchToken } from "@/db/tokens";
+import type { AuditActor } from "@/db/audit";
+import type { Role } from "@/lib/auth/roles";
+import { authOptions } from "./auth";
+
+/** Who is making this request, as the server established it. */
+export interface Actor {
+  userId: string;
+  email: string;
+  name: string;
+  role: Role;
+  via: "session" | "token";
+  tokenId?: string;
+}
+
+export function hashToken(secret: string): string {
+  return createHash("sha256").update(secret, "utf8").digest("hex");
+}
+
+/** The session's user, reloaded from the database so a disabled user or a changed role takes effect at once. */
+export async function getSessionActor(): Promise<Actor | null> {
+  const session = await getServerSession(authOptions());
+  const user = session?.user as { id?: string; epoch?: number } | undefined;
+  if (!user?.id) return null;
+  const row = await getUserById(getDb(), { id: user.id });
+  // A session signed before the user was disabled stays dead even after re-enabling.
+  if (!row || row.disabledAt || row.sessionEpoch !== (user.epoch ?? 0)) return null;
+  return { userId: row.id, email: row.email, name: row.name, role: row.role, via: "session" };
+}
+
+/** A bearer token's user, or null when the token is unknown, revoked, expired or its user disabled. */
+export async function getTokenActor(authorization: string): Promise<Actor | null> {
+  const m = /^Bearer\s+(\S{10,200})$/i.exec(authorization.trim());
+  if (!m?.[1]) return null;
+  const db = getDb();
+  const found = await findActiveToken(db, { tokenHash: hashToken(m[1]) });
+  if (!found) return null;
+  await touchToken(db, { id: found.token.id });
+  const { user, token } = found;
+  return { userId: user.id, email: user.email, name: user.name, role: user.role, via: "token", tokenId: token.id };
+}
+
+export function auditActor(actor: Actor, requestId?: string): AuditActor {
+  return { userId: actor.userId, label: actor.via === "token" ? `${actor.email} (API token)` : actor.email, requestId };
+}

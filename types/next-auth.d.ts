@@ -1,0 +1,9 @@
+import "next-auth/jwt";
+
+declare module "next-auth/jwt" {
+  interface JWT {
+    uid?: string;
+    role?: string;
+    epoch?: number;
+  }
+}
