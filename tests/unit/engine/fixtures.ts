@@ -15,7 +15,7 @@ export const exampleHardware = (): HardwareContext => JSON.parse(readExample("co
 const curvePoints = (minDutyPct: number): fc.Arbitrary<CurvePoint[]> =>
   fc
     .record({
-      startTempC: fc.integer({ min: 30, max: 70 }).map((c) => c / 2),
+      startTempC: fc.integer({ min: 40, max: 90 }).map((c) => c / 2),
       steps: fc.array(fc.record({ dTempCode: fc.integer({ min: 1, max: 12 }), dDutyCode: fc.integer({ min: 0, max: 30 }) }), { minLength: 1, maxLength: 7 }),
       startDuty: fc.integer({ min: minDutyPct * 2, max: 160 }).map((c) => c / 2),
     })
@@ -47,7 +47,7 @@ export const validProfileArb: fc.Arbitrary<CoolingProfile> = fc
     const profile: CoolingProfile = {
       formatVersion: 1,
       name: "Generated",
-      criticalTempC: Math.min(100, lastT + 2),
+      criticalTempC: Math.min(100, Math.max(30, lastT + 2)),
       sensorLossDutyPct: 100,
       pump: { points: pump, hysteresisC: hyst, rampUpPctPerSec: up, rampDownPctPerSec: down },
       fans: { points: fans, hysteresisC: hyst, rampUpPctPerSec: up, rampDownPctPerSec: down },

@@ -1,0 +1,148 @@
+import zlib from "node:zlib";
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { bankBytes, contentHashHex, decodeBank, encodeBank, identifySlots, quantise, type CoolingProfile, type ProfileSettings } from "@/lib/engine";
+import { anyInRangeProfileArb, performanceProfile, quietProfile } from "./fixtures";
+
+const settingsOf = (p: CoolingProfile): ProfileSettings => {
+  const { criticalTempC, sensorLossDutyPct, pump, fans } = p;
+  return { criticalTempC, sensorLossDutyPct, pump, fans };
+};
+
+const encodeOk = (slots: Parameters<typeof encodeBank>[0]): Uint8Array => {
+  const r = encodeBank(slots);
+  if (!r.ok) throw new Error(JSON.stringify(r.errors));
+  return r.bytes;
+};
+
+describe("bank image", () => {
+  it("lays out header, slots and a little-endian CRC-32 of all bytes before it", () => {
+    const bytes = encodeOk([{ profile: quietProfile(), version: "1.2.3" }, { profile: performanceProfile(), version: "2.0.0" }]);
+    expect(Array.from(bytes.subarray(0, 4))).toEqual([0x4c, 0x4b, 0x50, 0x42]);
+    expect(bytes[4]).toBe(1);
+    expect(bytes[5]).toBe(2);
+    expect(bytes[6]! | (bytes[7]! << 8)).toBe(bytes.length);
+    expect(bytes.length).toBe(bankBytes([{ pumpPoints: 4, fanPoints: 4 }, { pumpPoints: 3, fanPoints: 4 }]));
+    // CRC-32 as zlib computes it (Greg Cook, reveng catalogue: CRC-32/ISO-HDLC).
+    const stored = new DataView(bytes.buffer, bytes.byteOffset).getUint32(bytes.length - 4, true);
+    expect(stored).toBe(zlib.crc32(bytes.subarray(0, bytes.length - 4)));
+  });
+
+  it("stores the first 8 bytes of the content hash and the version bytes", () => {
+    const profile = quietProfile();
+    const bytes = encodeOk([{ profile, version: "3.14.255" }]);
+    const decoded = decodeBank(bytes);
+    expect(decoded.ok).toBe(true);
+    expect(decoded.slots[0]!.contentHashPrefix).toBe(contentHashHex(profile).slice(0, 16));
+    expect(decoded.slots[0]!.version).toBe("3.14.255");
+  });
+
+  it("decodes what it encodes for the example profiles", () => {
+    const q = quantise(quietProfile());
+    const d = decodeBank(encodeOk([{ profile: q, version: "1.0.0" }]));
+    expect(d.slots[0]!.settings).toEqual(settingsOf(q));
+  });
+
+  it("quantises toward more cooling", () => {
+    const p = quietProfile();
+    p.pump.points[1] = { tempC: 35.3, dutyPct: 50.1 };
+    p.criticalTempC = 59.9;
+    const q = quantise(p);
+    expect(q.pump.points[1]).toEqual({ tempC: 35, dutyPct: 50.5 });
+    expect(q.criticalTempC).toBe(59.5);
+    expect(q.name).toBe(p.name);
+  });
+
+  it("property: encode → decode is the identity on quantised profiles", () => {
+    fc.assert(
+      fc.property(fc.array(anyInRangeProfileArb, { minLength: 1, maxLength: 4 }), fc.array(fc.tuple(fc.nat(255), fc.nat(255), fc.nat(255)), { minLength: 4, maxLength: 4 }), (profiles, versions) => {
+        const slots = profiles.map((p, i) => ({ profile: quantise(p), version: versions[i]!.join(".") }));
+        const d = decodeBank(encodeOk(slots));
+        expect(d.errors).toEqual([]);
+        expect(d.slots.map((s) => s.settings)).toEqual(slots.map((s) => settingsOf(s.profile)));
+        expect(d.slots.map((s) => s.version)).toEqual(slots.map((s) => s.version));
+        // Quantising twice changes nothing.
+        for (const s of slots) expect(quantise(s.profile)).toEqual(s.profile);
+      }),
+      { numRuns: 200 },
+    );
+  });
+
+  it("reports bad magic, truncation and CRC mismatch with expected and actual", () => {
+    const bytes = encodeOk([{ profile: quietProfile(), version: "1.0.0" }]);
+    const badMagic = bytes.slice();
+    badMagic[0] = 0x00;
+    expect(decodeBank(badMagic).errors[0]!.code).toBe("bank.bad_magic");
+
+    const truncated = decodeBank(bytes.subarray(0, bytes.length - 6));
+    expect(truncated.ok).toBe(false);
+    expect(truncated.errors[0]).toMatchObject({ code: "bank.truncated", expected: bytes.length, actual: bytes.length - 6 });
+
+    const flipped = bytes.slice();
+    flipped[20] = flipped[20]! ^ 0x01;
+    const d = decodeBank(flipped);
+    const crcError = d.errors.find((e) => e.code === "bank.crc_mismatch")!;
+    expect(crcError.expected).toBe(zlib.crc32(bytes.subarray(0, bytes.length - 4)));
+    expect(crcError.actual).toBe(zlib.crc32(flipped.subarray(0, flipped.length - 4)));
+    expect(d.ok).toBe(false);
+  });
+
+  it("reads a memory dump with erased bytes after the image", () => {
+    const bytes = encodeOk([{ profile: quietProfile(), version: "1.0.0" }]);
+    const dump = new Uint8Array(256).fill(0xff);
+    dump.set(bytes);
+    expect(decodeBank(dump).ok).toBe(true);
+  });
+
+  it("refuses what it cannot encode, with errors not exceptions", () => {
+    const p = quietProfile();
+    const bad = (slots: Parameters<typeof encodeBank>[0], opts?: Parameters<typeof encodeBank>[1]) => {
+      const r = encodeBank(slots, opts);
+      expect(r.ok).toBe(false);
+      return r.ok ? [] : r.errors.map((e) => e.code);
+    };
+    expect(bad([])).toContain("bank.no_slots");
+    expect(bad([{ profile: p, version: "1.0.0-rc.1" }])).toContain("bank.version_not_encodable");
+    expect(bad([{ profile: p, version: "256.0.0" }])).toContain("bank.version_not_encodable");
+    expect(bad([{ profile: p, version: "1.0.0", contentHashHex: "xyz" }])).toContain("bank.bad_content_hash");
+    expect(bad([{ profile: p, version: "1.0.0" }], { memoryBytes: 20 })).toContain("bank.exceeds_memory");
+    expect(bad([{ profile: p, version: "1.0.0" }, { profile: p, version: "1.0.1" }], { slotCount: 1 })).toContain("bank.exceeds_slot_count");
+    expect(bad(Array.from({ length: 17 }, () => ({ profile: p, version: "1.0.0" })))).toContain("bank.too_many_slots");
+  });
+
+  it("property: the decoder never throws on random bytes, and random bytes after a valid header fail cleanly", () => {
+    fc.assert(
+      fc.property(fc.uint8Array({ maxLength: 400 }), (bytes) => {
+        const r = decodeBank(bytes);
+        expect(typeof r.ok).toBe("boolean");
+        if (!r.ok) expect(r.errors.length).toBeGreaterThan(0);
+      }),
+      { numRuns: 2000 },
+    );
+    const valid = encodeOk([{ profile: quietProfile(), version: "1.0.0" }]);
+    fc.assert(
+      fc.property(fc.uint8Array({ minLength: 1, maxLength: 200 }), fc.nat(), (noise, at) => {
+        const b = valid.slice();
+        b.set(noise.subarray(0, b.length - 8), 8 + (at % 8));
+        expect(() => decodeBank(b)).not.toThrow();
+      }),
+      { numRuns: 1000 },
+    );
+    expect(decodeBank("LKPB" as unknown as Uint8Array).errors[0]!.code).toBe("bank.not_bytes");
+  });
+});
+
+describe("identify", () => {
+  it("matches slots by hash prefix and version", () => {
+    const quiet = quietProfile();
+    const perf = performanceProfile();
+    const bytes = encodeOk([{ profile: quiet, version: "1.0.0" }, { profile: perf, version: "2.0.0" }, { profile: { ...quiet, name: "Other" }, version: "1.0.0" }]);
+    const ids = identifySlots(decodeBank(bytes).slots, [
+      { profileVersionId: "pv-quiet-1", contentHashPrefix: contentHashHex(quiet).toUpperCase(), version: "1.0.0" },
+      { profileVersionId: "pv-perf-1", contentHashPrefix: contentHashHex(perf).slice(0, 16), version: "1.9.0" },
+    ]);
+    expect(ids.map((i) => i.match)).toEqual(["exact", "hash_only", "unknown"]);
+    expect(ids[0]!.profileVersionId).toBe("pv-quiet-1");
+    expect(ids[1]!.knownVersion).toBe("1.9.0");
+  });
+});
