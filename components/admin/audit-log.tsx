@@ -3,6 +3,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { apiFetch } from "@/lib/api/client";
+import { formText } from "@/components/ui/form-data";
 import type { AuditEventView } from "@/lib/api/operations/admin";
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/field";
@@ -47,7 +48,7 @@ export function AuditLog() {
         onSubmit={(e) => {
           e.preventDefault();
           const fd = new FormData(e.currentTarget);
-          setParams({ ...Object.fromEntries(FILTERS.map((f) => [f.key, fd.get(f.key)?.toString() ?? ""])), page: "" });
+          setParams({ ...Object.fromEntries(FILTERS.map((f) => [f.key, formText(fd, f.key)])), page: "" });
         }}
       >
         {FILTERS.map((f) => (

@@ -2,6 +2,7 @@
 
 import { signIn } from "next-auth/react";
 import { useState } from "react";
+import { formText } from "@/components/ui/form-data";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -16,8 +17,8 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
     setBusy(true);
     setError(null);
     const res = await signIn("credentials", {
-      email: form.get("email")?.toString() ?? "",
-      password: form.get("password")?.toString() ?? "",
+      email: formText(form, "email"),
+      password: formText(form, "password"),
       redirect: false,
     });
     setBusy(false);

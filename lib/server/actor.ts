@@ -1,6 +1,7 @@
 import "server-only";
 import { createHash } from "node:crypto";
 import { getServerSession } from "next-auth";
+import { connection } from "next/server";
 import { getDb } from "@/db/client";
 import { getUserById } from "@/db/users";
 import { findActiveToken, touchToken } from "@/db/tokens";
@@ -24,6 +25,8 @@ export function hashToken(secret: string): string {
 
 /** The session's user, reloaded from the database so a disabled user or a changed role takes effect at once. */
 export async function getSessionActor(): Promise<Actor | null> {
+  // Per-request by nature: never prerendered at build time.
+  await connection();
   const session = await getServerSession(authOptions());
   const user = session?.user as { id?: string; epoch?: number } | undefined;
   if (!user?.id) return null;

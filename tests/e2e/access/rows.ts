@@ -1,0 +1,5 @@
+import type { AccessRow } from "./types";
+import { foundationRows } from "./foundation";
+
+/** Every page and API operation of the app; each area of the product adds its own file. */
+export const ALL_ROWS: AccessRow[] = [...foundationRows];

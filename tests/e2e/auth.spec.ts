@@ -1,0 +1,71 @@
+import { expect, test } from "@playwright/test";
+import { ROLES } from "./access/types";
+import { ACCOUNTS, signInPage } from "./support/accounts";
+
+test.describe("sign-in", () => {
+  for (const role of ROLES) {
+    test(`${role} signs in, navigates and signs out`, async ({ page }) => {
+      await signInPage(page, ACCOUNTS[role]);
+      await expect(page.getByRole("heading", { name: "Dashboard" })).toBeVisible();
+      await expect(page.getByTestId("current-user")).toBeVisible();
+      const adminLink = page.getByRole("link", { name: "Users and roles" });
+      if (role === "admin") {
+        await adminLink.click();
+        await expect(page.getByRole("heading", { name: "Users and roles" })).toBeVisible();
+      } else {
+        await expect(adminLink).toHaveCount(0);
+        // Typing the address does not help: the server refuses the page for this role.
+        const res = await page.goto("/admin/users");
+        expect(res?.status()).toBe(403);
+        await expect(page.getByRole("heading", { name: "Not for your role" })).toBeVisible();
+      }
+      await page.goto("/account");
+      await page.getByRole("button", { name: "Sign out" }).click();
+      await page.waitForURL(/\/sign-in/);
+      await page.goto("/account");
+      await expect(page).toHaveURL(/\/sign-in/);
+    });
+  }
+
+  test("a wrong password shows the same generic error as an unknown account", async ({ page }) => {
+    await page.goto("/sign-in");
+    await page.getByLabel("E-mail").fill(ACCOUNTS.viewer);
+    await page.getByLabel("Password").fill("not-the-password");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    const wrongPassword = await page.getByRole("alert").innerText();
+    await page.getByLabel("E-mail").fill("nobody@tarnwell.example");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await expect(page.getByRole("alert")).toHaveText(wrongPassword);
+    expect(wrongPassword).toMatch(/Sign-in failed/);
+  });
+
+  test("a disabled user is shut out, including an open session", async ({ browser }) => {
+    const email = `temp-${Date.now()}@tarnwell.example`;
+    const admin = await browser.newPage();
+    await signInPage(admin, ACCOUNTS.admin);
+    await admin.goto("/admin/users");
+    await admin.getByLabel("Name").fill("Temporary Tester");
+    await admin.getByLabel("E-mail").fill(email);
+    await admin.getByLabel("Role", { exact: true }).selectOption("viewer");
+    await admin.getByLabel("First password").fill("temporary-password-1");
+    await admin.getByRole("button", { name: "Create user" }).click();
+    await expect(admin.getByRole("cell", { name: email })).toBeVisible();
+
+    const user = await browser.newPage();
+    await signInPage(user, email, "temporary-password-1");
+    await expect(user.getByRole("heading", { name: "Dashboard" })).toBeVisible();
+
+    const row = admin.getByRole("row").filter({ hasText: email });
+    await row.getByRole("button", { name: /Disable/ }).click();
+    await expect(row.getByText("disabled")).toBeVisible();
+
+    // The open session stops working at its next request.
+    await user.goto("/account");
+    await expect(user).toHaveURL(/\/sign-in/);
+    // And signing in again fails with the generic message.
+    await user.getByLabel("E-mail").fill(email);
+    await user.getByLabel("Password").fill("temporary-password-1");
+    await user.getByRole("button", { name: "Sign in" }).click();
+    await expect(user.getByRole("alert")).toContainText("Sign-in failed");
+  });
+});
