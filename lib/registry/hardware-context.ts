@@ -1,0 +1,75 @@
+import type { BoardRevision as EngineBoardRevision, HardwareContext, MotorComponent, PumpComponent } from "@/lib/engine";
+
+/** The registry's fields the engine needs; plain objects, so client and server can both map them. */
+export interface ComponentFields {
+  name: string;
+  kind: "fan" | "pump";
+  minDutyPct: number;
+  rpmAtMinDuty: number;
+  maxRpm: number;
+  tachPulsesPerRev: number;
+  refSoundDbA: number;
+  refRpm: number;
+  soundExponent: number;
+  flowAtMaxRpmLpm: number | null;
+}
+
+export interface CoolerFields {
+  name: string;
+  fanCount: number;
+  radiatorKPerWAtMinFan: number;
+  radiatorKPerWAtMaxFan: number;
+}
+
+export interface RevisionFields {
+  revision: string;
+  memoryBytes: number;
+  baseAddress: number;
+  slotCount: number;
+  maxPointsPerCurve: number;
+  pwmFrequencyHz: number;
+  tachPulsesPerRev: number;
+}
+
+export function toEngineComponent(c: ComponentFields): MotorComponent {
+  return {
+    name: c.name,
+    kind: c.kind,
+    minDutyPct: c.minDutyPct,
+    rpmAtMinDuty: c.rpmAtMinDuty,
+    maxRpm: c.maxRpm,
+    tachPulsesPerRev: c.tachPulsesPerRev,
+    soundRefDbA: c.refSoundDbA,
+    soundRefRpm: c.refRpm,
+    soundExponent: c.soundExponent,
+    ...(c.flowAtMaxRpmLpm !== null ? { flowAtMaxRpmLpm: c.flowAtMaxRpmLpm } : {}),
+  };
+}
+
+export function toEngineRevision(r: RevisionFields): EngineBoardRevision {
+  return {
+    version: r.revision,
+    memoryBytes: r.memoryBytes,
+    baseAddress: r.baseAddress,
+    slotCount: r.slotCount,
+    maxPointsPerCurve: r.maxPointsPerCurve,
+    pwmFrequencyHz: r.pwmFrequencyHz,
+    tachPulsesPerRev: r.tachPulsesPerRev,
+  };
+}
+
+/** The hardware a profile is evaluated against: a cooler model's parts on one board revision. */
+export function toHardwareContext(input: { cooler: CoolerFields; fan: ComponentFields; pump: ComponentFields; revision: RevisionFields }): HardwareContext {
+  const pump = toEngineComponent(input.pump);
+  return {
+    name: `${input.cooler.name} on board ${input.revision.revision}`,
+    fan: toEngineComponent(input.fan),
+    fanCount: input.cooler.fanCount,
+    pump: { ...pump, kind: "pump", flowAtMaxRpmLpm: input.pump.flowAtMaxRpmLpm ?? 1 } as PumpComponent,
+    radiator: {
+      thermalResistanceAtMinFanKPerW: input.cooler.radiatorKPerWAtMinFan,
+      thermalResistanceAtMaxFanKPerW: input.cooler.radiatorKPerWAtMaxFan,
+    },
+    boardRevision: toEngineRevision(input.revision),
+  };
+}

@@ -1,0 +1,58 @@
+import { afterAll, describe, expect, it } from "vitest";
+import { sql } from "drizzle-orm";
+import { closeDb, demoActor, getDb } from "./support/db";
+import { createToken, findActiveToken, revokeToken } from "@/db/tokens";
+import { updateUser } from "@/db/users";
+import { recordFailure, secondsLocked, clearFailures } from "@/db/throttle";
+import { auditEvents, users } from "@/db/schema";
+import { eq } from "drizzle-orm";
+
+afterAll(closeDb);
+
+describe("foundation data rules", () => {
+  it("writes the audit event in the same transaction as the change", async () => {
+    const db = getDb();
+    const admin = await demoActor("admin@tarnwell.example");
+    const token = await createToken(db, admin, { userId: admin.userId, name: "it", tokenHash: `h-${Date.now()}`, tokenPrefix: "lk_test", expiresAt: new Date(Date.now() + 86_400_000) });
+    const events = await db.select().from(auditEvents).where(eq(auditEvents.entityId, token.id));
+    expect(events.map((e) => e.action)).toEqual(["token.create"]);
+    await revokeToken(db, admin, { id: token.id, userId: admin.userId });
+    expect(await findActiveToken(db, { tokenHash: `h-${token.id}` })).toBeUndefined();
+  });
+
+  it("refuses to change or delete audit events", async () => {
+    const db = getDb();
+    await expect(db.execute(sql`update audit_events set action = 'tampered'`)).rejects.toThrow(/immutable/);
+    await expect(db.execute(sql`delete from audit_events`)).rejects.toThrow(/immutable/);
+  });
+
+  it("locks an account after five failed sign-ins and clears on success", async () => {
+    const db = getDb();
+    const key = `acct:throttle-${Date.now()}@tarnwell.example`;
+    for (let i = 0; i < 4; i++) await recordFailure(db, { keys: [key] });
+    expect(await secondsLocked(db, { keys: [key] })).toBe(0);
+    await recordFailure(db, { keys: [key] });
+    expect(await secondsLocked(db, { keys: [key] })).toBeGreaterThan(800);
+    await clearFailures(db, { keys: [key] });
+    expect(await secondsLocked(db, { keys: [key] })).toBe(0);
+  });
+
+  it("ends sessions of a disabled user by bumping the session epoch", async () => {
+    const db = getDb();
+    const admin = await demoActor("admin@tarnwell.example");
+    const [victim] = await db
+      .insert(users)
+      .values({ email: `epoch-${Date.now()}@tarnwell.example`, name: "Epoch", role: "viewer", passwordHash: "x" })
+      .returning();
+    const after = await updateUser(db, admin, { id: victim!.id, disabled: true });
+    expect(after.disabledAt).not.toBeNull();
+    const [row] = await db.select().from(users).where(eq(users.id, victim!.id));
+    expect(row!.sessionEpoch).toBe(victim!.sessionEpoch + 1);
+  });
+
+  it("refuses an admin disabling themself", async () => {
+    const db = getDb();
+    const admin = await demoActor("admin@tarnwell.example");
+    await expect(updateUser(db, admin, { id: admin.userId, disabled: true })).rejects.toThrow(/cannot disable yourself/);
+  });
+});
