@@ -1,9 +1,11 @@
 // Seeds the invented demo scenario. Idempotent: running it twice changes nothing.
+import "./server-only-shim";
 import { drizzle } from "drizzle-orm/node-postgres";
 import { Pool } from "pg";
 import * as schema from "../schema";
 import { seedUsers } from "./users";
 import { seedHardware } from "./hardware";
+import { seedRegistry } from "./registry";
 
 const url =
   process.env.DATABASE_URL ??
@@ -15,6 +17,7 @@ export async function seedDemo(connectionString = url): Promise<void> {
   try {
     await seedUsers(db);
     await seedHardware(db);
+    await seedRegistry(db);
   } finally {
     await pool.end();
   }

@@ -1,0 +1,11 @@
+import { apiRoute } from "@/lib/server/api";
+import { createComponent, listComponents } from "@/lib/api/operations/registry";
+import { getDb } from "@/db/client";
+import * as components from "@/db/components";
+import { auditActor } from "@/lib/server/actor";
+
+export const GET = apiRoute(listComponents, async ({ query }) => components.listComponents(getDb(), query));
+
+export const POST = apiRoute(createComponent, async ({ actor, body, requestId }) => ({
+  component: await components.createComponent(getDb(), auditActor(actor, requestId), body),
+}));

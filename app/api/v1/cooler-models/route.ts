@@ -1,0 +1,11 @@
+import { apiRoute } from "@/lib/server/api";
+import { createCoolerModel, listCoolerModels } from "@/lib/api/operations/registry";
+import { getDb } from "@/db/client";
+import * as coolers from "@/db/cooler-models";
+import { auditActor } from "@/lib/server/actor";
+
+export const GET = apiRoute(listCoolerModels, async ({ query }) => coolers.listCoolerModels(getDb(), query));
+
+export const POST = apiRoute(createCoolerModel, async ({ actor, body, requestId }) => ({
+  coolerModel: await coolers.createCoolerModel(getDb(), auditActor(actor, requestId), body),
+}));

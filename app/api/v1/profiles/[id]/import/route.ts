@@ -1,0 +1,25 @@
+import { apiRoute } from "@/lib/server/api";
+import { importDraft } from "@/lib/api/operations/profiles";
+import { AppError } from "@/lib/api/errors";
+import { getDb } from "@/db/client";
+import * as profiles from "@/db/profiles";
+import { auditActor } from "@/lib/server/actor";
+import { readTextBody } from "@/lib/server/read-text";
+import { validateProfileText } from "@/lib/engine";
+import { documentText } from "@/lib/registry/starter-profile";
+
+export const POST = apiRoute(importDraft, async ({ actor, params, req, requestId }) => {
+  const db = getDb();
+  if (!(await profiles.getProfileRow(db, { id: params.id }))) throw new AppError("not_found", "No such profile.");
+  const text = await readTextBody(req, importDraft.rawBody!);
+  // Board limits are checked in the editor against the chosen revision; here the document must stand on its own.
+  const result = validateProfileText(text);
+  if (!result.ok || !result.value) {
+    const issues = result.issues.filter((i) => i.severity === "error");
+    throw new AppError("validation_failed", "The file is not a valid cooling profile; fix the listed problems and upload it again.", {
+      issues: issues.map((i) => ({ path: i.range ? `${i.path} (line ${i.range.start.line})` : i.path, message: i.message })),
+    });
+  }
+  const saved = await profiles.saveDraft(db, auditActor(actor, requestId), { id: params.id, text: documentText(result.value) });
+  return { ...saved, warnings: result.issues.length };
+});

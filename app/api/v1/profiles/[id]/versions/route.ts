@@ -1,0 +1,17 @@
+import { apiRoute } from "@/lib/server/api";
+import { listVersions, publishVersion } from "@/lib/api/operations/profiles";
+import { AppError } from "@/lib/api/errors";
+import { getDb } from "@/db/client";
+import { getProfileRow, listVersionsOfProfile } from "@/db/profiles";
+import * as versions from "@/db/profile-versions";
+import { auditActor } from "@/lib/server/actor";
+
+export const GET = apiRoute(listVersions, async ({ params }) => {
+  const db = getDb();
+  if (!(await getProfileRow(db, { id: params.id }))) throw new AppError("not_found", "No such profile.");
+  return { items: await listVersionsOfProfile(db, { profileId: params.id }) };
+});
+
+export const POST = apiRoute(publishVersion, async ({ actor, params, body, requestId }) => ({
+  version: await versions.publishVersion(getDb(), { ...auditActor(actor, requestId), userId: actor.userId }, { profileId: params.id, ...body }),
+}));

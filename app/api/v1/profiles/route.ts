@@ -1,0 +1,14 @@
+import { apiRoute } from "@/lib/server/api";
+import { createProfile, listProfiles } from "@/lib/api/operations/profiles";
+import { getDb } from "@/db/client";
+import * as profiles from "@/db/profiles";
+import { auditActor } from "@/lib/server/actor";
+
+export const GET = apiRoute(listProfiles, async ({ query }) => {
+  const page = await profiles.listProfiles(getDb(), query);
+  return { ...page, items: page.items.map((p) => ({ ...p, updatedAt: p.updatedAt.toISOString() })) };
+});
+
+export const POST = apiRoute(createProfile, async ({ actor, body, requestId }) => ({
+  profile: await profiles.createProfile(getDb(), { ...auditActor(actor, requestId), userId: actor.userId }, body),
+}));

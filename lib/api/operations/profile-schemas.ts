@@ -1,0 +1,120 @@
+import { z } from "zod";
+import { isValidVersion } from "@/lib/engine";
+import { boardRangeSchema } from "./registry-schemas";
+
+/** Largest profile document accepted anywhere (draft, import, publish), bytes. */
+export const MAX_PROFILE_BYTES = 256 * 1024;
+
+export const createProfileBody = z.strictObject({
+  coolerModelId: z.uuid("Pick a cooler model."),
+  name: z.string().trim().min(1, "Enter a name.").max(80, "Use at most 80 characters."),
+  description: z.string().trim().max(500, "Use at most 500 characters."),
+});
+export type CreateProfileBody = z.infer<typeof createProfileBody>;
+
+export const saveDraftBody = z.strictObject({
+  text: z.string().max(MAX_PROFILE_BYTES, "The draft is larger than 256 KiB."),
+});
+export type SaveDraftBody = z.infer<typeof saveDraftBody>;
+
+export const publishBody = z.strictObject({
+  version: z
+    .string()
+    .trim()
+    .refine((v) => isValidVersion(v) && /^\d+\.\d+\.\d+$/.test(v), "Use a version such as 1.2.0 (no pre-release suffix; the board stores three numbers)."),
+  changelog: z.string().trim().min(1, "Say what changed.").max(2000, "Use at most 2,000 characters."),
+  boardRange: boardRangeSchema,
+  text: z.string().min(1, "The document is empty.").max(MAX_PROFILE_BYTES, "The document is larger than 256 KiB."),
+});
+export type PublishBody = z.infer<typeof publishBody>;
+
+export const profileSummaryView = z.object({
+  id: z.string(),
+  name: z.string(),
+  description: z.string(),
+  coolerModelId: z.string(),
+  coolerModelName: z.string(),
+  ownerName: z.string(),
+  latestVersion: z.string().nullable(),
+  versionCount: z.number(),
+  updatedAt: z.string(),
+});
+export type ProfileSummaryView = z.infer<typeof profileSummaryView>;
+
+export const versionView = z.object({
+  id: z.string(),
+  profileId: z.string(),
+  version: z.string(),
+  boardRange: z.string(),
+  encodedBytes: z.number(),
+  crc32: z.number(),
+  contentHash: z.string(),
+  changelog: z.string(),
+  authorName: z.string(),
+  createdAt: z.string(),
+});
+export type VersionView = z.infer<typeof versionView>;
+
+export const versionWithDocumentView = versionView.extend({ document: z.unknown() });
+export type VersionWithDocumentView = z.infer<typeof versionWithDocumentView>;
+
+const componentFields = z.object({
+  name: z.string(),
+  kind: z.enum(["fan", "pump"]),
+  minDutyPct: z.number(),
+  rpmAtMinDuty: z.number(),
+  maxRpm: z.number(),
+  tachPulsesPerRev: z.number(),
+  refSoundDbA: z.number(),
+  refRpm: z.number(),
+  soundExponent: z.number(),
+  flowAtMaxRpmLpm: z.number().nullable(),
+});
+
+/** Everything the editor needs in one answer: the profile, its cooler's parts, the board's revisions, the versions. */
+export const profileDetailView = z.object({
+  profile: z.object({
+    id: z.string(),
+    name: z.string(),
+    description: z.string(),
+    ownerName: z.string(),
+    draftText: z.string().nullable(),
+    draftUpdatedAt: z.string().nullable(),
+  }),
+  cooler: z.object({ id: z.string(), name: z.string(), fanCount: z.number(), radiatorKPerWAtMinFan: z.number(), radiatorKPerWAtMaxFan: z.number(), boardModelName: z.string() }),
+  fan: componentFields,
+  pump: componentFields,
+  revisions: z.array(
+    z.object({
+      id: z.string(),
+      revision: z.string(),
+      memoryBytes: z.number(),
+      baseAddress: z.number(),
+      slotCount: z.number(),
+      maxPointsPerCurve: z.number(),
+      pwmFrequencyHz: z.number(),
+      tachPulsesPerRev: z.number(),
+    }),
+  ),
+  versions: z.array(versionView),
+});
+export type ProfileDetailView = z.infer<typeof profileDetailView>;
+
+export const compatibilityCell = z.object({ revisionId: z.string(), ok: z.boolean(), reasons: z.array(z.string()) });
+export const compatibilityView = z.object({
+  revisions: z.array(z.object({ id: z.string(), revision: z.string(), memoryBytes: z.number(), maxPointsPerCurve: z.number() })),
+  rows: z.array(
+    z.object({
+      versionId: z.string(),
+      profileId: z.string(),
+      profileName: z.string(),
+      coolerModelName: z.string(),
+      version: z.string(),
+      boardRange: z.string(),
+      encodedBytes: z.number(),
+      maxPointsPerCurve: z.number(),
+      cells: z.array(compatibilityCell),
+    }),
+  ),
+});
+export type CompatibilityView = z.infer<typeof compatibilityView>;

@@ -1,0 +1,135 @@
+import { z } from "zod";
+import { isValidRange, isValidVersion } from "@/lib/engine";
+
+/** Request and view schemas of the hardware registry; forms use the same ones as the API. */
+
+const num = (label: string) => z.number(`Enter ${label} as a number.`);
+const name = z.string().trim().min(1, "Enter a name.").max(120, "Use at most 120 characters.");
+
+export const componentBody = z
+  .strictObject({
+    kind: z.enum(["fan", "pump"], "Pick fan or pump."),
+    name,
+    minDutyPct: num("the minimum duty").min(0, "At least 0 %.").max(100, "At most 100 %."),
+    rpmAtMinDuty: num("the RPM at minimum duty").int("Whole RPM.").min(1, "At least 1 RPM.").max(20000, "At most 20,000 RPM."),
+    maxRpm: num("the maximum RPM").int("Whole RPM.").min(1, "At least 1 RPM.").max(20000, "At most 20,000 RPM."),
+    tachPulsesPerRev: num("the tach pulses").int("A whole number.").min(1, "At least 1.").max(12, "At most 12."),
+    refSoundDbA: num("the reference sound level").min(0, "At least 0 dB(A).").max(90, "At most 90 dB(A)."),
+    refRpm: num("the reference RPM").int("Whole RPM.").min(1, "At least 1 RPM.").max(20000, "At most 20,000 RPM."),
+    soundExponent: num("the sound exponent").min(10, "At least 10.").max(100, "At most 100."),
+    flowAtMaxRpmLpm: num("the flow").gt(0, "Above 0 L/min.").max(50, "At most 50 L/min.").nullable(),
+  })
+  .refine((c) => c.maxRpm > c.rpmAtMinDuty, { path: ["maxRpm"], message: "The maximum RPM must be above the RPM at minimum duty." })
+  .refine((c) => c.kind !== "pump" || c.flowAtMaxRpmLpm !== null, { path: ["flowAtMaxRpmLpm"], message: "A pump needs its flow at maximum RPM." });
+export type ComponentBody = z.infer<typeof componentBody>;
+
+export const componentView = z.object({
+  id: z.string(),
+  kind: z.enum(["fan", "pump"]),
+  name: z.string(),
+  minDutyPct: z.number(),
+  rpmAtMinDuty: z.number(),
+  maxRpm: z.number(),
+  tachPulsesPerRev: z.number(),
+  refSoundDbA: z.number(),
+  refRpm: z.number(),
+  soundExponent: z.number(),
+  flowAtMaxRpmLpm: z.number().nullable(),
+  createdAt: z.string(),
+});
+export type ComponentView = z.infer<typeof componentView>;
+
+export const coolerModelBody = z
+  .strictObject({
+    name,
+    radiatorMm: num("the radiator length").int("Whole millimetres.").min(60, "At least 60 mm.").max(560, "At most 560 mm."),
+    fanComponentId: z.uuid("Pick a fan."),
+    fanCount: num("the fan count").int("A whole number.").min(1, "At least 1 fan.").max(12, "At most 12 fans."),
+    pumpComponentId: z.uuid("Pick a pump."),
+    boardModelId: z.uuid("Pick a board model."),
+    radiatorKPerWAtMinFan: num("the resistance").gt(0, "Above 0 K/W.").max(5, "At most 5 K/W."),
+    radiatorKPerWAtMaxFan: num("the resistance").gt(0, "Above 0 K/W.").max(5, "At most 5 K/W."),
+  })
+  .refine((c) => c.radiatorKPerWAtMinFan >= c.radiatorKPerWAtMaxFan, {
+    path: ["radiatorKPerWAtMaxFan"],
+    message: "Faster fans cool better: the resistance at maximum fan speed must not exceed the one at minimum.",
+  });
+export type CoolerModelBody = z.infer<typeof coolerModelBody>;
+
+export const coolerModelView = z.object({
+  id: z.string(),
+  name: z.string(),
+  radiatorMm: z.number(),
+  fanComponentId: z.string(),
+  fanName: z.string(),
+  fanCount: z.number(),
+  pumpComponentId: z.string(),
+  pumpName: z.string(),
+  boardModelId: z.string(),
+  boardModelName: z.string(),
+  radiatorKPerWAtMinFan: z.number(),
+  radiatorKPerWAtMaxFan: z.number(),
+  profileCount: z.number(),
+});
+export type CoolerModelView = z.infer<typeof coolerModelView>;
+
+export const boardModelBody = z.strictObject({
+  name,
+  serialPrefix: z.string().trim().regex(/^[A-Z0-9]{2,8}$/, "Use 2–8 capital letters or digits, e.g. TC1."),
+  description: z.string().trim().max(500, "Use at most 500 characters."),
+});
+export type BoardModelBody = z.infer<typeof boardModelBody>;
+
+export const boardRevisionBody = z.strictObject({
+  revision: z.string().trim().refine((v) => isValidVersion(v), "Use a semantic version such as 2.1.0."),
+  memoryBytes: num("the memory size").int("Whole bytes.").min(16, "At least 16 bytes.").max(65535, "At most 65,535 bytes (the bank format's limit)."),
+  baseAddress: num("the base address").int("A whole address.").min(0, "At least 0.").max(0xffffffff, "At most 0xFFFFFFFF."),
+  slotCount: num("the slot count").int("A whole number.").min(1, "At least 1 slot.").max(16, "At most 16 slots."),
+  maxPointsPerCurve: num("the point limit").int("A whole number.").min(2, "At least 2 points.").max(32, "At most 32 points."),
+  pwmFrequencyHz: num("the PWM frequency").int("Whole hertz.").min(100, "At least 100 Hz.").max(100000, "At most 100 kHz."),
+  tachPulsesPerRev: num("the tach pulses").int("A whole number.").min(1, "At least 1.").max(12, "At most 12."),
+  notes: z.string().trim().max(500, "Use at most 500 characters."),
+});
+export type BoardRevisionBody = z.infer<typeof boardRevisionBody>;
+
+export const boardRevisionView = z.object({
+  id: z.string(),
+  boardModelId: z.string(),
+  revision: z.string(),
+  memoryBytes: z.number(),
+  baseAddress: z.number(),
+  slotCount: z.number(),
+  maxPointsPerCurve: z.number(),
+  pwmFrequencyHz: z.number(),
+  tachPulsesPerRev: z.number(),
+  notes: z.string(),
+});
+export type BoardRevisionView = z.infer<typeof boardRevisionView>;
+
+export const boardModelView = z.object({
+  id: z.string(),
+  name: z.string(),
+  serialPrefix: z.string(),
+  description: z.string(),
+  revisions: z.array(boardRevisionView),
+});
+export type BoardModelView = z.infer<typeof boardModelView>;
+
+/** A semver range such as ">=1.1.0 <3.0.0"; validated with the same rules the compatibility check uses. */
+export const boardRangeSchema = z
+  .string()
+  .trim()
+  .min(1, "Enter a board revision range such as >=1.1.0.")
+  .max(200, "Use at most 200 characters.")
+  .refine((v) => isValidRange(v), 'Not a valid version range; write e.g. ">=1.1.0 <3.0.0".');
+
+export const listQuery = <S extends readonly [string, ...string[]]>(sorts: S) =>
+  z.strictObject({
+    q: z.string().trim().max(120).optional(),
+    sort: z.enum(sorts).optional(),
+    dir: z.enum(["asc", "desc"]).default("asc"),
+    page: z.coerce.number().int().min(1).max(100000).default(1),
+    pageSize: z.coerce.number().int().min(1).max(100).default(20),
+  });
+
+export const pageOf = <T extends z.ZodType>(item: T) => z.object({ items: z.array(item), total: z.number(), page: z.number(), pageSize: z.number() });
