@@ -41,12 +41,12 @@ export type { CurveRow, CurveTableOptions } from "../evaluation/curve-table";
 /** L = Lref + k·log10(N/Nref); incoherent sum; n sources +10·log10(n); −20·log10(r). */
 export { levelAtSpeedDb, addLevelsDb, identicalSourcesDb, levelAtDistanceDb } from "../acoustics/levels";
 /** Noise of a cooler (fans × n + pump) at 1 m and at a listener distance. */
-export { coolerNoise, componentLevelDbA } from "../acoustics/cooler-noise";
+export { coolerNoise, coolerTotalDbA1m, prepareCoolerTotal, componentLevelDbA } from "../acoustics/cooler-noise";
 export type { NoiseEstimate } from "../acoustics/cooler-noise";
 
 // ── Thermal ──────────────────────────────────────────────────────────────────
 /** Radiator resistance R(N), linear in N^-0.8 between the min- and max-speed anchors. */
-export { radiatorResistanceKPerW, AIR_SIDE_EXPONENT } from "../thermal/resistance";
+export { radiatorResistanceKPerW, prepareRadiator, AIR_SIDE_EXPONENT } from "../thermal/resistance";
 /** Coolants (water 25 °C, PG 30 %), ΔT = Q/(ṁ·c_p), flow ∝ pump RPM. */
 export { coolantRiseK, pumpFlowLpm, WATER_25C, PROPYLENE_GLYCOL_30, COOLANTS } from "../thermal/coolant";
 export type { Coolant } from "../thermal/coolant";
