@@ -15,6 +15,15 @@ export interface NavGroup {
 export const NAV: NavGroup[] = [
   { label: "Overview", items: [{ href: "/", label: "Dashboard", capability: "read" }] },
   {
+    label: "Registry",
+    items: [
+      { href: "/profiles", label: "Profiles", capability: "read" },
+      { href: "/boards", label: "Boards", capability: "read" },
+      { href: "/cooler-models", label: "Cooler models", capability: "read" },
+      { href: "/components", label: "Components", capability: "read" },
+    ],
+  },
+  {
     label: "Admin",
     items: [
       { href: "/admin/users", label: "Users and roles", capability: "admin" },

@@ -1,0 +1,100 @@
+"use client";
+
+import { useQueries, useQuery } from "@tanstack/react-query";
+import dynamic from "next/dynamic";
+import { usePathname, useRouter, useSearchParams } from "next/navigation";
+import { useMemo } from "react";
+import { apiFetch } from "@/lib/api/client";
+import type { AppError } from "@/lib/api/errors";
+import type { ProfileDetailView, VersionWithDocumentView } from "@/lib/api/operations/profile-schemas";
+import { evaluateCurves, type CoolingProfile } from "@/lib/engine";
+import { toHardwareContext } from "@/lib/registry/hardware-context";
+import { documentText } from "@/lib/registry/starter-profile";
+import { Select } from "@/components/ui/field";
+import { EstimateCaution, Notice } from "@/components/ui/notice";
+import { Panel } from "@/components/ui/panel";
+import type { CompareRow } from "./charts/compare-chart";
+
+const DiffView = dynamic(() => import("./editor/diff-view"), { ssr: false, loading: () => <div className="h-[480px] animate-pulse rounded bg-ink-100" /> });
+const CompareChart = dynamic(() => import("./charts/compare-chart"), { ssr: false, loading: () => <div className="h-80 animate-pulse rounded bg-ink-100" /> });
+
+export function CompareView({ id }: { id: string }) {
+  const sp = useSearchParams();
+  const router = useRouter();
+  const pathname = usePathname();
+  const detail = useQuery({ queryKey: ["profile", id], queryFn: () => apiFetch<ProfileDetailView>(`/api/v1/profiles/${id}`) });
+  const versions = detail.data?.versions ?? [];
+  const a = sp.get("a") ?? versions[1]?.id ?? "";
+  const b = sp.get("b") ?? versions[0]?.id ?? "";
+  const docs = useQueries({
+    queries: [a, b].map((vid) => ({
+      queryKey: ["profile-version", vid],
+      queryFn: () => apiFetch<{ version: VersionWithDocumentView }>(`/api/v1/profile-versions/${vid}`),
+      enabled: Boolean(vid),
+    })),
+  });
+  const [va, vb] = [docs[0]?.data?.version, docs[1]?.data?.version];
+
+  const rows = useMemo<CompareRow[]>(() => {
+    const d = detail.data;
+    const rev = d?.revisions[d.revisions.length - 1];
+    if (!d || !rev || !va || !vb) return [];
+    const hw = toHardwareContext({ cooler: d.cooler, fan: d.fan, pump: d.pump, revision: rev });
+    const opts = { fromC: 20, toC: 70, stepC: 0.5 };
+    try {
+      const ra = evaluateCurves(va.document as CoolingProfile, hw, opts);
+      const rb = evaluateCurves(vb.document as CoolingProfile, hw, opts);
+      return ra.map((r, i) => ({ tempC: r.tempC, pumpA: Math.round(r.pumpRpm), fanA: Math.round(r.fanRpm), pumpB: Math.round(rb[i]?.pumpRpm ?? 0), fanB: Math.round(rb[i]?.fanRpm ?? 0) }));
+    } catch {
+      return [];
+    }
+  }, [detail.data, va, vb]);
+
+  if (detail.isPending) return <div className="h-96 animate-pulse rounded-md bg-white shadow-panel" />;
+  if (detail.isError)
+    return (
+      <Notice tone="fault" role="alert" title="Could not load the profile">
+        {(detail.error as AppError).message} <button className="underline" onClick={() => void detail.refetch()}>Retry</button>
+      </Notice>
+    );
+  if (versions.length < 2) return <Notice title="Nothing to compare">This profile has fewer than two published versions.</Notice>;
+
+  const pick = (key: "a" | "b", value: string) => {
+    const p = new URLSearchParams(sp.toString());
+    p.set("a", a);
+    p.set("b", b);
+    p.set(key, value);
+    router.replace(`${pathname}?${p.toString()}`);
+  };
+
+  return (
+    <div className="space-y-5">
+      <EstimateCaution />
+      <div className="flex flex-wrap gap-4 rounded-md bg-white p-4 shadow-panel">
+        {(["a", "b"] as const).map((key) => (
+          <label key={key} className="text-sm">
+            <span className="mb-1 block font-medium text-ink-800">{key === "a" ? "Left (older)" : "Right (newer)"}</span>
+            <Select value={key === "a" ? a : b} onChange={(e) => pick(key, e.target.value)} className="w-48">
+              {versions.map((v) => <option key={v.id} value={v.id}>{v.version}</option>)}
+            </Select>
+          </label>
+        ))}
+      </div>
+      {docs.some((d) => d.isError) && (
+        <Notice tone="fault" role="alert">
+          Could not load a version. <button className="underline" onClick={() => docs.forEach((d) => void d.refetch())}>Retry</button>
+        </Notice>
+      )}
+      {va && vb && (
+        <>
+          <Panel title={`Curves: ${va.version} (dashed) and ${vb.version} (solid)`}>
+            <CompareChart rows={rows} labelA={va.version} labelB={vb.version} />
+          </Panel>
+          <Panel title={`Text: ${va.version} → ${vb.version}`}>
+            <DiffView original={documentText(va.document)} modified={documentText(vb.document)} />
+          </Panel>
+        </>
+      )}
+    </div>
+  );
+}

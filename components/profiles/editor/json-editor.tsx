@@ -1,0 +1,95 @@
+"use client";
+
+import Editor from "@monaco-editor/react";
+import type * as Monaco from "monaco-editor";
+import { useEffect, useRef } from "react";
+import type { ValidationIssue } from "@/lib/engine";
+import { PROFILE_MODEL_URI, setupMonaco } from "./monaco-setup";
+
+const monaco = setupMonaco();
+
+export interface EditorHandle {
+  /** Moves the cursor to a 1-based line/column and scrolls it to the middle. */
+  reveal(line: number, column: number): void;
+  /** Replaces the text as if typed (undo works); for imports and benchmarks. */
+  setText(text: string): void;
+}
+
+function toMarker(issue: ValidationIssue): Monaco.editor.IMarkerData {
+  const start = issue.range?.start ?? { line: 1, column: 1 };
+  const end = issue.range?.end ?? start;
+  const sameSpot = end.line === start.line && end.column <= start.column;
+  return {
+    severity: issue.severity === "error" ? monaco.MarkerSeverity.Error : monaco.MarkerSeverity.Warning,
+    message: issue.message,
+    code: issue.code,
+    source: "Loopkeeper",
+    startLineNumber: start.line,
+    startColumn: start.column,
+    endLineNumber: end.line,
+    endColumn: sameSpot ? start.column + 1 : end.column,
+  };
+}
+
+/** The profile's JSON in Monaco, with the engine's issues as markers. */
+export default function JsonEditor({
+  value,
+  onChange,
+  issues,
+  readOnly,
+  onReady,
+  label,
+}: {
+  value: string;
+  onChange: (text: string) => void;
+  issues: ValidationIssue[];
+  readOnly: boolean;
+  onReady: (handle: EditorHandle) => void;
+  label: string;
+}) {
+  const editorRef = useRef<Monaco.editor.IStandaloneCodeEditor | null>(null);
+
+  useEffect(() => {
+    const model = editorRef.current?.getModel();
+    if (model) monaco.editor.setModelMarkers(model, "loopkeeper", issues.map(toMarker));
+  }, [issues]);
+
+  return (
+    <Editor
+      height="520px"
+      language="json"
+      path={PROFILE_MODEL_URI}
+      value={value}
+      onChange={(v) => onChange(v ?? "")}
+      options={{
+        readOnly,
+        domReadOnly: readOnly,
+        minimap: { enabled: false },
+        fontSize: 13,
+        tabSize: 2,
+        scrollBeyondLastLine: false,
+        automaticLayout: true,
+        ariaLabel: label,
+        quickSuggestions: { strings: true, other: true, comments: false },
+      }}
+      loading={<div className="h-[520px] animate-pulse rounded bg-ink-100" aria-label="Loading the editor" />}
+      onMount={(editor) => {
+        editorRef.current = editor;
+        const model = editor.getModel();
+        if (model) monaco.editor.setModelMarkers(model, "loopkeeper", issues.map(toMarker));
+        onReady({
+          reveal(line, column) {
+            editor.revealLineInCenter(line);
+            editor.setPosition({ lineNumber: line, column });
+            editor.focus();
+          },
+          setText(text) {
+            const m = editor.getModel();
+            if (!m) return;
+            editor.executeEdits("loopkeeper", [{ range: m.getFullModelRange(), text, forceMoveMarkers: true }]);
+          },
+        });
+      }}
+    />
+  );
+}

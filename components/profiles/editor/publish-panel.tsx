@@ -1,0 +1,83 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useEffect } from "react";
+import { useForm } from "react-hook-form";
+import type { z } from "zod";
+import { apiFetch } from "@/lib/api/client";
+import type { AppError } from "@/lib/api/errors";
+import { publishBody, type VersionView } from "@/lib/api/operations/profile-schemas";
+import type { VersionSuggestion } from "@/lib/engine";
+import { Button } from "@/components/ui/button";
+import { Field, Input, Textarea, describedBy } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
+
+const formSchema = publishBody.omit({ text: true });
+type PublishForm = z.infer<typeof formSchema>;
+
+/** Publish the editor's text as a new immutable version; the server encodes and checks it again. */
+export function PublishPanel({
+  profileId,
+  text,
+  suggestion,
+  defaultRange,
+  blocked,
+}: {
+  profileId: string;
+  text: string;
+  suggestion: VersionSuggestion | null;
+  defaultRange: string;
+  blocked: boolean;
+}) {
+  const qc = useQueryClient();
+  const suggested = suggestion?.version ?? "1.0.0";
+  const form = useForm<PublishForm>({ resolver: zodResolver(formSchema), defaultValues: { version: suggested, changelog: "", boardRange: defaultRange } });
+  const versionDirty = form.formState.dirtyFields.version;
+  useEffect(() => {
+    // Follow the suggestion until the engineer types their own number.
+    if (!versionDirty) form.setValue("version", suggested);
+  }, [suggested, versionDirty, form]);
+  const publish = useMutation({
+    mutationFn: (v: PublishForm) => apiFetch<{ version: VersionView }>(`/api/v1/profiles/${profileId}/versions`, { method: "POST", json: { ...v, text } }),
+    onSuccess: () => {
+      form.reset({ version: suggested, changelog: "", boardRange: form.getValues("boardRange") });
+      void qc.invalidateQueries({ queryKey: ["profile", profileId] });
+    },
+  });
+  const { errors } = form.formState;
+  const err = publish.error as AppError | null;
+  return (
+    <form onSubmit={(e) => void form.handleSubmit((v) => publish.mutate(v))(e)} className="space-y-3" noValidate aria-label="Publish a version">
+      {suggestion && (
+        <p className="text-sm text-ink-700" data-testid="suggestion">
+          Suggested <strong>{suggestion.version}</strong> ({suggestion.bump}): {suggestion.reasons.join("; ")}.
+        </p>
+      )}
+      {!suggestion && <p className="text-sm text-ink-700" data-testid="suggestion">First version: suggested <strong>1.0.0</strong>.</p>}
+      <div className="grid gap-3 sm:grid-cols-2">
+        <Field id="pub-version" label="Version" error={errors.version?.message}>
+          <Input {...describedBy("pub-version", errors.version?.message)} {...form.register("version")} />
+        </Field>
+        <Field id="pub-range" label="Board revision range" hint='Semver range, e.g. ">=1.1.0 <3.0.0".' error={errors.boardRange?.message}>
+          <Input {...describedBy("pub-range", errors.boardRange?.message)} {...form.register("boardRange")} />
+        </Field>
+      </div>
+      <Field id="pub-changelog" label="Changelog" error={errors.changelog?.message}>
+        <Textarea rows={2} {...describedBy("pub-changelog", errors.changelog?.message)} {...form.register("changelog")} />
+      </Field>
+      {err && (
+        <Notice tone="fault" role="alert" title={err.message}>
+          {err.issues && err.issues.length > 0 && (
+            <ul className="list-disc pl-5">
+              {err.issues.map((i, n) => <li key={n}>{i.path && <code className="text-xs">{i.path}</code>} {i.message}</li>)}
+            </ul>
+          )}
+        </Notice>
+      )}
+      {publish.isSuccess && <Notice tone="ok" role="status">Published {publish.data.version.version} ({publish.data.version.encodedBytes} B, CRC-32 0x{publish.data.version.crc32.toString(16).toUpperCase().padStart(8, "0")}).</Notice>}
+      {blocked && <p className="text-sm text-signal-fault">Fix the errors in the problems list before publishing.</p>}
+      <Button type="submit" disabled={publish.isPending || blocked}>Publish version</Button>
+    </form>
+  );
+}

@@ -1,0 +1,166 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import dynamic from "next/dynamic";
+import Link from "next/link";
+import { useEffect, useMemo, useRef, useState } from "react";
+import { apiFetch } from "@/lib/api/client";
+import type { AppError } from "@/lib/api/errors";
+import type { ProfileDetailView, VersionWithDocumentView } from "@/lib/api/operations/profile-schemas";
+import { suggestNextVersion, type CoolingProfile } from "@/lib/engine";
+import { toHardwareContext } from "@/lib/registry/hardware-context";
+import { evaluateEditorText } from "@/lib/registry/editor-evaluation";
+import { Select } from "@/components/ui/field";
+import { EstimateCaution, Notice } from "@/components/ui/notice";
+import { Panel } from "@/components/ui/panel";
+import type { EditorHandle } from "./json-editor";
+import { ImportButton } from "./import-button";
+import { MemoryGauge } from "./memory-gauge";
+import { OperatingPanel } from "./operating-panel";
+import { ProblemsList } from "./problems-list";
+import { PublishPanel } from "./publish-panel";
+import { useAutosave } from "./use-autosave";
+import { VersionHistory } from "./version-history";
+
+// Monaco and recharts are heavy: they load on this route only, in the browser only.
+const JsonEditor = dynamic(() => import("./json-editor"), { ssr: false, loading: () => <div className="h-[520px] animate-pulse rounded bg-ink-100" aria-label="Loading the editor" /> });
+const CurveChart = dynamic(() => import("../charts/curve-chart"), { ssr: false, loading: () => <div className="h-80 animate-pulse rounded bg-ink-100" /> });
+
+declare global {
+  interface Window {
+    /** The editor handle, for the browser benchmark and tests. */
+    __loopkeeperEditor?: EditorHandle;
+  }
+}
+
+export function ProfileWorkspace({ id, canWrite }: { id: string; canWrite: boolean }) {
+  const q = useQuery({ queryKey: ["profile", id], queryFn: () => apiFetch<ProfileDetailView>(`/api/v1/profiles/${id}`) });
+  if (q.isPending) return <div className="h-96 animate-pulse rounded-md bg-white shadow-panel" aria-label="Loading the profile" />;
+  if (q.isError)
+    return (
+      <Notice tone="fault" role="alert" title="Could not load the profile">
+        {(q.error as AppError).message} <button className="underline" onClick={() => void q.refetch()}>Retry</button>
+      </Notice>
+    );
+  return <Workspace detail={q.data} canWrite={canWrite} />;
+}
+
+function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: boolean }) {
+  const { profile, cooler, fan, pump, revisions, versions } = detail;
+  const [text, setText] = useState<string>(() => profile.draftText ?? "{}\n");
+  const [revisionId, setRevisionId] = useState(revisions[revisions.length - 1]?.id ?? "");
+  const editor = useRef<EditorHandle | null>(null);
+  const revision = revisions.find((r) => r.id === revisionId) ?? revisions[revisions.length - 1];
+  const hw = useMemo(() => (revision ? toHardwareContext({ cooler, fan, pump, revision }) : null), [cooler, fan, pump, revision]);
+  const evaluation = useMemo(() => (hw ? evaluateEditorText(text, hw) : null), [text, hw]);
+  const save = useAutosave(profile.id, text, canWrite);
+
+  const latest = versions[0];
+  const latestDoc = useQuery({
+    queryKey: ["profile-version", latest?.id],
+    queryFn: () => apiFetch<{ version: VersionWithDocumentView }>(`/api/v1/profile-versions/${latest!.id}`),
+    enabled: Boolean(latest),
+  });
+  const current = evaluation?.profile;
+  const latestDocument = latestDoc.data?.version.document as CoolingProfile | undefined;
+  const suggestion = useMemo(() => {
+    if (!latest || !latestDocument || !current) return null;
+    return suggestNextVersion(latestDocument, current, latest.version);
+  }, [latest, latestDocument, current]);
+
+  useEffect(() => {
+    // Keystroke → markers and plots committed: measured by `npm run bench:editor`.
+    if (performance.getEntriesByName("lk-edit", "mark").length > 0) {
+      performance.measure("lk-edit-to-update", "lk-edit");
+      performance.clearMarks("lk-edit");
+    }
+  }, [evaluation]);
+
+  const errors = evaluation?.issues.filter((i) => i.severity === "error").length ?? 0;
+  const limits = { fanMinRpm: fan.rpmAtMinDuty, fanMaxRpm: fan.maxRpm, pumpMinRpm: pump.rpmAtMinDuty, pumpMaxRpm: pump.maxRpm };
+
+  return (
+    <div className="space-y-5">
+      <EstimateCaution />
+      <div className="flex flex-wrap items-end gap-4 rounded-md bg-white p-4 shadow-panel">
+        <div className="text-sm">
+          <span className="block font-medium text-ink-800">Cooler model</span>
+          <span data-testid="cooler-name">{cooler.name}</span> <span className="text-ink-600">({cooler.fanCount} × {fan.name}, {pump.name})</span>
+        </div>
+        <label className="text-sm">
+          <span className="mb-1 block font-medium text-ink-800">Board revision ({cooler.boardModelName})</span>
+          <Select value={revision?.id ?? ""} onChange={(e) => setRevisionId(e.target.value)} className="w-64">
+            {revisions.map((r) => (
+              <option key={r.id} value={r.id}>{r.revision} · {r.memoryBytes} B · {r.maxPointsPerCurve} points</option>
+            ))}
+          </Select>
+        </label>
+        <div className="ml-auto flex items-center gap-3 text-sm">
+          {canWrite ? (
+            <>
+              <span role="status" className="text-ink-600" data-testid="save-state">
+                {save.kind === "saving" && "Saving draft…"}
+                {save.kind === "saved" && "Draft saved"}
+                {save.kind === "error" && <span className="text-signal-fault">Draft not saved: {save.message}</span>}
+              </span>
+              <ImportButton profileId={profile.id} onImported={(t) => (editor.current ? editor.current.setText(t) : setText(t))} />
+            </>
+          ) : (
+            <span className="text-ink-600">Read only: your role may not edit profiles.</span>
+          )}
+        </div>
+      </div>
+
+      <div className="grid gap-5 xl:grid-cols-2">
+        <div className="space-y-3">
+          <div className="overflow-hidden rounded-md bg-white shadow-panel">
+            <JsonEditor
+              value={text}
+              readOnly={!canWrite}
+              label={`Profile ${profile.name} JSON`}
+              issues={evaluation?.issues ?? []}
+              onChange={(t) => {
+                performance.mark("lk-edit");
+                setText(t);
+              }}
+              onReady={(h) => {
+                editor.current = h;
+                window.__loopkeeperEditor = h;
+              }}
+            />
+          </div>
+          <ProblemsList issues={evaluation?.issues ?? []} onJump={(line, column) => editor.current?.reveal(line, column)} />
+        </div>
+        <div className="space-y-5">
+          <Panel title="Speeds and sound against liquid temperature">
+            {evaluation && evaluation.rows.length > 0 ? (
+              <CurveChart rows={evaluation.rows} limits={limits} criticalTempC={evaluation.profile?.criticalTempC} />
+            ) : (
+              <p className="text-sm text-ink-600">The plots appear once the document passes the schema.</p>
+            )}
+            <p className="mt-2 text-xs text-ink-600">Solid: as authored. Dashed: as the board runs it after storing in 0.5 °C / 0.5 % steps.</p>
+          </Panel>
+          {evaluation?.profile && hw && (
+            <>
+              <Panel title="Operating point">
+                <OperatingPanel profile={evaluation.profile} hw={hw} />
+              </Panel>
+              <Panel title="Memory">
+                <MemoryGauge profile={evaluation.profile} revisions={revisions} boardRange={latest?.boardRange ?? null} />
+              </Panel>
+            </>
+          )}
+        </div>
+      </div>
+
+      {canWrite && (
+        <Panel title="Publish">
+          <PublishPanel profileId={profile.id} text={text} suggestion={suggestion} defaultRange={latest?.boardRange ?? ">=1.0.0"} blocked={errors > 0 || !evaluation?.profile} />
+        </Panel>
+      )}
+      <Panel title="Version history" actions={versions.length >= 2 ? <Link className="text-sm text-copper-700 underline" href={`/profiles/${profile.id}/compare`}>Compare versions</Link> : undefined}>
+        <VersionHistory profileId={profile.id} versions={versions} />
+      </Panel>
+    </div>
+  );
+}

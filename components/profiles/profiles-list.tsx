@@ -1,0 +1,111 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useMutation, useQuery } from "@tanstack/react-query";
+import type { ColumnDef } from "@tanstack/react-table";
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useForm } from "react-hook-form";
+import { apiFetch } from "@/lib/api/client";
+import type { AppError } from "@/lib/api/errors";
+import { createProfileBody, type CreateProfileBody, type ProfileSummaryView } from "@/lib/api/operations/profile-schemas";
+import type { CoolerModelView } from "@/lib/api/operations/registry-schemas";
+import { Button } from "@/components/ui/button";
+import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
+import { Panel } from "@/components/ui/panel";
+import { Badge } from "@/components/ui/badge";
+import { DataTable, type ServerPage } from "@/components/registry/data-table";
+import { FilterBar } from "@/components/registry/filter-bar";
+import { useListParams } from "@/components/registry/use-list-params";
+
+const columns: ColumnDef<ProfileSummaryView>[] = [
+  {
+    id: "name",
+    accessorKey: "name",
+    header: "Profile",
+    cell: (c) => (
+      <Link className="font-medium text-copper-700 underline" href={`/profiles/${c.row.original.id}`}>
+        {c.row.original.name}
+      </Link>
+    ),
+  },
+  { id: "coolerModel", accessorKey: "coolerModelName", header: "Cooler model" },
+  { id: "latest", header: "Latest version", enableSorting: false, cell: (c) => (c.row.original.latestVersion ? <Badge tone="accent">{c.row.original.latestVersion}</Badge> : <Badge>draft only</Badge>) },
+  { id: "versions", header: "Versions", enableSorting: false, cell: (c) => <span className="tabular-nums">{c.row.original.versionCount}</span> },
+  { id: "owner", header: "Owner", enableSorting: false, cell: (c) => c.row.original.ownerName },
+  { id: "updatedAt", accessorKey: "updatedAt", header: "Updated (UTC)", cell: (c) => <span className="tabular-nums">{c.row.original.updatedAt.slice(0, 16).replace("T", " ")}</span> },
+];
+
+export function ProfilesList({ canWrite }: { canWrite: boolean }) {
+  const list = useListParams(["q", "coolerModelId"]);
+  const coolers = useQuery({ queryKey: ["cooler-models", "all"], queryFn: () => apiFetch<ServerPage<CoolerModelView>>("/api/v1/cooler-models?pageSize=100") });
+  const q = useQuery({ queryKey: ["profiles", list.apiQuery], queryFn: () => apiFetch<ServerPage<ProfileSummaryView>>(`/api/v1/profiles?${list.apiQuery}`) });
+  return (
+    <div className="space-y-5">
+      <Panel title="Profiles">
+        <FilterBar fields={["q", "coolerModelId"]} onApply={list.set}>
+          <label className="text-sm">
+            <span className="mb-1 block font-medium text-ink-800">Name contains</span>
+            <Input name="q" defaultValue={list.sp.get("q") ?? ""} className="w-56" />
+          </label>
+          <label className="text-sm">
+            <span className="mb-1 block font-medium text-ink-800">Cooler model</span>
+            <Select name="coolerModelId" defaultValue={list.sp.get("coolerModelId") ?? ""} className="w-48" key={coolers.data ? "loaded" : "loading"}>
+              <option value="">Any</option>
+              {coolers.data?.items.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
+            </Select>
+          </label>
+        </FilterBar>
+        <DataTable
+          caption="Profiles"
+          columns={columns}
+          data={q.data}
+          isPending={q.isPending}
+          isError={q.isError}
+          onRetry={() => void q.refetch()}
+          sort={list.sort}
+          dir={list.dir}
+          onSort={(sort, dir) => list.set({ sort, dir, page: "" })}
+          page={list.page}
+          onPage={(p) => list.set({ page: String(p) })}
+        />
+      </Panel>
+      {canWrite && <CreateProfileForm coolers={coolers.data?.items ?? []} />}
+    </div>
+  );
+}
+
+function CreateProfileForm({ coolers }: { coolers: CoolerModelView[] }) {
+  const router = useRouter();
+  const form = useForm<CreateProfileBody>({ resolver: zodResolver(createProfileBody), defaultValues: { description: "" } });
+  const create = useMutation({
+    mutationFn: (v: CreateProfileBody) => apiFetch<{ profile: { id: string } }>("/api/v1/profiles", { method: "POST", json: v }),
+    onSuccess: (res) => router.push(`/profiles/${res.profile.id}`),
+  });
+  const { errors } = form.formState;
+  return (
+    <Panel title="Start a profile">
+      <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-3xl gap-3 md:grid-cols-2" noValidate>
+        {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{(create.error as AppError).message}</Notice></div>}
+        <Field id="p-cooler" label="Cooler model" error={errors.coolerModelId?.message}>
+          <Select {...describedBy("p-cooler", errors.coolerModelId?.message)} {...form.register("coolerModelId")}>
+            <option value="">Choose…</option>
+            {coolers.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
+          </Select>
+        </Field>
+        <Field id="p-name" label="Profile name" error={errors.name?.message}>
+          <Input {...describedBy("p-name", errors.name?.message)} {...form.register("name")} />
+        </Field>
+        <div className="md:col-span-2">
+          <Field id="p-desc" label="Description" hint="What the profile is for; shown in the list." error={errors.description?.message}>
+            <Textarea rows={2} {...describedBy("p-desc", errors.description?.message)} {...form.register("description")} />
+          </Field>
+        </div>
+        <div className="md:col-span-2">
+          <Button type="submit" disabled={create.isPending}>Create and open the editor</Button>
+        </div>
+      </form>
+    </Panel>
+  );
+}

@@ -1,0 +1,78 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import Link from "next/link";
+import { apiFetch } from "@/lib/api/client";
+import type { AppError } from "@/lib/api/errors";
+import type { BoardRevisionDetail } from "@/lib/api/operations/registry";
+import { Notice } from "@/components/ui/notice";
+import { Panel } from "@/components/ui/panel";
+import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { CompatibilityMatrix } from "./compatibility-matrix";
+
+export function BoardRevisionView({ id }: { id: string }) {
+  const q = useQuery({ queryKey: ["board-revision", id], queryFn: () => apiFetch<BoardRevisionDetail>(`/api/v1/board-revisions/${id}`) });
+  if (q.isPending) return <Panel title="Board revision"><Table caption="Loading"><tbody><SkeletonRows cols={4} rows={4} /></tbody></Table></Panel>;
+  if (q.isError)
+    return (
+      <Notice tone="fault" role="alert" title="Could not load the board revision">
+        {(q.error as AppError).message} <button className="underline" onClick={() => void q.refetch()}>Retry</button>
+      </Notice>
+    );
+  const { revision: r, boardModelName, compatibility } = q.data;
+  const column = compatibility.revisions.findIndex((x) => x.id === r.id);
+  const compatible = compatibility.rows.filter((row) => row.cells[column]?.ok);
+  const limits: [string, string][] = [
+    ["Profile memory", `${r.memoryBytes} bytes`],
+    ["Base address", `0x${r.baseAddress.toString(16).toUpperCase()}`],
+    ["Profile slots", String(r.slotCount)],
+    ["Points per curve", `at most ${r.maxPointsPerCurve}`],
+    ["PWM frequency", `${r.pwmFrequencyHz} Hz`],
+    ["Tach pulses per revolution", String(r.tachPulsesPerRev)],
+  ];
+  return (
+    <div className="space-y-5">
+      <h2 className="sr-only">{boardModelName} revision {r.revision}</h2>
+      <Panel title="Limits">
+        <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-3">
+          {limits.map(([k, v]) => (
+            <div key={k}>
+              <dt className="text-ink-600">{k}</dt>
+              <dd className="font-medium tabular-nums text-ink-900">{v}</dd>
+            </div>
+          ))}
+        </dl>
+        {r.notes && <p className="mt-3 text-sm text-ink-700">{r.notes}</p>}
+      </Panel>
+      <Panel title={`Profile versions that run on ${r.revision}`}>
+        <Table caption={`Compatible profile versions for revision ${r.revision}`}>
+          <thead>
+            <tr>
+              <Th>Profile</Th>
+              <Th>Version</Th>
+              <Th>Range</Th>
+              <Th>Image / memory</Th>
+            </tr>
+          </thead>
+          <tbody>
+            {compatible.length === 0 && <EmptyRow colSpan={4}>No published version fits this revision.</EmptyRow>}
+            {compatible.map((row) => (
+              <tr key={row.versionId}>
+                <Td>
+                  <Link className="text-copper-700 underline" href={`/profiles/${row.profileId}`}>{row.coolerModelName} · {row.profileName}</Link>
+                </Td>
+                <Td className="tabular-nums">{row.version}</Td>
+                <Td><code className="text-xs">{row.boardRange}</code></Td>
+                <Td className="tabular-nums">{row.encodedBytes} / {r.memoryBytes} B</Td>
+              </tr>
+            ))}
+          </tbody>
+        </Table>
+      </Panel>
+      <Panel title={`Compatibility matrix · ${boardModelName}`}>
+        <p className="mb-3 text-sm text-ink-700">Compatible means the revision satisfies the version&apos;s board range, the bank image fits the revision&apos;s memory, and its curves fit the point limit.</p>
+        <CompatibilityMatrix data={compatibility} highlightRevisionId={r.id} />
+      </Panel>
+    </div>
+  );
+}

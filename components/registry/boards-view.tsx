@@ -1,0 +1,73 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import Link from "next/link";
+import { apiFetch } from "@/lib/api/client";
+import type { BoardModelView } from "@/lib/api/operations/registry-schemas";
+import { Panel } from "@/components/ui/panel";
+import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { BoardModelForm, BoardRevisionForm } from "./board-forms";
+
+const hex = (n: number) => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
+
+export function BoardsView({ canWrite }: { canWrite: boolean }) {
+  const q = useQuery({ queryKey: ["board-models"], queryFn: () => apiFetch<{ items: BoardModelView[] }>("/api/v1/board-models") });
+  return (
+    <div className="space-y-5">
+      {q.isPending && (
+        <Panel title="Board models">
+          <Table caption="Loading board models"><tbody><SkeletonRows cols={6} /></tbody></Table>
+        </Panel>
+      )}
+      {q.isError && (
+        <Panel title="Board models">
+          <p className="text-sm text-ink-700">
+            Could not load the boards. <button className="underline" onClick={() => void q.refetch()}>Retry</button>
+          </p>
+        </Panel>
+      )}
+      {q.data?.items.map((b) => (
+        <Panel key={b.id} title={`${b.name} · serial prefix ${b.serialPrefix}`}>
+          {b.description && <p className="mb-3 text-sm text-ink-700">{b.description}</p>}
+          <Table caption={`Revisions of ${b.name}`}>
+            <thead>
+              <tr>
+                <Th>Revision</Th>
+                <Th>Profile memory</Th>
+                <Th>Base address</Th>
+                <Th>Slots</Th>
+                <Th>Points per curve</Th>
+                <Th>PWM / tach</Th>
+                <Th>Notes</Th>
+              </tr>
+            </thead>
+            <tbody>
+              {b.revisions.length === 0 && <EmptyRow colSpan={7}>No revisions yet.</EmptyRow>}
+              {b.revisions.map((r) => (
+                <tr key={r.id}>
+                  <Td>
+                    <Link className="font-medium text-copper-700 underline" href={`/board-revisions/${r.id}`}>
+                      {r.revision}
+                    </Link>
+                  </Td>
+                  <Td className="tabular-nums">{r.memoryBytes} B</Td>
+                  <Td className="font-mono text-xs">{hex(r.baseAddress)}</Td>
+                  <Td className="tabular-nums">{r.slotCount}</Td>
+                  <Td className="tabular-nums">{r.maxPointsPerCurve}</Td>
+                  <Td className="tabular-nums">{r.pwmFrequencyHz / 1000} kHz · {r.tachPulsesPerRev} p/rev</Td>
+                  <Td className="text-ink-700">{r.notes}</Td>
+                </tr>
+              ))}
+            </tbody>
+          </Table>
+        </Panel>
+      ))}
+      {canWrite && q.data && (
+        <div className="grid gap-5 lg:grid-cols-2">
+          <BoardModelForm />
+          <BoardRevisionForm boardModels={q.data.items} />
+        </div>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,63 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useForm } from "react-hook-form";
+import { apiFetch } from "@/lib/api/client";
+import type { AppError } from "@/lib/api/errors";
+import { componentBody, type ComponentBody } from "@/lib/api/operations/registry-schemas";
+import { Button } from "@/components/ui/button";
+import { Field, Input, Select, describedBy } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
+import { Panel } from "@/components/ui/panel";
+import { NumberField } from "./number-field";
+
+const DEFAULTS: Partial<ComponentBody> = { kind: "fan", tachPulsesPerRev: 2, soundExponent: 50, flowAtMaxRpmLpm: null };
+
+export function ComponentForm() {
+  const qc = useQueryClient();
+  const form = useForm<ComponentBody>({ resolver: zodResolver(componentBody), defaultValues: DEFAULTS });
+  const create = useMutation({
+    mutationFn: (v: ComponentBody) => apiFetch("/api/v1/components", { method: "POST", json: v }),
+    onSuccess: () => {
+      form.reset(DEFAULTS);
+      void qc.invalidateQueries({ queryKey: ["components"] });
+    },
+  });
+  const { errors } = form.formState;
+  const num = (name: keyof ComponentBody) => form.register(name, { setValueAs: (v: string) => (v === "" ? Number.NaN : Number(v)) });
+  return (
+    <Panel title="Add a fan or pump">
+      <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-4xl gap-3 md:grid-cols-3" noValidate>
+        {create.error && <div className="md:col-span-3"><Notice tone="fault" role="alert">{(create.error as AppError).message}</Notice></div>}
+        {create.isSuccess && <div className="md:col-span-3"><Notice tone="ok" role="status">Component added.</Notice></div>}
+        <Field id="c-name" label="Name" error={errors.name?.message}>
+          <Input {...describedBy("c-name", errors.name?.message)} {...form.register("name")} />
+        </Field>
+        <Field id="c-kind" label="Kind" error={errors.kind?.message}>
+          <Select {...describedBy("c-kind", errors.kind?.message)} {...form.register("kind")}>
+            <option value="fan">Fan</option>
+            <option value="pump">Pump</option>
+          </Select>
+        </Field>
+        <NumberField id="c-min" label="Minimum duty (%)" error={errors.minDutyPct?.message} reg={num("minDutyPct")} />
+        <NumberField id="c-rpm-min" label="RPM at minimum duty" error={errors.rpmAtMinDuty?.message} reg={num("rpmAtMinDuty")} />
+        <NumberField id="c-rpm-max" label="Maximum RPM" error={errors.maxRpm?.message} reg={num("maxRpm")} />
+        <NumberField id="c-tach" label="Tach pulses per revolution" error={errors.tachPulsesPerRev?.message} reg={num("tachPulsesPerRev")} />
+        <NumberField id="c-db" label="Reference sound level, dB(A) at 1 m" error={errors.refSoundDbA?.message} reg={num("refSoundDbA")} />
+        <NumberField id="c-ref-rpm" label="Reference RPM" error={errors.refRpm?.message} reg={num("refRpm")} />
+        <NumberField id="c-exp" label="Sound exponent k" hint="50 by the fan laws unless measured." error={errors.soundExponent?.message} reg={num("soundExponent")} />
+        <NumberField
+          id="c-flow"
+          label="Flow at max RPM (L/min)"
+          hint="Pumps only; leave empty for fans."
+          error={errors.flowAtMaxRpmLpm?.message}
+          reg={form.register("flowAtMaxRpmLpm", { setValueAs: (v: string) => (v === "" || v === null ? null : Number(v)) })}
+        />
+        <div className="md:col-span-3">
+          <Button type="submit" disabled={create.isPending}>Add component</Button>
+        </div>
+      </form>
+    </Panel>
+  );
+}

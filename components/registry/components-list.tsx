@@ -1,0 +1,66 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import type { ColumnDef } from "@tanstack/react-table";
+import { apiFetch } from "@/lib/api/client";
+import type { ComponentView } from "@/lib/api/operations/registry-schemas";
+import { Badge } from "@/components/ui/badge";
+import { Input, Select } from "@/components/ui/field";
+import { Panel } from "@/components/ui/panel";
+import { DataTable, type ServerPage } from "./data-table";
+import { FilterBar } from "./filter-bar";
+import { useListParams } from "./use-list-params";
+import { ComponentForm } from "./component-form";
+
+const columns: ColumnDef<ComponentView>[] = [
+  { id: "name", accessorKey: "name", header: "Name", cell: (c) => <span className="font-medium">{c.row.original.name}</span> },
+  { id: "kind", accessorKey: "kind", header: "Kind", cell: (c) => <Badge tone={c.row.original.kind === "pump" ? "info" : "neutral"}>{c.row.original.kind}</Badge> },
+  { id: "minDutyPct", accessorKey: "minDutyPct", header: "Min duty %", cell: (c) => <span className="tabular-nums">{c.row.original.minDutyPct}</span> },
+  { id: "rpm", header: "RPM at min → max", enableSorting: false, cell: (c) => <span className="tabular-nums">{c.row.original.rpmAtMinDuty} → {c.row.original.maxRpm}</span> },
+  { id: "maxRpm", accessorKey: "maxRpm", header: "Max RPM", cell: (c) => <span className="tabular-nums">{c.row.original.maxRpm}</span> },
+  { id: "refSoundDbA", accessorKey: "refSoundDbA", header: "Sound dB(A) @ ref RPM", cell: (c) => <span className="tabular-nums">{c.row.original.refSoundDbA} @ {c.row.original.refRpm}</span> },
+  { id: "tach", header: "Tach pulses/rev", enableSorting: false, cell: (c) => <span className="tabular-nums">{c.row.original.tachPulsesPerRev}</span> },
+  { id: "flow", header: "Flow at max (L/min)", enableSorting: false, cell: (c) => <span className="tabular-nums">{c.row.original.flowAtMaxRpmLpm ?? "—"}</span> },
+];
+
+export function ComponentsList({ canWrite }: { canWrite: boolean }) {
+  const list = useListParams(["q", "kind"]);
+  const q = useQuery({
+    queryKey: ["components", list.apiQuery],
+    queryFn: () => apiFetch<ServerPage<ComponentView>>(`/api/v1/components?${list.apiQuery}`),
+  });
+  return (
+    <div className="space-y-5">
+      <Panel title="Fans and pumps">
+        <FilterBar fields={["q", "kind"]} onApply={list.set}>
+          <label className="text-sm">
+            <span className="mb-1 block font-medium text-ink-800">Name contains</span>
+            <Input name="q" defaultValue={list.sp.get("q") ?? ""} className="w-56" />
+          </label>
+          <label className="text-sm">
+            <span className="mb-1 block font-medium text-ink-800">Kind</span>
+            <Select name="kind" defaultValue={list.sp.get("kind") ?? ""} className="w-32">
+              <option value="">Any</option>
+              <option value="fan">Fan</option>
+              <option value="pump">Pump</option>
+            </Select>
+          </label>
+        </FilterBar>
+        <DataTable
+          caption="Components"
+          columns={columns}
+          data={q.data}
+          isPending={q.isPending}
+          isError={q.isError}
+          onRetry={() => void q.refetch()}
+          sort={list.sort}
+          dir={list.dir}
+          onSort={(sort, dir) => list.set({ sort, dir, page: "" })}
+          page={list.page}
+          onPage={(p) => list.set({ page: String(p) })}
+        />
+      </Panel>
+      {canWrite && <ComponentForm />}
+    </div>
+  );
+}

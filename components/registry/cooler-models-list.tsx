@@ -1,0 +1,71 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import type { ColumnDef } from "@tanstack/react-table";
+import Link from "next/link";
+import { apiFetch } from "@/lib/api/client";
+import type { CoolerModelView } from "@/lib/api/operations/registry-schemas";
+import { Input } from "@/components/ui/field";
+import { Panel } from "@/components/ui/panel";
+import { DataTable, type ServerPage } from "./data-table";
+import { FilterBar } from "./filter-bar";
+import { useListParams } from "./use-list-params";
+import { CoolerModelForm } from "./cooler-model-form";
+
+const columns: ColumnDef<CoolerModelView>[] = [
+  { id: "name", accessorKey: "name", header: "Name", cell: (c) => <span className="font-medium">{c.row.original.name}</span> },
+  { id: "radiatorMm", accessorKey: "radiatorMm", header: "Radiator (mm)", cell: (c) => <span className="tabular-nums">{c.row.original.radiatorMm}</span> },
+  { id: "fanCount", accessorKey: "fanCount", header: "Fans", cell: (c) => <span>{c.row.original.fanCount} × {c.row.original.fanName}</span> },
+  { id: "pump", header: "Pump", enableSorting: false, cell: (c) => c.row.original.pumpName },
+  { id: "board", header: "Board", enableSorting: false, cell: (c) => c.row.original.boardModelName },
+  {
+    id: "resistance",
+    header: "Radiator K/W (min → max fan)",
+    enableSorting: false,
+    cell: (c) => <span className="tabular-nums">{c.row.original.radiatorKPerWAtMinFan} → {c.row.original.radiatorKPerWAtMaxFan}</span>,
+  },
+  {
+    id: "profiles",
+    header: "Profiles",
+    enableSorting: false,
+    cell: (c) => (
+      <Link className="text-copper-700 underline" href={`/profiles?coolerModelId=${c.row.original.id}`}>
+        {c.row.original.profileCount} <span className="sr-only">profiles of {c.row.original.name}</span>
+      </Link>
+    ),
+  },
+];
+
+export function CoolerModelsList({ canWrite }: { canWrite: boolean }) {
+  const list = useListParams(["q"]);
+  const q = useQuery({
+    queryKey: ["cooler-models", list.apiQuery],
+    queryFn: () => apiFetch<ServerPage<CoolerModelView>>(`/api/v1/cooler-models?${list.apiQuery}`),
+  });
+  return (
+    <div className="space-y-5">
+      <Panel title="Cooler models">
+        <FilterBar fields={["q"]} onApply={list.set}>
+          <label className="text-sm">
+            <span className="mb-1 block font-medium text-ink-800">Name contains</span>
+            <Input name="q" defaultValue={list.sp.get("q") ?? ""} className="w-56" />
+          </label>
+        </FilterBar>
+        <DataTable
+          caption="Cooler models"
+          columns={columns}
+          data={q.data}
+          isPending={q.isPending}
+          isError={q.isError}
+          onRetry={() => void q.refetch()}
+          sort={list.sort}
+          dir={list.dir}
+          onSort={(sort, dir) => list.set({ sort, dir, page: "" })}
+          page={list.page}
+          onPage={(p) => list.set({ page: String(p) })}
+        />
+      </Panel>
+      {canWrite && <CoolerModelForm />}
+    </div>
+  );
+}
