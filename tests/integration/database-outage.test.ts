@@ -4,6 +4,8 @@ import { closeDb } from "./support/db";
 import { callRoute, tokenFor } from "./support/http";
 import { GET as health } from "@/app/api/health/route";
 import { GET as getMe } from "@/app/api/v1/me/route";
+import { NextRequest } from "next/server";
+import { proxy } from "@/proxy";
 
 const localCluster = process.env.LOOPKEEPER_LOCAL_CLUSTER === "1";
 
@@ -44,6 +46,12 @@ describe.runIf(localCluster)("PostgreSQL stopped while the app runs", () => {
     expect(api.value.headers.get("retry-after")).toBe("5");
     expect(api.ms).toBeLessThan(5000);
 
+    // Screens answer 503 too, with a page that says what is going on.
+    const page = await timed(() => proxy(new NextRequest("http://127.0.0.1:3000/profiles")));
+    expect(page.value.status).toBe(503);
+    expect(await page.value.text()).toMatch(/cannot reach its database/);
+    expect(page.ms).toBeLessThan(5000);
+
     pg("up");
     let status = 0;
     for (let i = 0; i < 30 && status !== 200; i++) {
@@ -52,5 +60,7 @@ describe.runIf(localCluster)("PostgreSQL stopped while the app runs", () => {
     }
     expect(status).toBe(200);
     expect((await callRoute(getMe, { url: "/api/v1/me", token })).status).toBe(200);
+    // Signed-out visitors of a screen go to sign-in again once the database is back.
+    expect((await proxy(new NextRequest("http://127.0.0.1:3000/profiles"))).status).toBe(307);
   });
 });
