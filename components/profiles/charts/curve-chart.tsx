@@ -13,7 +13,7 @@ export interface MotorLimits {
 /** Pump and fan RPM against liquid temperature, authored and as flashed, with sound on a second axis. */
 export default function CurveChart({ rows, limits, criticalTempC }: { rows: PlotRow[]; limits: MotorLimits; criticalTempC: number | undefined }) {
   return (
-    <figure aria-label="Pump and fan speed and estimated sound against liquid temperature" data-testid="curve-chart" data-rows={rows.length} data-last-fan-rpm={rows[rows.length - 1]?.fanRpm ?? ""}>
+    <figure aria-label="Pump and fan speed and estimated sound against liquid temperature" data-testid="curve-chart" data-rows={rows.length} data-first-pump-rpm={rows[0]?.pumpRpm ?? ""} data-fan-rpm-40c={rows.find((r) => r.tempC === 40)?.fanRpm ?? ""}>
       <ResponsiveContainer width="100%" height={320}>
         <LineChart data={rows} margin={{ top: 8, right: 16, bottom: 16, left: 8 }}>
           <CartesianGrid stroke="#e5e7eb" />

@@ -1,0 +1,117 @@
+import { expect, test, type Page } from "@playwright/test";
+import { ACCOUNTS, signInPage } from "./support/accounts";
+
+interface Doc {
+  pump: { points: { tempC: number; dutyPct: number }[] };
+  fans: { points: { tempC: number; dutyPct: number }[] };
+}
+
+async function setEditorText(page: Page, text: string) {
+  await page.waitForFunction(() => Boolean(window.__loopkeeperEditor));
+  await page.evaluate((t) => window.__loopkeeperEditor!.setText(t), text);
+}
+
+test.describe("profile editor, as an engineer", () => {
+  test("create, see a problem, fix it, publish 1.0.0 and 1.1.0, compare — all requests stay on 127.0.0.1", async ({ page }) => {
+    const offHost: string[] = [];
+    page.on("request", (req) => {
+      const url = new URL(req.url());
+      if ((url.protocol === "http:" || url.protocol === "https:") && url.hostname !== "127.0.0.1") offHost.push(req.url());
+    });
+    await signInPage(page, ACCOUNTS.engineer);
+    await page.goto("/profiles");
+    const name = `Field test ${Date.now()}`;
+    await page.getByLabel("Cooler model", { exact: true }).last().selectOption({ label: "Tarn 360" });
+    await page.getByLabel("Profile name").fill(name);
+    await page.getByRole("button", { name: "Create and open the editor" }).click();
+    await page.waitForURL(/\/profiles\/[0-9a-f-]{36}$/);
+    await expect(page.getByTestId("cooler-name")).toHaveText("Tarn 360");
+    await expect(page.locator(".monaco-editor")).toBeVisible();
+    await expect(page.getByTestId("curve-chart")).toBeVisible();
+
+    // The starter draft, read back through the API, then an invalid pump point.
+    const id = page.url().split("/").pop()!;
+    const detail = (await (await page.request.get(`/api/v1/profiles/${id}`)).json()) as { profile: { draftText: string } };
+    const doc = JSON.parse(detail.profile.draftText) as Doc;
+    doc.pump.points[0]!.dutyPct = 10;
+    await setEditorText(page, `${JSON.stringify(doc, null, 2)}\n`);
+    const problem = page.getByTestId("problems").getByRole("button", { name: /below the pump's minimum duty/ });
+    await expect(problem).toBeVisible();
+    await expect(page.locator(".monaco-editor .squiggly-error").first()).toBeVisible();
+    const chart = page.getByTestId("curve-chart");
+    const pumpRpmBefore = Number(await chart.getAttribute("data-first-pump-rpm"));
+
+    // Jump to the problem and fix it by typing: the cursor lands on the value 10.
+    await problem.click();
+    await page.keyboard.press("Delete");
+    await page.keyboard.press("Delete");
+    await page.keyboard.type("55");
+    await expect(problem).toBeHidden();
+    await expect.poll(async () => Number(await chart.getAttribute("data-first-pump-rpm"))).toBeGreaterThan(pumpRpmBefore);
+    await expect(page.getByTestId("save-state")).toHaveText("Draft saved");
+
+    // Publish 1.0.0.
+    await expect(page.getByTestId("suggestion")).toContainText("1.0.0");
+    await expect(page.getByLabel("Version")).toHaveValue("1.0.0");
+    await page.getByLabel("Changelog").fill("First release from the browser test.");
+    await page.getByRole("button", { name: "Publish version" }).click();
+    await expect(page.getByText(/Published 1\.0\.0/)).toBeVisible();
+
+    // Change a fan point: a curve change suggests a minor bump.
+    const current = (await (await page.request.get(`/api/v1/profiles/${id}`)).json()) as { profile: { draftText: string } };
+    const next = JSON.parse(current.profile.draftText) as Doc;
+    next.fans.points[1]!.dutyPct = Math.min(100, next.fans.points[1]!.dutyPct + 10);
+    const fanBefore = await chart.getAttribute("data-fan-rpm-40c");
+    await setEditorText(page, `${JSON.stringify(next, null, 2)}\n`);
+    await expect.poll(() => chart.getAttribute("data-fan-rpm-40c")).not.toBe(fanBefore);
+    await expect(page.getByTestId("suggestion")).toContainText("1.1.0");
+    await expect(page.getByLabel("Version")).toHaveValue("1.1.0");
+    await page.getByLabel("Changelog").fill("Fans faster at 40 °C.");
+    await page.getByRole("button", { name: "Publish version" }).click();
+    await expect(page.getByText(/Published 1\.1\.0/)).toBeVisible();
+
+    // A second publish of the same number is a clear conflict.
+    await page.getByLabel("Version").fill("1.1.0");
+    await page.getByLabel("Changelog").fill("again");
+    await page.getByRole("button", { name: "Publish version" }).click();
+    await expect(page.getByRole("alert").filter({ hasText: /not greater than 1\.1\.0/ })).toBeVisible();
+
+    // Compare the two versions.
+    await page.getByRole("link", { name: "Compare with 1.0.0" }).click();
+    await page.waitForURL(/\/compare\?a=.*&b=/);
+    await expect(page.getByTestId("compare-chart")).toBeVisible();
+    await expect(page.getByTestId("diff-view").locator(".monaco-diff-editor")).toBeVisible();
+
+    expect(offHost, "requests that left 127.0.0.1").toEqual([]);
+  });
+});
+
+test.describe("registry, as a viewer", () => {
+  test("pages are read-only and the write routes answer 403", async ({ page }) => {
+    await signInPage(page, ACCOUNTS.viewer);
+    const list = (await (await page.request.get("/api/v1/profiles?q=Hush")).json()) as { items: { id: string; name: string }[] };
+    const hush = list.items.find((p) => p.name === "Hush")!;
+    await page.goto(`/profiles/${hush.id}`);
+    await expect(page.locator(".monaco-editor")).toBeVisible();
+    await expect(page.getByText("Read only: your role may not edit profiles.")).toBeVisible();
+    await expect(page.getByRole("button", { name: "Publish version" })).toHaveCount(0);
+    await expect(page.getByText("Import .json")).toHaveCount(0);
+
+    await page.goto("/profiles");
+    await expect(page.getByRole("link", { name: "Hush" })).toBeVisible();
+    await expect(page.getByRole("button", { name: "Create and open the editor" })).toHaveCount(0);
+
+    const text = `${JSON.stringify({ formatVersion: 1 })}\n`;
+    expect((await page.request.put(`/api/v1/profiles/${hush.id}/draft`, { data: { text } })).status()).toBe(403);
+    expect((await page.request.post(`/api/v1/profiles/${hush.id}/versions`, { data: { version: "9.0.0", changelog: "x", boardRange: ">=1.0.0", text } })).status()).toBe(403);
+    expect((await page.request.post("/api/v1/profiles", { data: { coolerModelId: "00000000-0000-4000-8000-000000000000", name: "x", description: "" } })).status()).toBe(403);
+  });
+
+  test("the board revision page shows why a version does not fit", async ({ page }) => {
+    await signInPage(page, ACCOUNTS.viewer);
+    await page.goto("/boards");
+    await page.getByRole("link", { name: "0.9.0" }).click();
+    await expect(page.getByText(/99 bytes but the revision has 96/).first()).toBeVisible();
+    await expect(page.getByRole("button", { name: "Add revision" })).toHaveCount(0);
+  });
+});
