@@ -52,7 +52,7 @@ test.describe("profile editor, as an engineer", () => {
 
     // Publish 1.0.0.
     await expect(page.getByTestId("suggestion")).toContainText("1.0.0");
-    await expect(page.getByLabel("Version")).toHaveValue("1.0.0");
+    await expect(page.getByLabel("Version", { exact: true })).toHaveValue("1.0.0");
     await page.getByLabel("Changelog").fill("First release from the browser test.");
     await page.getByRole("button", { name: "Publish version" }).click();
     await expect(page.getByText(/Published 1\.0\.0/)).toBeVisible();
@@ -65,13 +65,14 @@ test.describe("profile editor, as an engineer", () => {
     await setEditorText(page, `${JSON.stringify(next, null, 2)}\n`);
     await expect.poll(() => chart.getAttribute("data-fan-rpm-40c")).not.toBe(fanBefore);
     await expect(page.getByTestId("suggestion")).toContainText("1.1.0");
-    await expect(page.getByLabel("Version")).toHaveValue("1.1.0");
+    await expect(page.getByLabel("Version", { exact: true })).toHaveValue("1.1.0");
     await page.getByLabel("Changelog").fill("Fans faster at 40 °C.");
     await page.getByRole("button", { name: "Publish version" }).click();
     await expect(page.getByText(/Published 1\.1\.0/)).toBeVisible();
 
     // A second publish of the same number is a clear conflict.
-    await page.getByLabel("Version").fill("1.1.0");
+    await expect(page.getByTestId("suggestion")).toContainText("1.1.1");
+    await page.getByLabel("Version", { exact: true }).fill("1.1.0");
     await page.getByLabel("Changelog").fill("again");
     await page.getByRole("button", { name: "Publish version" }).click();
     await expect(page.getByRole("alert").filter({ hasText: /not greater than 1\.1\.0/ })).toBeVisible();

@@ -2,7 +2,7 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { useEffect } from "react";
+import { useEffect, useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { apiFetch } from "@/lib/api/client";
@@ -33,15 +33,16 @@ export function PublishPanel({
   const qc = useQueryClient();
   const suggested = suggestion?.version ?? "1.0.0";
   const form = useForm<PublishForm>({ resolver: zodResolver(formSchema), defaultValues: { version: suggested, changelog: "", boardRange: defaultRange } });
-  const versionDirty = form.formState.dirtyFields.version;
+  // Follow the suggestion until the engineer types their own number.
+  const [followSuggestion, setFollowSuggestion] = useState(true);
   useEffect(() => {
-    // Follow the suggestion until the engineer types their own number.
-    if (!versionDirty) form.setValue("version", suggested);
-  }, [suggested, versionDirty, form]);
+    if (followSuggestion) form.setValue("version", suggested);
+  }, [suggested, followSuggestion, form]);
   const publish = useMutation({
     mutationFn: (v: PublishForm) => apiFetch<{ version: VersionView }>(`/api/v1/profiles/${profileId}/versions`, { method: "POST", json: { ...v, text } }),
     onSuccess: () => {
       form.reset({ version: suggested, changelog: "", boardRange: form.getValues("boardRange") });
+      setFollowSuggestion(true);
       void qc.invalidateQueries({ queryKey: ["profile", profileId] });
     },
   });
@@ -57,7 +58,7 @@ export function PublishPanel({
       {!suggestion && <p className="text-sm text-ink-700" data-testid="suggestion">First version: suggested <strong>1.0.0</strong>.</p>}
       <div className="grid gap-3 sm:grid-cols-2">
         <Field id="pub-version" label="Version" error={errors.version?.message}>
-          <Input {...describedBy("pub-version", errors.version?.message)} {...form.register("version")} />
+          <Input {...describedBy("pub-version", errors.version?.message)} {...form.register("version", { onChange: () => setFollowSuggestion(false) })} />
         </Field>
         <Field id="pub-range" label="Board revision range" hint='Semver range, e.g. ">=1.1.0 <3.0.0".' error={errors.boardRange?.message}>
           <Input {...describedBy("pub-range", errors.boardRange?.message)} {...form.register("boardRange")} />
