@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { isValidVersion } from "@/lib/engine";
+import { isValidVersion } from "@/lib/versioning/semver-helpers";
 import { boardRangeSchema } from "./registry-schemas";
 
 /** Largest profile document accepted anywhere (draft, import, publish), bytes. */

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { isValidRange, isValidVersion } from "@/lib/engine";
+import { isValidRange, isValidVersion } from "@/lib/versioning/semver-helpers";
 
 /** Request and view schemas of the hardware registry; forms use the same ones as the API. */
 
