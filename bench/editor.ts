@@ -89,11 +89,12 @@ async function main() {
       const next = structuredClone(doc);
       next.fans.points[8]!.dutyPct += i % 2 === 0 ? 0.5 : 0;
       const text = `${JSON.stringify(next, null, 2)}\n`;
-      const ms = await page.evaluate(async (t) => {
+      // A string, not a function: the bundler's helper names do not exist in the page.
+      const ms = (await page.evaluate(`(async (t) => {
         performance.clearMeasures("lk-edit-to-update");
         const start = performance.now();
-        window.__loopkeeperEditor!.setText(t);
-        const entry = await new Promise<PerformanceEntry>((resolve) => {
+        window.__loopkeeperEditor.setText(t);
+        const entry = await new Promise((resolve) => {
           const poll = () => {
             const found = performance.getEntriesByName("lk-edit-to-update", "measure")[0];
             if (found) resolve(found);
@@ -102,7 +103,7 @@ async function main() {
           poll();
         });
         return entry.startTime + entry.duration - start;
-      }, text);
+      })(${JSON.stringify(text)})`)) as number;
       if (i >= WARMUP) samples.push(ms);
     }
     const sorted = [...samples].sort((a, b) => a - b);
