@@ -90,7 +90,7 @@ async function main() {
       next.fans.points[8]!.dutyPct += i % 2 === 0 ? 0.5 : 0;
       const text = `${JSON.stringify(next, null, 2)}\n`;
       // A string, not a function: the bundler's helper names do not exist in the page.
-      const ms = (await page.evaluate(`(async (t) => {
+      const ms = await page.evaluate<number>(`(async (t) => {
         performance.clearMeasures("lk-edit-to-update");
         const start = performance.now();
         window.__loopkeeperEditor.setText(t);
@@ -103,7 +103,7 @@ async function main() {
           poll();
         });
         return entry.startTime + entry.duration - start;
-      })(${JSON.stringify(text)})`)) as number;
+      })(${JSON.stringify(text)})`);
       if (i >= WARMUP) samples.push(ms);
     }
     const sorted = [...samples].sort((a, b) => a - b);
