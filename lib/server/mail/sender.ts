@@ -40,20 +40,24 @@ export async function deliverDueMail(opts: { db?: Database; smtp?: SmtpSettings;
   return counts;
 }
 
-const state = globalThis as unknown as { loopkeeperMailRunning?: boolean; loopkeeperMailTimer?: NodeJS.Timeout };
+const state = globalThis as unknown as { loopkeeperMailPass?: Promise<void>; loopkeeperMailTimer?: NodeJS.Timeout };
 
 /** Runs one delivery pass in the background unless one is already running in this process. */
 export function kickMailSender(): void {
-  if (state.loopkeeperMailRunning) return;
-  state.loopkeeperMailRunning = true;
-  deliverDueMail()
+  if (state.loopkeeperMailPass) return;
+  state.loopkeeperMailPass = deliverDueMail()
     .then((c) => {
       if (c.sent || c.retry || c.failed) logger.info({ ...c }, "mail delivery pass");
     })
     .catch((err: unknown) => logger.error({ err: err instanceof Error ? err.message : String(err) }, "mail delivery pass failed"))
     .finally(() => {
-      state.loopkeeperMailRunning = false;
+      state.loopkeeperMailPass = undefined;
     });
+}
+
+/** Resolves when this process's background pass (if any) has finished. */
+export async function mailSenderIdle(): Promise<void> {
+  await state.loopkeeperMailPass;
 }
 
 /** Polls the outbox every few seconds; started once per server process from instrumentation. */
