@@ -4,7 +4,7 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery } from "@tanstack/react-query";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { apiFetch } from "@/lib/api/client";
 import type { AppError } from "@/lib/api/errors";
 import { createBuildBody, type BuildOptions, type CreateBuildBody, type UploadView } from "@/lib/api/operations/builds";
@@ -24,7 +24,7 @@ export function NewBuildForm() {
   const [file, setFile] = useState<File | null>(null);
   const [fileError, setFileError] = useState<string>();
   const form = useForm<FormValues>({ resolver: zodResolver(formSchema), defaultValues: { version: "", revisionRange: "", slots: [] } });
-  const boardModelId = form.watch("boardModelId");
+  const boardModelId = useWatch({ control: form.control, name: "boardModelId" });
   const options = useQuery({
     queryKey: ["build-options", boardModelId ?? ""],
     queryFn: () => apiFetch<BuildOptions>(`/api/v1/builds/options${boardModelId ? `?boardModelId=${boardModelId}` : ""}`),

@@ -36,7 +36,7 @@ const BUCKET = "loopkeeper-test";
 
 beforeAll(async () => {
   s3rver = new S3rver({ address: "127.0.0.1", port: 0, silent: true, directory: s3Dir });
-  const addr = (await s3rver.run()) as AddressInfo;
+  const addr: AddressInfo = await s3rver.run();
   s3Endpoint = `http://127.0.0.1:${addr.port}`;
 });
 
