@@ -1,6 +1,9 @@
 // Local stand-ins for hosted services, started beside the app on loopback.
 // Mail: a fake SMTP server that stores every message it receives in local_mailbox,
 // where admins read it on /admin/mailbox.
+import { spawn } from "node:child_process";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
 import pg from "pg";
 import { SMTPServer } from "smtp-server";
 import { log } from "./log.mjs";
@@ -56,16 +59,41 @@ export async function startFakeSmtp({ databaseUrl, port }) {
   };
 }
 
+/** Runs scripts/fake-smtp.mjs as a child process on `port` (0 = any free port); resolves with the port it got. */
+function spawnFakeSmtp(env, port) {
+  const child = spawn(process.execPath, [path.join(path.dirname(fileURLToPath(import.meta.url)), "fake-smtp.mjs")], {
+    env: { ...env, SMTP_PORT: String(port) },
+    stdio: ["ignore", "pipe", "pipe"],
+  });
+  return new Promise((resolve, reject) => {
+    let out = "";
+    let err = "";
+    child.stderr.on("data", (c) => (err += c));
+    child.stdout.on("data", (c) => {
+      out += c;
+      const line = out.split("\n")[0];
+      if (out.includes("\n")) resolve({ child, port: JSON.parse(line).port });
+    });
+    child.once("exit", (code) => reject(Object.assign(new Error(`fake SMTP server exited (${code}): ${err.trim()}`), { code: /EADDRINUSE/.test(err) ? "EADDRINUSE" : undefined })));
+  });
+}
+
 export async function startFakes(env) {
   const wanted = Number(env.SMTP_PORT || 2525);
   let smtp;
   try {
-    smtp = await startFakeSmtp({ databaseUrl: env.DATABASE_URL, port: wanted });
+    smtp = await spawnFakeSmtp(env, wanted);
   } catch (err) {
     if (err?.code !== "EADDRINUSE") throw err;
     // Another checkout holds the usual port: take a free one and tell the app.
-    smtp = await startFakeSmtp({ databaseUrl: env.DATABASE_URL, port: 0 });
+    smtp = await spawnFakeSmtp(env, 0);
   }
   log(`Fake SMTP server on 127.0.0.1:${smtp.port} (messages appear on /admin/mailbox).`);
-  return { env: { SMTP_HOST: "127.0.0.1", SMTP_PORT: String(smtp.port) }, stop: smtp.stop };
+  const stop = async () => {
+    if (smtp.child.exitCode !== null) return;
+    const exited = new Promise((resolve) => smtp.child.once("exit", resolve));
+    smtp.child.kill("SIGTERM");
+    await exited;
+  };
+  return { env: { SMTP_HOST: "127.0.0.1", SMTP_PORT: String(smtp.port) }, stop };
 }

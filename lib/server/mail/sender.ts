@@ -32,7 +32,9 @@ export async function deliverDueMail(opts: { db?: Database; smtp?: SmtpSettings;
         await transport.sendMail({ from: smtp.from, to: row.toAddresses, subject: row.subject, text: row.bodyText, messageId: `<${row.id}@loopkeeper.invalid>` });
       });
       counts[outcome]++;
-      if (outcome === "none") break;
+      // Nothing due, or the relay is failing: stop here rather than wait out a timeout per row;
+      // the failed row is rescheduled with backoff and the next pass starts afresh.
+      if (outcome !== "sent") break;
     }
   } finally {
     transport.close();
