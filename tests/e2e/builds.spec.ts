@@ -4,6 +4,7 @@ import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { MEASUREMENT_HEADER } from "@/lib/release/measurements";
 import { DEMO_COMPONENTS, DEMO_REVISIONS } from "@/db/seed/hardware";
 import { signInPage } from "./support/accounts";
+import { expectAccessible } from "./support/a11y";
 
 /** A one-page PDF made here: header, one object per part, cross-reference table, trailer. */
 function tinyPdf(): Buffer {
@@ -56,6 +57,7 @@ test("a build goes from draft to the factory and is withdrawn, with reviews, lab
   };
   await pick("Slot 1", "Tarn 240 · Factory default");
   await pick("Slot 2", "Tarn 240 · Low noise");
+  await expectAccessible(engineer);
   await engineer.getByLabel("Firmware image").setInputFiles({ name: "tc1-fw.bin", mimeType: "application/octet-stream", buffer: Buffer.alloc(4096, 0xa5) });
   await engineer.getByRole("button", { name: "Create build" }).click();
   await engineer.waitForURL(/\/builds\/[0-9a-f-]{36}$/);
@@ -88,6 +90,7 @@ test("a build goes from draft to the factory and is withdrawn, with reviews, lab
   await expect(release.getByTestId("sound-plot")).toBeVisible();
   await expect(release.getByTestId("sound-plot").locator(".recharts-line")).toHaveCount(2);
   await expect(release.getByText("every point within it.")).toBeVisible();
+  await expectAccessible(release);
   await release.getByRole("button", { name: "Promote to pilot run" }).click();
   await expect(release.getByRole("heading", { level: 1 })).toContainText("Pilot run");
   await release.getByLabel("Release notes").fill("First factory run of the e2e build.");
@@ -99,6 +102,7 @@ test("a build goes from draft to the factory and is withdrawn, with reviews, lab
   for (const subject of [`Review requested: build ${title}`, `approved build ${title}`, `Build ${title} promoted to factory release`]) {
     await expect(admin.getByText(subject).first()).toBeVisible({ timeout: 30_000 });
   }
+  await expectAccessible(admin);
 
   // Then it turns out bad and is withdrawn with a reason.
   await release.getByLabel("Reason for withdrawing").fill("Fan ramp too aggressive on returned units.");
@@ -116,4 +120,5 @@ test("the pipeline shows builds in columns by stage", async ({ page }) => {
     await expect(page.getByTestId(`pipeline-${stage}`).getByRole("link").first()).toBeVisible();
   }
   await expect(page.getByRole("link", { name: "New build" })).toHaveCount(0);
+  await expectAccessible(page);
 });
