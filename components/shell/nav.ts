@@ -24,10 +24,18 @@ export const NAV: NavGroup[] = [
     ],
   },
   {
+    label: "Release",
+    items: [
+      { href: "/builds", label: "Builds", capability: "read" },
+      { href: "/builds/new", label: "New build", capability: "build:create" },
+    ],
+  },
+  {
     label: "Admin",
     items: [
       { href: "/admin/users", label: "Users and roles", capability: "admin" },
       { href: "/admin/audit", label: "Audit log", capability: "admin" },
+      { href: "/admin/mailbox", label: "Mailbox", capability: "admin" },
     ],
   },
 ];

@@ -6,6 +6,7 @@ import * as schema from "../schema";
 import { seedUsers } from "./users";
 import { seedHardware } from "./hardware";
 import { seedRegistry } from "./registry";
+import { seedBuilds } from "./builds";
 
 const url =
   process.env.DATABASE_URL ??
@@ -18,6 +19,7 @@ export async function seedDemo(connectionString = url): Promise<void> {
     await seedUsers(db);
     await seedHardware(db);
     await seedRegistry(db);
+    await seedBuilds(db);
   } finally {
     await pool.end();
   }

@@ -3,6 +3,7 @@ import * as account from "./account";
 import * as admin from "./admin";
 import * as registry from "./registry";
 import * as profiles from "./profiles";
+import * as builds from "./builds";
 
 function opsOf(mod: Record<string, unknown>): Operation[] {
   return Object.values(mod).filter(
@@ -11,4 +12,4 @@ function opsOf(mod: Record<string, unknown>): Operation[] {
 }
 
 /** Every /api/v1 operation; the OpenAPI document and the fuzz tests are generated from this list. */
-export const allOperations: Operation[] = [...opsOf(account), ...opsOf(admin), ...opsOf(registry), ...opsOf(profiles)];
+export const allOperations: Operation[] = [...opsOf(account), ...opsOf(admin), ...opsOf(registry), ...opsOf(profiles), ...opsOf(builds)];

@@ -1,0 +1,23 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { requirePageActor } from "@/lib/server/guard";
+import { can } from "@/lib/auth/roles";
+import { PageHeader } from "@/components/ui/panel";
+import { buttonClass } from "@/components/ui/button";
+import { Pipeline } from "@/components/builds/pipeline";
+
+export const metadata: Metadata = { title: "Builds" };
+
+export default async function BuildsPage() {
+  const actor = await requirePageActor("read");
+  return (
+    <>
+      <PageHeader
+        title="Builds"
+        subtitle="Firmware and profile banks on their way to the factory, by stage."
+        actions={can(actor.role, "build:create") ? <Link href="/builds/new" className={buttonClass("primary", "no-underline")}>New build</Link> : undefined}
+      />
+      <Pipeline />
+    </>
+  );
+}

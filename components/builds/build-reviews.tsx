@@ -1,0 +1,60 @@
+"use client";
+
+import { useState } from "react";
+import { apiFetch } from "@/lib/api/client";
+import type { BuildDetail, ReviewBody } from "@/lib/api/operations/builds";
+import { can, type Role } from "@/lib/auth/roles";
+import { Badge } from "@/components/ui/badge";
+import { Button } from "@/components/ui/button";
+import { Field, Textarea } from "@/components/ui/field";
+import { Panel } from "@/components/ui/panel";
+import { ErrorNotice } from "./error-notice";
+import { useBuildMutation } from "./use-build";
+
+export function BuildReviews({ detail, viewer }: { detail: BuildDetail; viewer: { userId: string; role: Role } }) {
+  const { build } = detail;
+  const [comment, setComment] = useState("");
+  const review = useBuildMutation(build.id, (body: ReviewBody) => apiFetch(`/api/v1/builds/${build.id}/reviews`, { method: "POST", json: body }));
+  const resolve = useBuildMutation(build.id, (reviewId: string) => apiFetch(`/api/v1/builds/${build.id}/reviews/${reviewId}/resolve`, { method: "POST" }));
+  const isAuthor = build.authorUserId === viewer.userId;
+  const mayReview = build.stage === "review" && can(viewer.role, "build:review") && !isAuthor;
+
+  return (
+    <Panel title={`Reviews (${detail.approvals.counting} of ${detail.approvals.required} approvals)`}>
+      {detail.reviews.length === 0 ? (
+        <p className="text-sm text-ink-600">No reviews yet.</p>
+      ) : (
+        <ul className="space-y-2 text-sm" aria-label="Reviews">
+          {detail.reviews.map((r) => (
+            <li key={r.id} className="rounded border border-ink-200 p-2">
+              <div className="flex flex-wrap items-center gap-2">
+                <span className="font-medium">{r.reviewerName}</span>
+                {r.verdict === "approve" ? <Badge tone="ok">approved</Badge> : <Badge tone={r.resolvedAt ? "neutral" : "warn"}>{r.resolvedAt ? "changes resolved" : "changes requested"}</Badge>}
+                <span className="text-xs text-ink-500">{r.createdAt.slice(0, 16).replace("T", " ")}</span>
+                {isAuthor && r.verdict === "request_changes" && !r.resolvedAt && (
+                  <Button variant="secondary" className="ml-auto" onClick={() => resolve.mutate(r.id)}>Mark resolved</Button>
+                )}
+              </div>
+              {r.comment && <p className="mt-1 text-ink-700">{r.comment}</p>}
+            </li>
+          ))}
+        </ul>
+      )}
+      {mayReview && (
+        <div className="mt-3 space-y-2 border-t border-ink-200 pt-3">
+          <Field id="reviewComment" label="Comment" hint="Required when you request changes.">
+            <Textarea id="reviewComment" rows={2} value={comment} onChange={(e) => setComment(e.target.value)} aria-describedby="reviewComment-hint" />
+          </Field>
+          <div className="flex gap-2">
+            <Button onClick={() => review.mutate({ verdict: "approve", comment }, { onSuccess: () => setComment("") })} disabled={review.isPending}>Approve</Button>
+            <Button variant="secondary" onClick={() => review.mutate({ verdict: "request_changes", comment }, { onSuccess: () => setComment("") })} disabled={review.isPending}>Request changes</Button>
+          </div>
+        </div>
+      )}
+      <div className="mt-2 space-y-2">
+        <ErrorNotice error={review.error} />
+        <ErrorNotice error={resolve.error} />
+      </div>
+    </Panel>
+  );
+}

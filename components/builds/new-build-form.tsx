@@ -1,0 +1,136 @@
+"use client";
+
+import { useState } from "react";
+import { useRouter } from "next/navigation";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useMutation, useQuery } from "@tanstack/react-query";
+import { useForm, useWatch } from "react-hook-form";
+import { apiFetch } from "@/lib/api/client";
+import type { AppError } from "@/lib/api/errors";
+import { createBuildBody, type BuildOptions, type CreateBuildBody, type UploadView } from "@/lib/api/operations/builds";
+import { UPLOAD_MAX_BYTES } from "@/lib/release/upload-check";
+import { Button } from "@/components/ui/button";
+import { Field, Input, Select, describedBy } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
+import { Panel } from "@/components/ui/panel";
+
+/** The API body without the firmware id: the file is uploaded first, on submit. */
+const formSchema = createBuildBody.omit({ firmwareUploadId: true });
+type FormValues = Omit<CreateBuildBody, "firmwareUploadId">;
+
+export function NewBuildForm() {
+  const router = useRouter();
+  const [slotCount, setSlotCount] = useState(2);
+  const [file, setFile] = useState<File | null>(null);
+  const [fileError, setFileError] = useState<string>();
+  const form = useForm<FormValues>({ resolver: zodResolver(formSchema), defaultValues: { version: "", revisionRange: "", slots: [] } });
+  const boardModelId = useWatch({ control: form.control, name: "boardModelId" });
+  const options = useQuery({
+    queryKey: ["build-options", boardModelId ?? ""],
+    queryFn: () => apiFetch<BuildOptions>(`/api/v1/builds/options${boardModelId ? `?boardModelId=${boardModelId}` : ""}`),
+  });
+  const create = useMutation({
+    mutationFn: async (values: FormValues) => {
+      if (!file) throw new Error("no file");
+      const up = await apiFetch<{ upload: UploadView }>(`/api/v1/uploads?name=${encodeURIComponent(file.name)}`, {
+        method: "POST",
+        body: file,
+        headers: { "content-type": "application/octet-stream" },
+      });
+      return apiFetch<{ build: { id: string } }>("/api/v1/builds", { method: "POST", json: { ...values, firmwareUploadId: up.upload.id } });
+    },
+    onSuccess: (r) => router.push(`/builds/${r.build.id}`),
+  });
+  const { errors } = form.formState;
+  const serverError = create.error as AppError | null;
+  const firstBoard = options.data?.boardModels[0]?.id;
+
+  return (
+    <Panel>
+      <form
+        noValidate
+        className="grid max-w-3xl gap-4"
+        onSubmit={form.handleSubmit((values) => {
+          if (!file) return setFileError("Choose the firmware image (.bin or .hex).");
+          if (file.size > UPLOAD_MAX_BYTES.firmware) return setFileError(`The firmware is larger than ${UPLOAD_MAX_BYTES.firmware} bytes.`);
+          setFileError(undefined);
+          create.mutate({ ...values, slots: values.slots.filter(Boolean) });
+        })}
+      >
+        <Field id="boardModelId" label="Board model" error={errors.boardModelId?.message}>
+          <Select {...describedBy("boardModelId", errors.boardModelId?.message)} {...form.register("boardModelId")} defaultValue="">
+            <option value="" disabled>Pick a board model…</option>
+            {options.data?.boardModels.map((b) => (
+              <option key={b.id} value={b.id}>{b.name}</option>
+            ))}
+          </Select>
+        </Field>
+        {options.data && boardModelId && (
+          <p className="text-xs text-ink-600">
+            Revisions: {options.data.revisions.map((r) => `${r.revision} (${r.memoryBytes} B, ${r.slotCount} slots, ${r.maxPointsPerCurve} points)`).join(" · ") || "none yet"}
+          </p>
+        )}
+        <div className="grid gap-4 sm:grid-cols-2">
+          <Field id="version" label="Build version" hint="Semantic version, e.g. 1.5.0" error={errors.version?.message}>
+            <Input {...describedBy("version", errors.version?.message)} {...form.register("version")} autoComplete="off" />
+          </Field>
+          <Field id="revisionRange" label="Board revisions" hint="A semver range, e.g. >=1.1.0 <3.0.0" error={errors.revisionRange?.message}>
+            <Input {...describedBy("revisionRange", errors.revisionRange?.message)} {...form.register("revisionRange")} autoComplete="off" />
+          </Field>
+        </div>
+        <fieldset className="space-y-2">
+          <legend className="text-sm font-medium text-ink-800">Slots (published profile versions)</legend>
+          {!boardModelId && firstBoard && <p className="text-xs text-ink-600">Pick a board model to see its profile versions.</p>}
+          {Array.from({ length: slotCount }, (_, i) => (
+            <Field key={i} id={`slot-${i}`} label={`Slot ${i + 1}`} error={i === 0 ? errors.slots?.message ?? errors.slots?.[0]?.message : errors.slots?.[i]?.message}>
+              <Select {...describedBy(`slot-${i}`)} {...form.register(`slots.${i}`)} defaultValue="">
+                <option value="">{i === 0 ? "Pick a profile version…" : "(empty)"}</option>
+                {options.data?.candidates.map((c) => (
+                  <option key={c.id} value={c.id}>
+                    {c.coolerModel} · {c.profileName} {c.version} ({c.encodedBytes} B, boards {c.boardRange})
+                  </option>
+                ))}
+              </Select>
+            </Field>
+          ))}
+          <div className="flex gap-2">
+            <Button variant="secondary" disabled={slotCount >= 16} onClick={() => setSlotCount((n) => n + 1)}>Add a slot</Button>
+            <Button
+              variant="quiet"
+              disabled={slotCount <= 1}
+              onClick={() => {
+                form.setValue("slots", form.getValues("slots").slice(0, slotCount - 1));
+                setSlotCount((n) => n - 1);
+              }}
+            >
+              Remove the last slot
+            </Button>
+          </div>
+        </fieldset>
+        <Field id="firmware" label="Firmware image" hint={`.bin (raw bytes) or Intel HEX .hex, at most ${UPLOAD_MAX_BYTES.firmware / 1024 / 1024} MiB`} error={fileError}>
+          <input
+            id="firmware"
+            type="file"
+            accept=".bin,.hex,application/octet-stream"
+            aria-invalid={fileError ? true : undefined}
+            aria-describedby={fileError ? "firmware-error" : "firmware-hint"}
+            className="block text-sm"
+            onChange={(e) => setFile(e.target.files?.[0] ?? null)}
+          />
+        </Field>
+        {serverError && (
+          <Notice tone="fault" role="alert" title={serverError.message}>
+            {serverError.issues && serverError.issues.length > 1 && (
+              <ul className="list-disc pl-5">
+                {serverError.issues.map((i, n) => <li key={n}>{i.message}</li>)}
+              </ul>
+            )}
+          </Notice>
+        )}
+        <div>
+          <Button type="submit" disabled={create.isPending}>{create.isPending ? "Creating…" : "Create build"}</Button>
+        </div>
+      </form>
+    </Panel>
+  );
+}

@@ -1,0 +1,49 @@
+"use client";
+
+import Link from "next/link";
+import { useQuery } from "@tanstack/react-query";
+import { apiFetch } from "@/lib/api/client";
+import type { BuildListItem } from "@/lib/api/operations/builds";
+import { STAGE_LABELS, STAGE_ORDER } from "@/lib/release/stages";
+import { Notice } from "@/components/ui/notice";
+import { Button } from "@/components/ui/button";
+
+/** Builds in columns by stage, newest first in each. */
+export function Pipeline() {
+  const q = useQuery({ queryKey: ["builds"], queryFn: () => apiFetch<{ items: BuildListItem[] }>("/api/v1/builds") });
+  if (q.isError) {
+    return (
+      <Notice tone="fault" role="alert" title="Could not load the builds.">
+        <Button variant="secondary" onClick={() => void q.refetch()}>Retry</Button>
+      </Notice>
+    );
+  }
+  return (
+    <div className="grid gap-3 md:grid-cols-3 xl:grid-cols-6">
+      {STAGE_ORDER.map((stage) => {
+        const items = q.data?.items.filter((b) => b.stage === stage) ?? [];
+        return (
+          <section key={stage} aria-labelledby={`col-${stage}`} className="rounded-md bg-ink-50 p-2" data-testid={`pipeline-${stage}`}>
+            <h2 id={`col-${stage}`} className="mb-2 flex items-center justify-between px-1 text-sm font-semibold text-ink-800">
+              {STAGE_LABELS[stage]} <span className="tabular-nums text-ink-600">{q.data ? items.length : ""}</span>
+            </h2>
+            <ul className="space-y-2">
+              {q.isPending && [0, 1].map((i) => <li key={i} aria-hidden className="h-16 animate-pulse rounded bg-white shadow-panel" />)}
+              {items.map((b) => (
+                <li key={b.id}>
+                  <Link href={`/builds/${b.id}`} className="block rounded bg-white p-2.5 text-sm no-underline shadow-panel hover:ring-2 hover:ring-copper-200">
+                    <span className="block font-semibold text-ink-900">{b.version}</span>
+                    <span className="block text-xs text-ink-600">{b.boardModel}</span>
+                    <span className="block text-xs text-ink-600">Revisions {b.revisionRange}</span>
+                    <span className="block text-xs text-ink-600">{b.bankBytes ?? "—"} B · {b.authorName}</span>
+                  </Link>
+                </li>
+              ))}
+              {q.data && items.length === 0 && <li className="px-1 text-xs text-ink-500">None</li>}
+            </ul>
+          </section>
+        );
+      })}
+    </div>
+  );
+}

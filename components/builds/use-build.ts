@@ -1,0 +1,17 @@
+"use client";
+
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { apiFetch } from "@/lib/api/client";
+import type { BuildDetail } from "@/lib/api/operations/builds";
+
+export const buildKey = (id: string) => ["build", id] as const;
+
+export function useBuild(id: string) {
+  return useQuery({ queryKey: buildKey(id), queryFn: () => apiFetch<BuildDetail>(`/api/v1/builds/${id}`) });
+}
+
+/** A write on the build that refreshes the page's data when it settles. */
+export function useBuildMutation<V>(id: string, fn: (v: V) => Promise<unknown>) {
+  const qc = useQueryClient();
+  return useMutation({ mutationFn: fn, onSettled: () => qc.invalidateQueries({ queryKey: buildKey(id) }) });
+}

@@ -1,0 +1,208 @@
+import "server-only";
+import { alias } from "drizzle-orm/pg-core";
+import { asc, desc, eq, inArray } from "drizzle-orm";
+import { boardModels, boardRevisions, buildReviews, builds, buildSlots, buildTransitions, components, coolerModels, profiles, profileVersions, uploads, users, type BuildStage } from "./schema";
+import type { Database, Executor } from "./client";
+import { recordAudit, type AuditActor } from "./audit";
+import { AppError } from "@/lib/api/errors";
+import type { BuildSlotFacts } from "@/lib/release/build-check";
+
+/** Build columns without the image bytes: what lists and pages need. */
+const buildSummary = {
+  id: builds.id,
+  boardModelId: builds.boardModelId,
+  boardModel: boardModels.name,
+  version: builds.version,
+  revisionRange: builds.revisionRange,
+  stage: builds.stage,
+  authorUserId: builds.authorUserId,
+  authorName: users.name,
+  authorEmail: users.email,
+  firmwareUploadId: builds.firmwareUploadId,
+  labReportUploadId: builds.labReportUploadId,
+  measurementsUploadId: builds.measurementsUploadId,
+  bankBytes: builds.bankBytes,
+  bankSha256: builds.bankSha256,
+  bankCrc32: builds.bankCrc32,
+  releaseNotes: builds.releaseNotes,
+  waiverReason: builds.waiverReason,
+  withdrawnReason: builds.withdrawnReason,
+  createdAt: builds.createdAt,
+  updatedAt: builds.updatedAt,
+};
+
+export type BuildSummary = NonNullable<Awaited<ReturnType<typeof getBuild>>>;
+
+export async function listBuilds(db: Executor, { stage, limit }: { stage?: BuildStage; limit: number }) {
+  return db
+    .select(buildSummary)
+    .from(builds)
+    .innerJoin(boardModels, eq(boardModels.id, builds.boardModelId))
+    .innerJoin(users, eq(users.id, builds.authorUserId))
+    .where(stage ? eq(builds.stage, stage) : undefined)
+    .orderBy(desc(builds.updatedAt))
+    .limit(limit);
+}
+
+export async function getBuild(db: Executor, { id }: { id: string }) {
+  const [row] = await db
+    .select(buildSummary)
+    .from(builds)
+    .innerJoin(boardModels, eq(boardModels.id, builds.boardModelId))
+    .innerJoin(users, eq(users.id, builds.authorUserId))
+    .where(eq(builds.id, id))
+    .limit(1);
+  return row;
+}
+
+export async function getBuildImage(db: Executor, { id }: { id: string }) {
+  const [row] = await db.select({ bankImage: builds.bankImage, version: builds.version, boardModelId: builds.boardModelId, revisionRange: builds.revisionRange }).from(builds).where(eq(builds.id, id)).limit(1);
+  return row;
+}
+
+export async function listBoardModels(db: Executor) {
+  return db.select({ id: boardModels.id, name: boardModels.name }).from(boardModels).orderBy(asc(boardModels.name));
+}
+
+export async function listRevisions(db: Executor, { boardModelId }: { boardModelId: string }) {
+  return db.select().from(boardRevisions).where(eq(boardRevisions.boardModelId, boardModelId)).orderBy(asc(boardRevisions.revision));
+}
+
+export async function listBuildSlots(db: Executor, { buildId }: { buildId: string }) {
+  return db
+    .select({
+      slotIndex: buildSlots.slotIndex,
+      profileVersionId: profileVersions.id,
+      version: profileVersions.version,
+      boardRange: profileVersions.boardRange,
+      encodedBytes: profileVersions.encodedBytes,
+      contentHash: profileVersions.contentHash,
+      authorUserId: profileVersions.authorUserId,
+      profileId: profiles.id,
+      profileName: profiles.name,
+      coolerModelId: coolerModels.id,
+      coolerModel: coolerModels.name,
+    })
+    .from(buildSlots)
+    .innerJoin(profileVersions, eq(profileVersions.id, buildSlots.profileVersionId))
+    .innerJoin(profiles, eq(profiles.id, profileVersions.profileId))
+    .innerJoin(coolerModels, eq(coolerModels.id, profiles.coolerModelId))
+    .where(eq(buildSlots.buildId, buildId))
+    .orderBy(asc(buildSlots.slotIndex));
+}
+
+/** Published profile versions written for cooler models on this board model, newest first. */
+export async function listSlotCandidates(db: Executor, { boardModelId }: { boardModelId: string }) {
+  return db
+    .select({
+      id: profileVersions.id,
+      version: profileVersions.version,
+      boardRange: profileVersions.boardRange,
+      encodedBytes: profileVersions.encodedBytes,
+      profileName: profiles.name,
+      coolerModel: coolerModels.name,
+      createdAt: profileVersions.createdAt,
+    })
+    .from(profileVersions)
+    .innerJoin(profiles, eq(profiles.id, profileVersions.profileId))
+    .innerJoin(coolerModels, eq(coolerModels.id, profiles.coolerModelId))
+    .where(eq(coolerModels.boardModelId, boardModelId))
+    .orderBy(asc(coolerModels.name), asc(profiles.name), desc(profileVersions.versionMajor), desc(profileVersions.versionMinor), desc(profileVersions.versionPatch));
+}
+
+/**
+ * Profile versions with everything the engine needs to check them in a build: the document,
+ * version, board range and hash, and the cooler model's fan and pump. Order follows `ids`.
+ */
+export async function loadSlotFacts(db: Executor, { ids, boardModelId }: { ids: string[]; boardModelId: string }): Promise<(BuildSlotFacts & { id: string; authorUserId: string; coolerModelId: string })[]> {
+  if (ids.length === 0) return [];
+  const fan = alias(components, "fan");
+  const pump = alias(components, "pump");
+  const rows = await db
+    .select({ pv: profileVersions, profileName: profiles.name, cooler: coolerModels, fan, pump })
+    .from(profileVersions)
+    .innerJoin(profiles, eq(profiles.id, profileVersions.profileId))
+    .innerJoin(coolerModels, eq(coolerModels.id, profiles.coolerModelId))
+    .innerJoin(fan, eq(fan.id, coolerModels.fanComponentId))
+    .innerJoin(pump, eq(pump.id, coolerModels.pumpComponentId))
+    .where(inArray(profileVersions.id, ids));
+  const byId = new Map(rows.map((r) => [r.pv.id, r]));
+  return ids.map((id, i) => {
+    const r = byId.get(id);
+    if (!r) throw new AppError("validation_failed", `Slot ${i + 1}: profile version ${id} does not exist.`, { issues: [{ path: `/slots/${i}`, message: "Unknown profile version." }] });
+    if (r.cooler.boardModelId !== boardModelId) {
+      throw new AppError("validation_failed", `Slot ${i + 1} (${r.profileName} ${r.pv.version}) is for ${r.cooler.name}, a cooler on another board model.`, { issues: [{ path: `/slots/${i}`, message: "Pick a profile version for a cooler on this board model." }] });
+    }
+    return {
+      id,
+      authorUserId: r.pv.authorUserId,
+      coolerModelId: r.cooler.id,
+      label: `${r.profileName} ${r.pv.version}`,
+      document: r.pv.document,
+      version: r.pv.version,
+      boardRange: r.pv.boardRange,
+      contentHash: r.pv.contentHash,
+      cooler: r.cooler,
+      fan: r.fan,
+      pump: r.pump,
+    };
+  });
+}
+
+export async function listReviews(db: Executor, { buildId }: { buildId: string }) {
+  return db
+    .select({ id: buildReviews.id, reviewerUserId: buildReviews.reviewerUserId, reviewerName: users.name, reviewerEmail: users.email, verdict: buildReviews.verdict, comment: buildReviews.comment, resolvedAt: buildReviews.resolvedAt, createdAt: buildReviews.createdAt })
+    .from(buildReviews)
+    .innerJoin(users, eq(users.id, buildReviews.reviewerUserId))
+    .where(eq(buildReviews.buildId, buildId))
+    .orderBy(asc(buildReviews.createdAt));
+}
+
+export async function listTransitions(db: Executor, { buildId }: { buildId: string }) {
+  return db
+    .select({ id: buildTransitions.id, fromStage: buildTransitions.fromStage, toStage: buildTransitions.toStage, actorName: users.name, reason: buildTransitions.reason, createdAt: buildTransitions.createdAt })
+    .from(buildTransitions)
+    .innerJoin(users, eq(users.id, buildTransitions.actorUserId))
+    .where(eq(buildTransitions.buildId, buildId))
+    .orderBy(asc(buildTransitions.createdAt));
+}
+
+export interface NewBuildInput {
+  boardModelId: string;
+  version: string;
+  revisionRange: string;
+  firmwareUploadId: string;
+  profileVersionIds: string[];
+  bank: { image: Uint8Array; bankBytes: number; sha256: string; crc32: number };
+}
+
+/** Creates a draft build with its slots and bank image, and its audit event, in one transaction. */
+export async function createBuild(db: Database, actor: AuditActor & { userId: string }, input: NewBuildInput) {
+  return db.transaction(async (tx) => {
+    const [fw] = await tx.select({ id: uploads.id, kind: uploads.kind }).from(uploads).where(eq(uploads.id, input.firmwareUploadId)).limit(1);
+    if (!fw || fw.kind !== "firmware") throw new AppError("validation_failed", "Upload the firmware image first; that upload is not a firmware image.", { issues: [{ path: "/firmwareUploadId", message: "Not a firmware upload." }] });
+    const [row] = await tx
+      .insert(builds)
+      .values({
+        boardModelId: input.boardModelId,
+        version: input.version,
+        revisionRange: input.revisionRange,
+        authorUserId: actor.userId,
+        firmwareUploadId: input.firmwareUploadId,
+        bankImage: input.bank.image,
+        bankBytes: input.bank.bankBytes,
+        bankSha256: input.bank.sha256,
+        bankCrc32: input.bank.crc32,
+      })
+      .returning({ id: builds.id, version: builds.version, stage: builds.stage });
+    if (!row) throw new AppError("internal", "The build was not created.");
+    await tx.insert(buildSlots).values(input.profileVersionIds.map((profileVersionId, slotIndex) => ({ buildId: row.id, slotIndex, profileVersionId })));
+    await recordAudit(tx, actor, {
+      action: "build.create",
+      entityType: "build",
+      entityId: row.id,
+      after: { version: input.version, revisionRange: input.revisionRange, slots: input.profileVersionIds, bankSha256: input.bank.sha256, bankBytes: input.bank.bankBytes },
+    });
+    return row;
+  });
+}

@@ -1,0 +1,23 @@
+import "server-only";
+import path from "node:path";
+import { env } from "../env";
+import { localStorage } from "./local";
+import { s3Storage } from "./s3";
+import type { Storage } from "./types";
+
+export type { Storage, StoredObject, PutOptions, ByteSource } from "./types";
+export { localStorage, s3Storage };
+
+const globalForStorage = globalThis as unknown as { loopkeeperStorage?: Storage };
+
+/** The configured driver: a local directory by default (STORAGE_DIR), S3 when STORAGE_DRIVER=s3. */
+export function getStorage(): Storage {
+  if (!globalForStorage.loopkeeperStorage) {
+    const e = env();
+    globalForStorage.loopkeeperStorage =
+      e.STORAGE_DRIVER === "s3"
+        ? s3Storage({ endpoint: e.S3_ENDPOINT, bucket: e.S3_BUCKET, region: e.S3_REGION, accessKeyId: e.S3_ACCESS_KEY_ID, secretAccessKey: e.S3_SECRET_ACCESS_KEY })
+        : localStorage(path.resolve(process.cwd(), e.STORAGE_DIR));
+  }
+  return globalForStorage.loopkeeperStorage;
+}

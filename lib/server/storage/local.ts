@@ -1,0 +1,47 @@
+import "server-only";
+import { createHash } from "node:crypto";
+import { createWriteStream } from "node:fs";
+import fs from "node:fs/promises";
+import path from "node:path";
+import { once } from "node:events";
+import { assertKey, limitedChunks, newKey, type ByteSource, type PutOptions, type Storage, type StoredObject } from "./types";
+
+/** Files in one local directory, named by generated keys; the default driver. */
+export function localStorage(dir: string): Storage {
+  const root = path.resolve(dir);
+  const fileOf = (key: string) => {
+    assertKey(key);
+    return path.join(root, key);
+  };
+  return {
+    driver: "local",
+    async put(body: ByteSource, { maxBytes }: PutOptions): Promise<StoredObject> {
+      await fs.mkdir(root, { recursive: true });
+      const key = newKey();
+      const file = fileOf(key);
+      const hash = createHash("sha256");
+      const out = createWriteStream(file, { flags: "wx", mode: 0o600 });
+      let sizeBytes = 0;
+      try {
+        for await (const chunk of limitedChunks(body, maxBytes)) {
+          hash.update(chunk);
+          sizeBytes += chunk.byteLength;
+          if (!out.write(chunk)) await once(out, "drain");
+        }
+        out.end();
+        await once(out, "finish");
+      } catch (err) {
+        out.destroy();
+        await fs.rm(file, { force: true });
+        throw err;
+      }
+      return { key, sizeBytes, sha256: hash.digest("hex") };
+    },
+    async get(key) {
+      return fs.readFile(fileOf(key));
+    },
+    async delete(key) {
+      await fs.rm(fileOf(key), { force: true });
+    },
+  };
+}

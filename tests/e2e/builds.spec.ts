@@ -1,0 +1,124 @@
+import { expect, test, type Browser, type Page } from "@playwright/test";
+import { coolerNoise } from "@/lib/engine";
+import { toHardwareContext } from "@/lib/registry/hardware-context";
+import { MEASUREMENT_HEADER } from "@/lib/release/measurements";
+import { DEMO_COMPONENTS, DEMO_REVISIONS } from "@/db/seed/hardware";
+import { signInPage } from "./support/accounts";
+import { expectAccessible } from "./support/a11y";
+
+/** A one-page PDF made here: header, one object per part, cross-reference table, trailer. */
+function tinyPdf(): Buffer {
+  const objects = ["<< /Type /Catalog /Pages 2 0 R >>", "<< /Type /Pages /Kids [3 0 R] /Count 1 >>", "<< /Type /Page /Parent 2 0 R /MediaBox [0 0 200 200] >>"];
+  let out = "%PDF-1.4\n";
+  const offsets = objects.map((o, i) => {
+    const at = out.length;
+    out += `${i + 1} 0 obj\n${o}\nendobj\n`;
+    return at;
+  });
+  const xref = out.length;
+  out += `xref\n0 ${objects.length + 1}\n0000000000 65535 f \n${offsets.map((o) => `${String(o).padStart(10, "0")} 00000 n \n`).join("")}trailer\n<< /Size ${objects.length + 1} /Root 1 0 R >>\nstartxref\n${xref}\n%%EOF\n`;
+  return Buffer.from(out, "latin1");
+}
+
+/** Lab figures for the Tarn 240 (two PWM fans, the pump): the engine's estimate ±1 dB at each speed. */
+function measurementsCsv(): Buffer {
+  const fan = DEMO_COMPONENTS.find((c) => c.name === "Fellwind 120 PWM fan")!;
+  const pump = DEMO_COMPONENTS.find((c) => c.name === "Brook D3 pump")!;
+  const hw = toHardwareContext({ cooler: { name: "Tarn 240", fanCount: 2, radiatorKPerWAtMinFan: 0.11, radiatorKPerWAtMaxFan: 0.045 }, fan, pump, revision: DEMO_REVISIONS[0]! });
+  const rows = [[32, 1500, 800, 0.6], [42, 2000, 1200, -0.9], [52, 2600, 1700, 1.0]] as const;
+  return Buffer.from([MEASUREMENT_HEADER, ...rows.map(([t, p, f, d]) => `${t},${p},${f},${(coolerNoise(hw, f, p).totalDbA1m + d).toFixed(1)}`)].join("\n") + "\n");
+}
+
+async function as(browser: Browser, email: string, url: string): Promise<Page> {
+  const ctx = await browser.newContext();
+  const page = await ctx.newPage();
+  await signInPage(page, email);
+  await page.goto(url);
+  return page;
+}
+
+test("a build goes from draft to the factory and is withdrawn, with reviews, lab evidence and mail", async ({ browser }) => {
+  test.setTimeout(180_000);
+  const version = `${100 + Math.floor(Math.random() * 150)}.${Math.floor(Math.random() * 256)}.${Math.floor(Math.random() * 256)}`;
+  const title = `TC-1 cooler controller ${version}`;
+
+  // The engineer creates the build and asks for review.
+  const engineer = await as(browser, "engineer@tarnwell.example", "/builds/new");
+  await engineer.getByLabel("Board model").selectOption({ label: "TC-1 cooler controller" });
+  await engineer.getByLabel("Build version").fill(version);
+  await engineer.getByLabel("Board revisions").fill(">=1.0.0 <3.0.0");
+  const slot1 = engineer.getByLabel("Slot 1", { exact: true });
+  await expect(slot1.locator("option", { hasText: "Tarn 240 · Factory default" }).first()).toBeAttached();
+  const pick = async (slot: string, text: string) => {
+    const select = engineer.getByLabel(slot, { exact: true });
+    const value = await select.locator("option", { hasText: text }).first().getAttribute("value");
+    expect(value).toBeTruthy();
+    await select.selectOption(value ?? "");
+  };
+  await pick("Slot 1", "Tarn 240 · Factory default");
+  await pick("Slot 2", "Tarn 240 · Low noise");
+  await expectAccessible(engineer);
+  await engineer.getByLabel("Firmware image").setInputFiles({ name: "tc1-fw.bin", mimeType: "application/octet-stream", buffer: Buffer.alloc(4096, 0xa5) });
+  await engineer.getByRole("button", { name: "Create build" }).click();
+  await engineer.waitForURL(/\/builds\/[0-9a-f-]{36}$/);
+  const buildUrl = new URL(engineer.url()).pathname;
+  await expect(engineer.getByRole("heading", { level: 1 })).toContainText(title);
+  await expect(engineer.getByTestId("bank-sha256")).toHaveText(/^[0-9a-f]{64}$/);
+  await expect(engineer.getByText("Estimates, not measurements")).toBeVisible();
+  await engineer.getByRole("button", { name: "Ask for review" }).click();
+  await expect(engineer.getByRole("heading", { level: 1 })).toContainText("In review");
+  // The author has no approve button: the server would refuse it anyway.
+  await expect(engineer.getByRole("button", { name: "Approve" })).toHaveCount(0);
+
+  // Two other engineers approve.
+  for (const [i, email] of ["engineer2@tarnwell.example", "engineer3@tarnwell.example"].entries()) {
+    const reviewer = await as(browser, email, buildUrl);
+    await reviewer.getByLabel("Comment").fill("Curves and bank size look right.");
+    await reviewer.getByRole("button", { name: "Approve" }).click();
+    await expect(reviewer.getByRole("list", { name: "Reviews" }).getByText("approved", { exact: true })).toHaveCount(i + 1);
+    await reviewer.context().close();
+  }
+
+  // The release manager takes it through validation, pilot and production.
+  const release = await as(browser, "release@tarnwell.example", buildUrl);
+  await expect(release.getByText("Approvals: 2 of 2 needed")).toBeVisible();
+  await release.getByRole("button", { name: "Promote to lab validation" }).click();
+  await expect(release.getByRole("heading", { level: 1 })).toContainText("Lab validation");
+  await release.getByLabel("Lab report (PDF)").setInputFiles({ name: "lab-report.pdf", mimeType: "application/pdf", buffer: tinyPdf() });
+  await expect(release.getByRole("link", { name: "lab-report.pdf" })).toBeVisible();
+  await release.getByLabel("Measurements (CSV)").setInputFiles({ name: "measurements.csv", mimeType: "text/csv", buffer: measurementsCsv() });
+  await expect(release.getByTestId("sound-plot")).toBeVisible();
+  await expect(release.getByTestId("sound-plot").locator(".recharts-line")).toHaveCount(2);
+  await expect(release.getByText("every point within it.")).toBeVisible();
+  await expectAccessible(release);
+  await release.getByRole("button", { name: "Promote to pilot run" }).click();
+  await expect(release.getByRole("heading", { level: 1 })).toContainText("Pilot run");
+  await release.getByLabel("Release notes").fill("First factory run of the e2e build.");
+  await release.getByRole("button", { name: "Release to the factory" }).click();
+  await expect(release.getByRole("heading", { level: 1 })).toContainText("Factory release");
+
+  // The mails arrive in the local mailbox.
+  const admin = await as(browser, "admin@tarnwell.example", "/admin/mailbox");
+  for (const subject of [`Review requested: build ${title}`, `approved build ${title}`, `Build ${title} promoted to factory release`]) {
+    await expect(admin.getByText(subject).first()).toBeVisible({ timeout: 30_000 });
+  }
+  await expectAccessible(admin);
+
+  // Then it turns out bad and is withdrawn with a reason.
+  await release.getByLabel("Reason for withdrawing").fill("Fan ramp too aggressive on returned units.");
+  await release.getByRole("button", { name: "Withdraw build" }).click();
+  await expect(release.getByRole("heading", { level: 1 })).toContainText("Withdrawn");
+  await expect(release.getByRole("alert").filter({ hasText: "This build was withdrawn" })).toContainText("Fan ramp too aggressive");
+  await expect(admin.getByText(`Build ${title} withdrawn`).first()).toBeVisible({ timeout: 30_000 });
+  await expect(release.getByTestId("timeline")).toContainText("Withdrawn");
+});
+
+test("the pipeline shows builds in columns by stage", async ({ page }) => {
+  await signInPage(page, "viewer@tarnwell.example");
+  await page.goto("/builds");
+  for (const stage of ["draft", "review", "validation", "pilot", "production", "withdrawn"]) {
+    await expect(page.getByTestId(`pipeline-${stage}`).getByRole("link").first()).toBeVisible();
+  }
+  await expect(page.getByRole("link", { name: "New build" })).toHaveCount(0);
+  await expectAccessible(page);
+});
