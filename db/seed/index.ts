@@ -4,6 +4,7 @@ import { Pool } from "pg";
 import * as schema from "../schema";
 import { seedUsers } from "./users";
 import { seedHardware } from "./hardware";
+import { seedSupport } from "./support";
 
 const url =
   process.env.DATABASE_URL ??
@@ -15,6 +16,7 @@ export async function seedDemo(connectionString = url): Promise<void> {
   try {
     await seedUsers(db);
     await seedHardware(db);
+    await seedSupport(db);
   } finally {
     await pool.end();
   }
