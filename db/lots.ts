@@ -196,6 +196,7 @@ export async function importLots(
 }
 
 export interface LotFilter {
+  lotId?: string;
   boardModelId?: string;
   buildId?: string;
   lotCode?: string;
@@ -208,6 +209,7 @@ export interface LotFilter {
 /** Lots with their board, revision and build, filtered and paged in the database. */
 export async function listLots(db: Executor, f: LotFilter) {
   const where: SQL[] = [];
+  if (f.lotId) where.push(eq(productionLots.id, f.lotId));
   if (f.boardModelId) where.push(eq(productionLots.boardModelId, f.boardModelId));
   if (f.buildId) where.push(eq(productionLots.buildId, f.buildId));
   if (f.lotCode) where.push(sql`${productionLots.lotCode} ilike ${`%${f.lotCode.replace(/[\\%_]/g, (c) => `\\${c}`)}%`}`);

@@ -1,6 +1,7 @@
 import type { Operation } from "../operation";
 import * as account from "./account";
 import * as admin from "./admin";
+import * as support from "./support";
 
 function opsOf(mod: Record<string, unknown>): Operation[] {
   return Object.values(mod).filter(
@@ -9,4 +10,4 @@ function opsOf(mod: Record<string, unknown>): Operation[] {
 }
 
 /** Every /api/v1 operation; the OpenAPI document and the fuzz tests are generated from this list. */
-export const allOperations: Operation[] = [...opsOf(account), ...opsOf(admin)];
+export const allOperations: Operation[] = [...opsOf(account), ...opsOf(admin), ...opsOf(support)];
