@@ -15,6 +15,14 @@ export interface NavGroup {
 export const NAV: NavGroup[] = [
   { label: "Overview", items: [{ href: "/", label: "Dashboard", capability: "read" }] },
   {
+    label: "Support",
+    items: [
+      { href: "/lookup", label: "Serial lookup", capability: "support" },
+      { href: "/lots", label: "Production lots", capability: "read" },
+      { href: "/support/withdrawn", label: "Withdrawn builds", capability: "support" },
+    ],
+  },
+  {
     label: "Admin",
     items: [
       { href: "/admin/users", label: "Users and roles", capability: "admin" },

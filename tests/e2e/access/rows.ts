@@ -1,5 +1,6 @@
 import type { AccessRow } from "./types";
 import { foundationRows } from "./foundation";
+import { supportRows } from "./support";
 
 /** Every page and API operation of the app; each area of the product adds its own file. */
-export const ALL_ROWS: AccessRow[] = [...foundationRows];
+export const ALL_ROWS: AccessRow[] = [...foundationRows, ...supportRows];
