@@ -1,11 +1,24 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { getToken } from "next-auth/jwt";
+import { checkDatabase } from "@/db/health";
+
+const UNAVAILABLE_HTML = `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Loopkeeper is unavailable</title></head>
+<body style="font-family:system-ui,sans-serif;max-width:40rem;margin:4rem auto;padding:0 1rem;color:#1c1b18">
+<h1>Loopkeeper cannot reach its database</h1>
+<p>The registry is temporarily unavailable. Nothing you entered was half-saved. This page recovers by itself when the database is back; try again in a few seconds.</p>
+</body></html>`;
 
 /**
- * Sends signed-out visitors of screens to sign-in. This is a convenience, not the check:
- * every page, route and action verifies the session and role on the server itself.
+ * Screens only. Answers 503 with a plain explanation while PostgreSQL is unreachable, and
+ * sends signed-out visitors to sign-in. The redirect is a convenience, not the check: every
+ * page, route and action verifies the session and role on the server itself.
  */
 export async function proxy(req: NextRequest) {
+  const db = await checkDatabase();
+  if (!db.ok) {
+    return new NextResponse(UNAVAILABLE_HTML, { status: 503, headers: { "content-type": "text/html; charset=utf-8", "retry-after": "5", "cache-control": "no-store" } });
+  }
+  if (req.nextUrl.pathname === "/sign-in") return NextResponse.next();
   const token = await getToken({ req, secret: process.env.NEXTAUTH_SECRET });
   if (token) return NextResponse.next();
   const url = req.nextUrl.clone();
@@ -15,6 +28,6 @@ export async function proxy(req: NextRequest) {
 }
 
 export const config = {
-  // Screens only: API routes answer 401 themselves; assets and sign-in stay open.
-  matcher: ["/((?!api/|_next/|sign-in|favicon.ico|icon.svg|logo.svg|fonts/).*)"],
+  // API routes answer for themselves (401 JSON, 503 JSON); assets stay open.
+  matcher: ["/((?!api/|_next/|favicon.ico|icon.svg|logo.svg|fonts/).*)"],
 };

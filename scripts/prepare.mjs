@@ -33,6 +33,8 @@ export async function appEnv({ database = "loopkeeper", port = 3000 } = {}) {
   return {
     ...process.env,
     DATABASE_URL: process.env.DATABASE_URL ?? localUrl(database),
+    // Tests that stop and restart PostgreSQL only run against the private cluster.
+    LOOPKEEPER_LOCAL_CLUSTER: process.env.DATABASE_URL ? "0" : "1",
     NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET ?? localSecret(),
     NEXTAUTH_URL: process.env.NEXTAUTH_URL ?? `http://127.0.0.1:${port}`,
     PLAYWRIGHT_SKIP_BROWSER_DOWNLOAD: "1",

@@ -33,9 +33,11 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
   return (
     <form onSubmit={(e) => void onSubmit(e)} className="space-y-4" noValidate>
       {error && (
-        <Notice tone="fault" role="alert">
-          {error}
-        </Notice>
+        <div data-testid="sign-in-error">
+          <Notice tone="fault" role="alert">
+            {error}
+          </Notice>
+        </div>
       )}
       <Field id="email" label="E-mail">
         <Input id="email" name="email" type="email" autoComplete="username" required autoFocus />

@@ -31,3 +31,28 @@ export function coolerNoise(hw: HardwareContext, fanRpm: number, pumpRpm: number
   const totalDbA1m = addLevelsDb([fansDbA, pumpDbA]);
   return { fansDbA, pumpDbA, totalDbA1m, totalDbAAtDistance: levelAtDistanceDb(totalDbA1m, distanceM), distanceM };
 }
+
+/**
+ * Total level of fans and pump at 1 m, the same result as coolerNoise's
+ * totalDbA1m, computed in the power domain: Σ n·10^(Lref/10)·(N/Nref)^(k/10),
+ * then 10·log10.
+ */
+export function coolerTotalDbA1m(hw: HardwareContext, fanRpm: number, pumpRpm: number): number {
+  return prepareCoolerTotal(hw)(fanRpm, pumpRpm);
+}
+
+/** coolerTotalDbA1m with per-component constants computed once: two powers and one logarithm per call. */
+export function prepareCoolerTotal(hw: HardwareContext): (fanRpm: number, pumpRpm: number) => number {
+  const source = (c: MotorComponent, count: number): ((rpm: number) => number) => {
+    const exponent = (c.soundExponent ?? DEFAULT_SOUND_EXPONENT) / 10;
+    if (!(c.soundRefRpm > 0)) return () => 0;
+    const scale = (count * 10 ** (c.soundRefDbA / 10)) / c.soundRefRpm ** exponent;
+    return (rpm) => (rpm > 0 ? scale * rpm ** exponent : 0);
+  };
+  const fans = source(hw.fan, hw.fanCount);
+  const pump = source(hw.pump, 1);
+  return (fanRpm, pumpRpm) => {
+    const sum = fans(fanRpm) + pump(pumpRpm);
+    return sum > 0 ? 10 * Math.log10(sum) : -Infinity;
+  };
+}

@@ -49,6 +49,14 @@ function checkSlots(slots: readonly BankSlotInput[], memoryBytes: number | undef
     if (s.contentHashHex !== undefined && !/^[0-9a-fA-F]{16,64}$/.test(s.contentHashHex)) {
       errors.push({ code: "bank.bad_content_hash", message: `Slot ${i}: content hash must be 16 to 64 hex digits.` });
     }
+    const numbers = [s.profile.criticalTempC, s.profile.sensorLossDutyPct, s.profile.fans.stopBelowTempC ?? 0];
+    for (const curve of [s.profile.pump, s.profile.fans]) {
+      numbers.push(curve.hysteresisC, curve.rampUpPctPerSec, curve.rampDownPctPerSec);
+      for (const p of curve.points) numbers.push(p.tempC, p.dutyPct);
+    }
+    if (!numbers.every((n) => typeof n === "number" && Number.isFinite(n))) {
+      errors.push({ code: "bank.value_not_finite", message: `Slot ${i}: every stored value must be a finite number; validate the profile first.` });
+    }
     for (const [name, curve] of [["pump", s.profile.pump], ["fans", s.profile.fans]] as const) {
       if (curve.points.length < 1) {
         errors.push({ code: "bank.bad_point_count", message: `Slot ${i}: the ${name} curve needs at least 1 point.` });
@@ -75,6 +83,15 @@ function checkSlots(slots: readonly BankSlotInput[], memoryBytes: number | undef
  * not fit 3 bytes, a curve is empty, or the image exceeds `memoryBytes`.
  */
 export function encodeBank(slots: readonly BankSlotInput[], options: { memoryBytes?: number; slotCount?: number } = {}): EncodeBankResult {
+  try {
+    return encode(slots, options);
+  } catch {
+    // Only reached with input that does not have the profile shape (e.g. from untyped callers).
+    return { ok: false, errors: [{ code: "bank.bad_input", message: "The slots are not profile versions of the expected shape; validate each profile first." }] };
+  }
+}
+
+function encode(slots: readonly BankSlotInput[], options: { memoryBytes?: number; slotCount?: number }): EncodeBankResult {
   const errors = checkSlots(slots, options.memoryBytes);
   if (options.slotCount !== undefined && slots.length > options.slotCount) {
     errors.push({ code: "bank.exceeds_slot_count", message: `The board revision has ${options.slotCount} slots; ${slots.length} profile versions were given.` });

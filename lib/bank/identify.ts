@@ -30,6 +30,7 @@ export interface SlotIdentity {
 export function identifySlots(slots: readonly DecodedSlot[], known: readonly KnownProfileVersion[]): SlotIdentity[] {
   const byPrefix = new Map<string, KnownProfileVersion[]>();
   for (const k of known) {
+    if (typeof k?.contentHashPrefix !== "string" || typeof k.version !== "string") continue;
     const prefix = k.contentHashPrefix.slice(0, 16).toLowerCase();
     byPrefix.set(prefix, [...(byPrefix.get(prefix) ?? []), k]);
   }

@@ -23,6 +23,7 @@ export { validateProfile, validateHardware, validateProfileText, validateHardwar
 export type { ValidationIssue, ValidationResult, IssueSeverity } from "../validation/types";
 /** JSON pointer → 1-based line/column range in the text, for editor markers. */
 export { pointerToRange, PointerLocator, offsetToPosition, lineStarts } from "../validation/positions";
+/** 1-based line/column and a start–end range in text. */
 export type { TextPosition, TextRange } from "../validation/positions";
 
 // ── Speeds ───────────────────────────────────────────────────────────────────
@@ -32,31 +33,37 @@ export { dutyAtTemp, maxDutyPct } from "../speeds/curve";
 export { dutyToRpm } from "../speeds/rpm";
 /** Steady-state pump/fan duty and RPM at a liquid temperature (fan stop, critical override). */
 export { pumpStateAt, fanStateAt, fansStoppedAt } from "../speeds/at-temp";
+/** Duty, RPM and stopped flag of a motor group. */
 export type { MotorState } from "../speeds/at-temp";
 /** Temperature → duty/RPM/noise table for plots (default 20–70 °C, 1 °C steps). */
 export { evaluateCurves } from "../evaluation/curve-table";
+/** One row of the curve table, and its range options. */
 export type { CurveRow, CurveTableOptions } from "../evaluation/curve-table";
 
 // ── Acoustics ────────────────────────────────────────────────────────────────
 /** L = Lref + k·log10(N/Nref); incoherent sum; n sources +10·log10(n); −20·log10(r). */
 export { levelAtSpeedDb, addLevelsDb, identicalSourcesDb, levelAtDistanceDb } from "../acoustics/levels";
 /** Noise of a cooler (fans × n + pump) at 1 m and at a listener distance. */
-export { coolerNoise, componentLevelDbA } from "../acoustics/cooler-noise";
+export { coolerNoise, coolerTotalDbA1m, prepareCoolerTotal, componentLevelDbA } from "../acoustics/cooler-noise";
+/** Fans, pump and total levels at 1 m and at the listener distance. */
 export type { NoiseEstimate } from "../acoustics/cooler-noise";
 
 // ── Thermal ──────────────────────────────────────────────────────────────────
 /** Radiator resistance R(N), linear in N^-0.8 between the min- and max-speed anchors. */
-export { radiatorResistanceKPerW, AIR_SIDE_EXPONENT } from "../thermal/resistance";
+export { radiatorResistanceKPerW, prepareRadiator, AIR_SIDE_EXPONENT } from "../thermal/resistance";
 /** Coolants (water 25 °C, PG 30 %), ΔT = Q/(ṁ·c_p), flow ∝ pump RPM. */
 export { coolantRiseK, pumpFlowLpm, WATER_25C, PROPYLENE_GLYCOL_30, COOLANTS } from "../thermal/coolant";
+/** Density (kg/m³) and specific heat (J/kg·K) of a coolant. */
 export type { Coolant } from "../thermal/coolant";
 /** Steady liquid temperature T = Tamb + P·R(N(T)) by bisection, and a load sweep. */
 export { operatingPoint, loadSweep, heatBalanceResidualK, DEFAULT_TOLERANCE_K } from "../thermal/operating-point";
+/** Steady state at one load (liquid °C, speeds, flow, ΔT, noise, critical flag) and its options. */
 export type { OperatingPoint, OperatingPointOptions, LoadSweepOptions } from "../thermal/operating-point";
 
 // ── Transient ────────────────────────────────────────────────────────────────
 /** Hysteresis (play operator) and ramp limits over a temperature trace. */
 export { simulateTransient, applyHysteresisC, applyRampPct, MAX_TRACE_SAMPLES } from "../transient/simulate";
+/** Trace input ({ tSec, tempC | null }) and per-sample pump/fan output. */
 export type { TraceSample, TransientSample, TransientMotor } from "../transient/simulate";
 
 // ── Bank image ───────────────────────────────────────────────────────────────
@@ -68,9 +75,11 @@ export { encodeBank, versionBytes } from "../bank/encode";
 export { decodeBank } from "../bank/decode";
 /** Match decoded slots to known profile versions by content hash prefix and version. */
 export { identifySlots } from "../bank/identify";
+/** A registry entry to match against, and the match of one slot (exact / hash_only / unknown). */
 export type { KnownProfileVersion, SlotIdentity } from "../bank/identify";
 /** Image size of a set of slots, and the format constants. */
 export { bankBytes, slotBytes, BANK_MAGIC, BANK_FORMAT_VERSION, TEMP_STEP_C, DUTY_STEP_PCT } from "../bank/layout";
+/** Encoder input and results, decoded slots, and issues with code, offset, expected/actual. */
 export type { BankIssue, BankSlotInput, DecodedSlot, EncodeBankResult, DecodeBankResult } from "../bank/types";
 
 // ── Checksums and Intel HEX ──────────────────────────────────────────────────
@@ -82,15 +91,19 @@ export { sha256, toHex } from "../checksums/sha256";
 export { writeIntelHex } from "../hex/write";
 /** Intel HEX reader: checks every record checksum, 02/04 addresses; never throws. */
 export { readIntelHex } from "../hex/read";
+/** Reader result (start address, bytes) and issues with their line. */
 export type { HexIssue, ReadHexResult } from "../hex/read";
+/** Record checksum (two's complement of the byte sum) and the EOF record ":00000001FF". */
 export { recordChecksum, EOF_RECORD } from "../hex/record";
 
 // ── Versions ─────────────────────────────────────────────────────────────────
 /** Suggested next semver from a document diff (rule in docs/versioning.md). */
 export { suggestNextVersion } from "../versioning/suggest";
+/** Suggested version, bump kind and the reasons found. */
 export type { VersionSuggestion, VersionBump } from "../versioning/suggest";
 /** Board revision compatible = version in range and image fits memory. */
 export { isRevisionCompatible } from "../versioning/compatibility";
+/** Input and { ok, reasons } of the compatibility check. */
 export type { RevisionCompatibility, RevisionCompatibilityInput } from "../versioning/compatibility";
 /** Semver precedence helpers (semver.org 2.0.0 §11) over the `semver` package. */
 export { compareVersions, sortVersions, latestVersion, isValidVersion, isValidRange, satisfiesRange } from "../versioning/semver-helpers";

@@ -1,4 +1,4 @@
-import { coolerNoise } from "../acoustics/cooler-noise";
+import { prepareCoolerTotal } from "../acoustics/cooler-noise";
 import { requireFinite } from "../guards/input-error";
 import type { HardwareContext } from "../hardware/types";
 import type { ProfileSettings } from "../profile/types";
@@ -28,20 +28,22 @@ export interface CurveTableOptions {
 /**
  * Steady-state pump and fan duty, RPM and estimated noise at each liquid
  * temperature from `fromC` to `toC` (default 20–70 °C in 1 °C steps), from
- * `dutyAtTemp`, `dutyToRpm` and `coolerNoise`.
+ * `dutyAtTemp`, `dutyToRpm` and `coolerTotalDbA1m` (same sums as `coolerNoise`).
  */
 export function evaluateCurves(profile: ProfileSettings, hw: HardwareContext, options: CurveTableOptions = {}): CurveRow[] {
   const fromC = requireFinite("fromC", options.fromC ?? 20, -50, 150);
   const toC = requireFinite("toC", options.toC ?? 70, fromC, 150);
   const stepC = requireFinite("stepC", options.stepC ?? 1, 0.01, 100);
   const distanceM = requireFinite("distanceM", options.distanceM ?? 1, 0.01, 1000);
+  const distanceOffsetDb = 20 * Math.log10(distanceM);
+  const totalDbA1m = prepareCoolerTotal(hw);
   const rows: CurveRow[] = [];
   const count = Math.floor((toC - fromC) / stepC + 1e-9);
   for (let i = 0; i <= count; i++) {
     const tempC = fromC + i * stepC;
     const pump = pumpStateAt(profile, hw, tempC);
     const fans = fanStateAt(profile, hw, tempC);
-    const noise = coolerNoise(hw, fans.rpm, pump.rpm, distanceM);
+    const soundDbA1m = totalDbA1m(fans.rpm, pump.rpm);
     rows.push({
       tempC,
       pumpDutyPct: pump.dutyPct,
@@ -49,8 +51,8 @@ export function evaluateCurves(profile: ProfileSettings, hw: HardwareContext, op
       fanDutyPct: fans.dutyPct,
       fanRpm: fans.rpm,
       fansStopped: fans.stopped,
-      soundDbA1m: noise.totalDbA1m,
-      soundDbAAtDistance: noise.totalDbAAtDistance,
+      soundDbA1m,
+      soundDbAAtDistance: soundDbA1m - distanceOffsetDb,
     });
   }
   return rows;

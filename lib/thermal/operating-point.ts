@@ -4,7 +4,7 @@ import { DEFAULT_STOPPED_RESISTANCE_FACTOR, type HardwareContext } from "../hard
 import type { ProfileSettings } from "../profile/types";
 import { fanStateAt, pumpStateAt, type MotorState } from "../speeds/at-temp";
 import { coolantRiseK, pumpFlowLpm, WATER_25C, type Coolant } from "./coolant";
-import { radiatorResistanceKPerW } from "./resistance";
+import { prepareRadiator } from "./resistance";
 
 /** Bisection stops when the bracket around the liquid temperature is this narrow. */
 export const DEFAULT_TOLERANCE_K = 0.001;
@@ -50,7 +50,7 @@ export interface OperatingPoint {
 /** g(T) = T − Tamb − P·R(N_fan(T)); non-decreasing in T, so its root is unique. */
 export function heatBalanceResidualK(profile: ProfileSettings, hw: HardwareContext, heatLoadW: number, ambientC: number, tempC: number): number {
   const fanRpm = fanStateAt(profile, hw, tempC).rpm;
-  return tempC - ambientC - heatLoadW * radiatorResistanceKPerW(hw, fanRpm);
+  return tempC - ambientC - heatLoadW * prepareRadiator(hw)(fanRpm);
 }
 
 /**
@@ -58,31 +58,41 @@ export function heatBalanceResidualK(profile: ProfileSettings, hw: HardwareConte
  * T = Tamb + P·R(N_fan(T)), found by bisection to `toleranceK` (default 0.001 K).
  * R falls as the fans speed up and the fan speed does not fall as T rises, so
  * g(T) = T − Tamb − P·R(N(T)) is non-decreasing and the root is unique; the
- * bracket [Tamb, Tamb + P·Rlargest] always holds it. Then: pump and fan speeds,
+ * bracket [Tamb + P·Rfast, Tamb + P·Rlargest] always holds it. Then: pump and fan speeds,
  * noise (see coolerNoise), pump flow V̇ ∝ N and coolant rise ΔT = Q/(ṁ·c_p)
  * (Incropera & DeWitt, ch. 1). An estimate from a lumped model: a release still
  * needs lab measurement on real hardware.
  */
 export function operatingPoint(profile: ProfileSettings, hw: HardwareContext, options: OperatingPointOptions): OperatingPoint {
+  return solve(profile, hw, prepareRadiator(hw), options, -Infinity);
+}
+
+function solve(profile: ProfileSettings, hw: HardwareContext, resistance: (fanRpm: number) => number, options: OperatingPointOptions, loHintC: number): OperatingPoint {
   const heatLoadW = requireFinite("heatLoadW", options.heatLoadW, 0, 100_000);
   const ambientC = requireFinite("ambientC", options.ambientC, -50, 100);
   const toleranceK = requireFinite("toleranceK", options.toleranceK ?? DEFAULT_TOLERANCE_K, 1e-9, 10);
   const distanceM = requireFinite("distanceM", options.distanceM ?? 1, 0.01, 1000);
   const coolant = options.coolant ?? WATER_25C;
+  const g = (tempC: number): number => tempC - ambientC - heatLoadW * resistance(fanStateAt(profile, hw, tempC).rpm);
 
   const rSlow = hw.radiator.thermalResistanceAtMinFanKPerW;
   const rLargest = Math.max(rSlow, hw.radiator.thermalResistanceFansStoppedKPerW ?? rSlow * DEFAULT_STOPPED_RESISTANCE_FACTOR);
-  let lo = ambientC;
+  // R never falls below its max-speed value nor rises above its largest, so the root lies in
+  // [Tamb + P·Rfast, Tamb + P·Rlargest]: g ≤ 0 at the low end and ≥ 0 at the high end. In a
+  // sweep of rising loads the previous root is a lower bound too (the root rises with P).
+  const rFast = Math.min(rSlow, hw.radiator.thermalResistanceAtMaxFanKPerW);
+  let lo = ambientC + heatLoadW * rFast;
   let hi = ambientC + heatLoadW * rLargest;
+  if (loHintC > lo && loHintC < hi && g(loHintC) <= 0) lo = loHintC;
   let iterations = 0;
   while (hi - lo > toleranceK && iterations < 200) {
     const mid = (lo + hi) / 2;
-    if (heatBalanceResidualK(profile, hw, heatLoadW, ambientC, mid) < 0) lo = mid;
+    if (g(mid) < 0) lo = mid;
     else hi = mid;
     iterations++;
   }
   const liquidTempC = (lo + hi) / 2;
-  const residualK = heatBalanceResidualK(profile, hw, heatLoadW, ambientC, liquidTempC);
+  const residualK = g(liquidTempC);
   const stopC = profile.fans.stopBelowTempC;
   const onFanStopStep = stopC !== undefined && Math.abs(residualK) > toleranceK * 100 && Math.abs(liquidTempC - stopC) <= toleranceK;
 
@@ -97,7 +107,7 @@ export function operatingPoint(profile: ProfileSettings, hw: HardwareContext, op
     residualK,
     onFanStopStep,
     iterations,
-    thermalResistanceKPerW: radiatorResistanceKPerW(hw, fans.rpm),
+    thermalResistanceKPerW: resistance(fans.rpm),
     pump,
     fans,
     pumpFlowLpm: flowLpm,
@@ -123,10 +133,14 @@ export function loadSweep(profile: ProfileSettings, hw: HardwareContext, options
   const toW = requireFinite("toW", options.toW ?? 350, fromW, 100_000);
   const count = requireFinite("count", options.count ?? 31, 1, 10_000);
   const n = Math.floor(count);
+  const resistance = prepareRadiator(hw);
   const out: OperatingPoint[] = [];
+  let hint = -Infinity;
   for (let i = 0; i < n; i++) {
     const heatLoadW = n === 1 ? fromW : fromW + ((toW - fromW) * i) / (n - 1);
-    out.push(operatingPoint(profile, hw, { ...options, heatLoadW }));
+    const point = solve(profile, hw, resistance, { ...options, heatLoadW }, hint);
+    hint = point.bracketC[0];
+    out.push(point);
   }
   return out;
 }

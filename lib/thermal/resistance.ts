@@ -23,16 +23,26 @@ export const AIR_SIDE_EXPONENT = 0.8;
  * (given, or DEFAULT_STOPPED_RESISTANCE_FACTOR × the min-speed value).
  */
 export function radiatorResistanceKPerW(hw: HardwareContext, fanRpm: number): number {
+  return prepareRadiator(hw)(fanRpm);
+}
+
+/**
+ * radiatorResistanceKPerW with the anchor terms computed once: one power per
+ * call, for the bisection loop of the operating point.
+ */
+export function prepareRadiator(hw: HardwareContext): (fanRpm: number) => number {
   const { thermalResistanceAtMinFanKPerW: rSlow, thermalResistanceAtMaxFanKPerW: rFast } = hw.radiator;
-  if (!(fanRpm > 0)) {
-    return hw.radiator.thermalResistanceFansStoppedKPerW ?? rSlow * DEFAULT_STOPPED_RESISTANCE_FACTOR;
-  }
+  const rStopped = hw.radiator.thermalResistanceFansStoppedKPerW ?? rSlow * DEFAULT_STOPPED_RESISTANCE_FACTOR;
   const nMin = hw.fan.rpmAtMinDuty;
   const nMax = hw.fan.maxRpm;
-  if (fanRpm <= nMin || nMax <= nMin) return fanRpm >= nMax ? rFast : rSlow;
-  if (fanRpm >= nMax) return rFast;
-  const x = fanRpm ** -AIR_SIDE_EXPONENT;
+  if (!(nMax > nMin)) return (fanRpm) => (!(fanRpm > 0) ? rStopped : fanRpm >= nMax ? rFast : rSlow);
   const xMin = nMin ** -AIR_SIDE_EXPONENT;
   const xMax = nMax ** -AIR_SIDE_EXPONENT;
-  return rFast + ((rSlow - rFast) * (x - xMax)) / (xMin - xMax);
+  const slope = (rSlow - rFast) / (xMin - xMax);
+  return (fanRpm) => {
+    if (!(fanRpm > 0)) return rStopped;
+    if (fanRpm <= nMin) return rSlow;
+    if (fanRpm >= nMax) return rFast;
+    return rFast + slope * (fanRpm ** -AIR_SIDE_EXPONENT - xMax);
+  };
 }

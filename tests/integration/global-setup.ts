@@ -5,6 +5,7 @@ import { execFileSync } from "node:child_process";
 export default function setup() {
   if (!process.env.DATABASE_URL) {
     execFileSync("node", ["scripts/pg.mjs", "up", "loopkeeper_test"], { stdio: "inherit" });
+    process.env.LOOPKEEPER_LOCAL_CLUSTER = "1";
     process.env.DATABASE_URL = execFileSync("node", ["scripts/pg.mjs", "url", "loopkeeper_test"], { encoding: "utf8" }).trim();
   }
   process.env.NEXTAUTH_SECRET ??= "integration-tests-secret-integration-tests-secret";

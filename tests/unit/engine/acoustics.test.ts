@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { addLevelsDb, coolerNoise, identicalSourcesDb, levelAtDistanceDb, levelAtSpeedDb } from "@/lib/engine";
+import { addLevelsDb, coolerNoise, coolerTotalDbA1m, identicalSourcesDb, levelAtDistanceDb, levelAtSpeedDb } from "@/lib/engine";
 import { exampleHardware, hardwareArb } from "./fixtures";
 
 describe("sound level arithmetic", () => {
@@ -63,6 +63,14 @@ describe("sound level arithmetic", () => {
         const [lo, hi] = a <= b ? [a, b] : [b, a];
         expect(coolerNoise(hw, hi, pumpRpm).totalDbA1m).toBeGreaterThanOrEqual(coolerNoise(hw, lo, pumpRpm).totalDbA1m - 1e-9);
         expect(coolerNoise(hw, pumpRpm, hi).totalDbA1m).toBeGreaterThanOrEqual(coolerNoise(hw, pumpRpm, lo).totalDbA1m - 1e-9);
+      }),
+    );
+  });
+
+  it("property: the power-domain total equals the dB-domain sum", () => {
+    fc.assert(
+      fc.property(hardwareArb, fc.double({ min: 0, max: 5000, noNaN: true }), fc.double({ min: 1, max: 5000, noNaN: true }), (hw, fanRpm, pumpRpm) => {
+        expect(coolerTotalDbA1m(hw, fanRpm, pumpRpm)).toBeCloseTo(coolerNoise(hw, fanRpm, pumpRpm).totalDbA1m, 9);
       }),
     );
   });

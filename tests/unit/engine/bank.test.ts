@@ -108,6 +108,11 @@ describe("bank image", () => {
     expect(bad([{ profile: p, version: "1.0.0" }], { memoryBytes: 20 })).toContain("bank.exceeds_memory");
     expect(bad([{ profile: p, version: "1.0.0" }, { profile: p, version: "1.0.1" }], { slotCount: 1 })).toContain("bank.exceeds_slot_count");
     expect(bad(Array.from({ length: 17 }, () => ({ profile: p, version: "1.0.0" })))).toContain("bank.too_many_slots");
+    const nan = quietProfile();
+    nan.pump.points[0]!.dutyPct = Number.NaN;
+    expect(bad([{ profile: nan, version: "1.0.0" }])).toContain("bank.value_not_finite");
+    expect(bad([{ profile: {} as never, version: "1.0.0" }])).toEqual(["bank.bad_input"]);
+    expect(bad(null as never)).toEqual(["bank.bad_input"]);
   });
 
   it("property: the decoder never throws on random bytes, and random bytes after a valid header fail cleanly", () => {
@@ -144,5 +149,7 @@ describe("identify", () => {
     expect(ids.map((i) => i.match)).toEqual(["exact", "hash_only", "unknown"]);
     expect(ids[0]!.profileVersionId).toBe("pv-quiet-1");
     expect(ids[1]!.knownVersion).toBe("1.9.0");
+    // Malformed registry entries are skipped, not fatal.
+    expect(identifySlots(decodeBank(bytes).slots, [null, { profileVersionId: "x" }] as never).map((i) => i.match)).toEqual(["unknown", "unknown", "unknown"]);
   });
 });

@@ -105,6 +105,11 @@ describe("operating point", () => {
     expect(sweep[0]!.heatLoadW).toBe(50);
     expect(sweep[30]!.heatLoadW).toBe(350);
     for (let i = 1; i < sweep.length; i++) expect(sweep[i]!.liquidTempC).toBeGreaterThanOrEqual(sweep[i - 1]!.liquidTempC);
+    // The sweep's warm start finds the same roots as solving each load alone.
+    for (const point of sweep) {
+      const alone = operatingPoint(performanceProfile(), hw, { heatLoadW: point.heatLoadW, ambientC: 25 });
+      expect(Math.abs(point.liquidTempC - alone.liquidTempC)).toBeLessThanOrEqual(0.001);
+    }
   });
 
   it("rejects bad input naming the parameter", () => {

@@ -1,0 +1,113 @@
+/**
+ * Engine benchmark: `npm run bench:engine`. Times validate + evaluate, the
+ * operating-point load sweep and bank encoding over generated profiles, then
+ * writes its section of docs/benchmarks.md (between its own markers only).
+ */
+import { existsSync, readFileSync, writeFileSync } from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import { encodeBank, evaluateCurves, loadSweep, validateProfile, type CoolingProfile, type CurvePoint, type HardwareContext } from "../lib/engine";
+
+const PROFILES = 10_000;
+const root = path.resolve(__dirname, "..");
+const hw = JSON.parse(readFileSync(path.join(root, "examples/cooler-360.hardware.json"), "utf8")) as HardwareContext;
+
+/** Small deterministic PRNG (mulberry32) so runs compare. */
+function rng(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+function curve(rand: () => number, n: number, minDuty: number, endC: number): CurvePoint[] {
+  const points: CurvePoint[] = [];
+  const startC = 20 + Math.floor(rand() * 20) / 2;
+  const stepC = (endC - startC) / (n - 1);
+  let duty = minDuty + Math.floor(rand() * 20) / 2;
+  for (let i = 0; i < n; i++) {
+    points.push({ tempC: Math.round((startC + stepC * i) * 2) / 2, dutyPct: i === n - 1 ? 100 : duty });
+    duty = Math.min(100, duty + Math.floor(rand() * 30) / 2);
+  }
+  return points;
+}
+
+function generate(count: number): CoolingProfile[] {
+  const rand = rng(20240601);
+  return Array.from({ length: count }, (_, i) => {
+    const criticalTempC = 55 + Math.floor(rand() * 10);
+    const profile: CoolingProfile = {
+      formatVersion: 1,
+      name: `Generated ${i}`,
+      criticalTempC,
+      sensorLossDutyPct: 100,
+      pump: { points: curve(rand, 3 + Math.floor(rand() * 6), 40, criticalTempC - 2), hysteresisC: 1, rampUpPctPerSec: 10, rampDownPctPerSec: 5 },
+      fans: { points: curve(rand, 3 + Math.floor(rand() * 6), 20, criticalTempC - 1), hysteresisC: 1.5, rampUpPctPerSec: 10, rampDownPctPerSec: 5 },
+    };
+    if (rand() < 0.5) profile.fans.stopBelowTempC = 28;
+    return profile;
+  });
+}
+
+interface Timing {
+  label: string;
+  /** Process CPU time (user + system) per profile: steady on a shared, busy machine. */
+  cpuUsPerProfile: number;
+  /** Wall-clock time per profile: what a user waits, inflated when other processes compete for the CPU. */
+  wallUsPerProfile: number;
+}
+
+function time(label: string, profiles: readonly CoolingProfile[], fn: (p: CoolingProfile) => void): Timing {
+  for (let i = 0; i < Math.min(200, profiles.length); i++) fn(profiles[i]!); // warm-up (JIT, Ajv compile)
+  const cpu = process.cpuUsage();
+  const started = process.hrtime.bigint();
+  for (const p of profiles) fn(p);
+  const ns = Number(process.hrtime.bigint() - started);
+  const used = process.cpuUsage(cpu);
+  return { label, cpuUsPerProfile: (used.user + used.system) / profiles.length, wallUsPerProfile: ns / 1000 / profiles.length };
+}
+
+const profiles = generate(PROFILES);
+let invalid = 0;
+const results = [
+  time("validate + evaluate (20–70 °C, 1 °C steps)", profiles, (p) => {
+    if (!validateProfile(p, hw).ok) invalid++;
+    evaluateCurves(p, hw, { fromC: 20, toC: 70, stepC: 1 });
+  }),
+  time("operating-point sweep (31 loads, 50–350 W)", profiles, (p) => void loadSweep(p, hw, { ambientC: 25 })),
+  time("encode (1 slot, with content hash)", profiles, (p) => {
+    if (!encodeBank([{ profile: p, version: "1.2.3" }]).ok) throw new Error("encode failed");
+  }),
+];
+const maxRssMiB = process.resourceUsage().maxRSS / 1024;
+const heapMiB = process.memoryUsage().heapUsed / 1024 / 1024;
+
+const targets: Record<string, number> = { [results[0]!.label]: 50, [results[1]!.label]: 500 };
+const rows = results.map((r) => `| ${r.label} | ${r.cpuUsPerProfile.toFixed(1)} | ${r.wallUsPerProfile.toFixed(1)} | ${targets[r.label] !== undefined ? `< ${targets[r.label]}` : "—"} |`);
+const section = [
+  "<!-- bench:engine:start -->",
+  "## Engine",
+  "",
+  "Command: `npm run bench:engine` (bench/engine.ts). " +
+    `${PROFILES.toLocaleString("en")} generated profiles (3–8 points per curve, half with fan stop), example hardware context, one run after a warm-up of 200.`,
+  "",
+  `Machine: Node ${process.version}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? "cpu"}, ${os.platform()}, load average ${os.loadavg()[0]!.toFixed(1)} at the end of the run (the CPU column is the steadier one on a shared machine). Run ${new Date().toISOString().slice(0, 10)}.`,
+  "",
+  "| step | CPU µs per profile | wall µs per profile | target µs |",
+  "|---|---:|---:|---:|",
+  ...rows,
+  "",
+  `Peak memory: max RSS ${maxRssMiB.toFixed(0)} MiB; heap in use at the end ${heapMiB.toFixed(0)} MiB. Profiles failing validation: ${invalid} (expected 0).`,
+  "<!-- bench:engine:end -->",
+].join("\n");
+
+const docFile = path.join(root, "docs/benchmarks.md");
+const existing = existsSync(docFile) ? readFileSync(docFile, "utf8") : "# Benchmarks\n";
+const re = /<!-- bench:engine:start -->[\s\S]*?<!-- bench:engine:end -->/;
+const updated = re.test(existing) ? existing.replace(re, section) : `${existing.trimEnd()}\n\n${section}\n`;
+writeFileSync(docFile, updated);
+console.log(section);

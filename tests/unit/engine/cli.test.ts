@@ -1,0 +1,198 @@
+import { spawnSync } from "node:child_process";
+import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { beforeAll, describe, expect, it } from "vitest";
+import { decodeBank, readIntelHex } from "@/lib/engine";
+import { examplePath } from "./fixtures";
+
+const root = path.resolve(__dirname, "../../..");
+const bin = path.join(root, "bin/loopkeeper.mjs");
+const hw = examplePath("cooler-360.hardware.json");
+const quiet = examplePath("quiet.profile.json");
+const perf = examplePath("performance.profile.json");
+
+function cli(...args: string[]): { code: number | null; stdout: string; stderr: string } {
+  const r = spawnSync(process.execPath, [bin, ...args], { cwd: root, encoding: "utf8", timeout: 30_000 });
+  return { code: r.status, stdout: r.stdout, stderr: r.stderr };
+}
+
+const noStack = (text: string): void => {
+  expect(text).not.toMatch(/\n\s+at .+:\d+:\d+/);
+  expect(text).not.toMatch(/node:internal/);
+};
+
+let dir = "";
+const tmp = (name: string, content?: string | Uint8Array): string => {
+  const f = path.join(dir, name);
+  if (content !== undefined) writeFileSync(f, content);
+  return f;
+};
+
+beforeAll(() => {
+  dir = mkdtempSync(path.join(tmpdir(), "loopkeeper-cli-"));
+});
+
+describe("cli validate", { timeout: 60_000 }, () => {
+  it("accepts the example profile (exit 0)", () => {
+    const r = cli("validate", quiet, "--hardware", hw);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/valid/);
+  });
+
+  it("malformed JSON: exit 1 with file:line:column", () => {
+    const line3 = '  "criticalTempC": 60,,';
+    const f = tmp("broken.json", `{\n  "name": "x",\n${line3}\n}`);
+    const r = cli("validate", f);
+    expect(r.code).toBe(1);
+    // The second comma is where a property name was expected.
+    expect(r.stderr).toContain(`${f}:3:${line3.indexOf(",,") + 2}: error json.syntax`);
+    noStack(r.stderr);
+  });
+
+  it("wrong types: exit 1 naming the JSON pointer, also as --json", () => {
+    const doc = JSON.parse(readFileSync(quiet, "utf8"));
+    doc.pump.points[1].dutyPct = "fifty";
+    const f = tmp("types.json", JSON.stringify(doc, null, 2));
+    const r = cli("validate", f);
+    expect(r.code).toBe(1);
+    expect(r.stderr).toMatch(/schema\.wrong_type \(\/pump\/points\/1\/dutyPct\)/);
+    const j = cli("validate", f, "--json");
+    expect(j.code).toBe(1);
+    const out = JSON.parse(j.stdout);
+    expect(out.ok).toBe(false);
+    expect(out.issues[0]).toMatchObject({ code: "schema.wrong_type", path: "/pump/points/1/dutyPct" });
+    expect(out.issues[0].range.start.line).toBeGreaterThan(1);
+  });
+
+  it("usage errors exit 2: no file, unknown option, missing file", () => {
+    expect(cli("validate").code).toBe(2);
+    expect(cli("validate", quiet, "--bogus").code).toBe(2);
+    const missing = cli("validate", tmp("nope.json"));
+    expect(missing.code).toBe(2);
+    expect(missing.stderr).toMatch(/nope\.json: no such file/);
+    expect(cli("frobnicate").code).toBe(2);
+    noStack(missing.stderr);
+  });
+});
+
+describe("cli evaluate", { timeout: 60_000 }, () => {
+  it("prints the curve and operating point, --json with numbers", () => {
+    const r = cli("evaluate", perf, "--hardware", hw, "--load", "250", "--ambient", "25", "--distance", "2");
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/Operating point at 250 W/);
+    expect(r.stdout).toMatch(/lab measurement/);
+    const j = JSON.parse(cli("evaluate", perf, "--hardware", hw, "--json").stdout);
+    expect(j.curve).toHaveLength(51);
+    expect(j.sweep).toHaveLength(31);
+    expect(j.operatingPoint.heatLoadW).toBe(200);
+  });
+
+  it("bad numbers and a missing --hardware are usage errors; negative load is invalid input", () => {
+    expect(cli("evaluate", perf, "--hardware", hw, "--load", "lots").code).toBe(2);
+    expect(cli("evaluate", perf).code).toBe(2);
+    const neg = cli("evaluate", perf, "--hardware", hw, "--load", "-5");
+    expect(neg.code).toBe(1);
+    expect(neg.stderr).toMatch(/heatLoadW/);
+    noStack(neg.stderr);
+  });
+
+  it("an invalid hardware file is listed with its path", () => {
+    const f = tmp("hw-bad.json", '{"fanCount": "three"}');
+    const r = cli("evaluate", perf, "--hardware", f);
+    expect(r.code).toBe(1);
+    expect(r.stderr).toContain(`${f}:1:`);
+  });
+});
+
+describe("cli bank and inspect", { timeout: 60_000 }, () => {
+  it("writes .bin and .hex that decode to the same slots", () => {
+    const bin2 = tmp("bank.bin");
+    const hex = tmp("bank.hex");
+    const r = cli("bank", quiet, perf, "--hardware", hw, "--out", bin2, "--hex", hex, "--versions", "1.0.0,2.3.1");
+    expect(r.code).toBe(0);
+    const bytes = new Uint8Array(readFileSync(bin2));
+    const decoded = decodeBank(bytes);
+    expect(decoded.ok).toBe(true);
+    expect(decoded.slots.map((s) => s.version)).toEqual(["1.0.0", "2.3.1"]);
+    const fromHex = readIntelHex(readFileSync(hex, "utf8"));
+    expect(fromHex.startAddress).toBe(0x0801f800);
+    expect(fromHex.bytes).toEqual(bytes);
+    for (const f of [bin2, hex]) {
+      const i = cli("inspect", f);
+      expect(i.code).toBe(0);
+      expect(i.stdout).toMatch(/CRC-32 stored 0x[0-9A-F]{8}, computed 0x[0-9A-F]{8}: match/);
+      expect(i.stdout).toMatch(/slot 1: v2\.3\.1/);
+    }
+  });
+
+  it("identifies slots against a known list", () => {
+    const b = tmp("bank-known.bin");
+    expect(cli("bank", quiet, "--hardware", hw, "--out", b).code).toBe(0);
+    const slotHash = decodeBank(new Uint8Array(readFileSync(b))).slots[0]!.contentHashPrefix;
+    const known = tmp("known.json", JSON.stringify([{ profileVersionId: "pv-hush-1", contentHashPrefix: slotHash, version: "1.0.0" }]));
+    const r = cli("inspect", b, "--known", known, "--json");
+    expect(JSON.parse(r.stdout).identities[0]).toMatchObject({ match: "exact", profileVersionId: "pv-hush-1" });
+  });
+
+  it("refuses a profile that breaks the board's limits, and bad --versions", () => {
+    const doc = JSON.parse(readFileSync(quiet, "utf8"));
+    doc.pump.points[0].dutyPct = 10;
+    const f = tmp("pump-low.json", JSON.stringify(doc, null, 2));
+    const r = cli("bank", f, "--hardware", hw, "--out", tmp("x.bin"));
+    expect(r.code).toBe(1);
+    expect(r.stderr).toMatch(/pump\.below_min_duty/);
+    expect(cli("bank", quiet, "--hardware", hw, "--out", tmp("y.bin"), "--versions", "1.0.0,2.0.0").code).toBe(2);
+    const pre = cli("bank", quiet, "--hardware", hw, "--out", tmp("z.bin"), "--versions", "1.0.0-rc.1");
+    expect(pre.code).toBe(1);
+    expect(pre.stderr).toMatch(/bank\.version_not_encodable/);
+  });
+
+  it("truncated and bit-flipped banks: exit 1 naming the offset", () => {
+    const b = tmp("good.bin");
+    expect(cli("bank", quiet, "--hardware", hw, "--out", b).code).toBe(0);
+    const bytes = new Uint8Array(readFileSync(b));
+    const cut = cli("inspect", tmp("cut.bin", bytes.subarray(0, 30)));
+    expect(cut.code).toBe(1);
+    expect(cut.stderr).toMatch(/@ byte 30: error bank\.truncated: The header gives \d+ bytes but only 30 are present/);
+    const flipped = bytes.slice();
+    flipped[12] = flipped[12]! ^ 0x80;
+    const bad = cli("inspect", tmp("flip.bin", flipped));
+    expect(bad.code).toBe(1);
+    expect(bad.stderr).toMatch(/error bank\.crc_mismatch/);
+    const garbage = cli("inspect", tmp("garbage.bin", new Uint8Array([1, 2, 3])));
+    expect(garbage.code).toBe(1);
+    noStack(garbage.stderr);
+  });
+
+  it("HEX with a bad checksum: exit 1 naming the line", () => {
+    const h = tmp("good.hex");
+    expect(cli("bank", quiet, "--hardware", hw, "--out", tmp("g.bin"), "--hex", h).code).toBe(0);
+    const lines = readFileSync(h, "utf8").split("\n");
+    lines[2] = `${lines[2]!.slice(0, -2)}${lines[2]!.endsWith("00") ? "01" : "00"}`;
+    const r = cli("inspect", tmp("bad.hex", lines.join("\n")));
+    expect(r.code).toBe(1);
+    expect(r.stderr).toMatch(/bad\.hex:3: error hex\.bad_checksum/);
+    noStack(r.stderr);
+  });
+});
+
+describe("cli tach", { timeout: 60_000 }, () => {
+  it("converts a reading and a frequency", () => {
+    // Intel 4-Wire PWM fan spec rev 1.3 §2.1.4: RPM = 60·f/2; 50 Hz → 1,500 RPM.
+    expect(JSON.parse(cli("tach", "--hz", "50", "--json").stdout).rpm).toBe(1500);
+    // Common practice: a 4-pulse pump read by a 2-pulse host shows twice its speed.
+    expect(cli("tach", "--reading", "5600", "--pulses", "4").stdout).toMatch(/2800 RPM real/);
+  });
+
+  it("bad input", () => {
+    expect(cli("tach", "--reading", "5600").code).toBe(2);
+    expect(cli("tach", "--reading", "abc", "--pulses", "4").code).toBe(2);
+    const zero = cli("tach", "--reading", "5600", "--pulses", "0");
+    expect(zero.code).toBe(1);
+    expect(zero.stderr).toMatch(/motorPulsesPerRev/);
+    const j = cli("tach", "--json");
+    expect(j.code).toBe(2);
+    expect(JSON.parse(j.stdout)).toMatchObject({ ok: false, exitCode: 2 });
+  });
+});
