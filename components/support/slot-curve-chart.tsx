@@ -17,7 +17,7 @@ export default function SlotCurveChart({ slot, revision }: { slot: LookupSlot; r
             <CartesianGrid stroke="#e4e1dc" strokeDasharray="3 3" />
             <XAxis dataKey="tempC" type="number" domain={[20, 70]} unit=" °C" tick={{ fontSize: 12 }} />
             <YAxis yAxisId="rpm" tick={{ fontSize: 12 }} width={56} unit="" label={{ value: "RPM", angle: -90, position: "insideLeft", fontSize: 12 }} />
-            <Tooltip formatter={(v) => (typeof v === "number" ? Math.round(v).toLocaleString("en") : String(v))} labelFormatter={(t) => `${String(t)} °C liquid`} />
+            <Tooltip formatter={(v) => (typeof v === "number" ? Math.round(v).toLocaleString("en") : String(v))} labelFormatter={(t) => `${typeof t === "number" || typeof t === "string" ? t : ""} °C liquid`} />
             <Legend />
             <Line yAxisId="rpm" type="monotone" dataKey="pumpRpm" name="Pump RPM" stroke="#1d6fa3" dot={false} strokeWidth={2} isAnimationActive={false} />
             <Line yAxisId="rpm" type="monotone" dataKey="fanRpm" name="Fan RPM" stroke="#b2562a" dot={false} strokeWidth={2} isAnimationActive={false} />
