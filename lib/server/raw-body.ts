@@ -4,8 +4,9 @@ import { AppError } from "@/lib/api/errors";
 
 /** Reads a request body as bytes, stopping as soon as it passes `maxBytes` (413), whatever Content-Length claims. */
 export async function readRawBody(req: NextRequest, { maxBytes, contentTypes }: { maxBytes: number; contentTypes: readonly string[] }): Promise<{ bytes: Buffer; contentType: string }> {
-  const contentType = (req.headers.get("content-type") ?? "").toLowerCase();
-  const base = contentType.split(";")[0]!.trim();
+  // Keep the header as sent: a multipart boundary is case-sensitive.
+  const contentType = req.headers.get("content-type") ?? "";
+  const base = contentType.split(";")[0]!.trim().toLowerCase();
   if (!contentTypes.includes(base)) throw new AppError("unsupported_media_type", `Send the file as ${contentTypes.join(", ")}.`);
   const declared = Number(req.headers.get("content-length") ?? "0");
   const tooLarge = () => new AppError("payload_too_large", `The upload is larger than ${Math.round(maxBytes / 1024)} KiB.`);

@@ -10,7 +10,7 @@ export const POST = apiRoute(identifyDump, async ({ req }) => {
   // Multipart framing adds a little to the file itself.
   const { bytes, contentType } = await readRawBody(req, { maxBytes: MAX_DUMP_BYTES + 4096, contentTypes: identifyDump.rawBody!.contentTypes });
   let file: { name: string | null; bytes: Buffer };
-  if (contentType.startsWith("multipart/form-data")) {
+  if (/^multipart\/form-data/i.test(contentType)) {
     const part = await firstFormFile(bytes, contentType);
     if (!part) throw new AppError("bad_request", "The form holds no file; attach the .bin or .hex dump.");
     file = part;
