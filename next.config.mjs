@@ -29,7 +29,7 @@ const nextConfig = {
   distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,
   reactStrictMode: true,
-  serverExternalPackages: ["pg", "bcryptjs", "nodemailer", "smtp-server", "@aws-sdk/client-s3"],
+  serverExternalPackages: ["pino", "pg", "bcryptjs", "nodemailer", "smtp-server", "@aws-sdk/client-s3"],
   experimental: { authInterrupts: true },
   async headers() {
     return [{ source: "/:path*", headers: securityHeaders }];

@@ -19,7 +19,8 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: `npx next start -H 127.0.0.1 -p ${port}`,
+    command: `node scripts/serve.mjs`,
+    env: { PORT: String(port), HOST: "127.0.0.1", NODE_ENV: "production" },
     url: `http://127.0.0.1:${port}/api/health`,
     reuseExistingServer: false,
     timeout: 120_000,

@@ -2,6 +2,7 @@ import "server-only";
 import { and, desc, eq, gte, ilike, lte, or, type SQL } from "drizzle-orm";
 import { auditEvents } from "./schema";
 import type { Executor } from "./client";
+import { logger } from "@/lib/server/log";
 
 export interface AuditActor {
   userId: string | null;
@@ -25,6 +26,7 @@ export async function recordAudit(
     after: event.after ?? null,
     requestId: actor.requestId ?? null,
   });
+  logger.info({ requestId: actor.requestId, actor: actor.label, action: event.action, entityType: event.entityType, entityId: event.entityId }, "audit");
 }
 
 export interface AuditFilter {

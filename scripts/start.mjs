@@ -18,10 +18,10 @@ if (process.env.LOOPKEEPER_SKIP_BUILD !== "1" || !fs.existsSync(path.join(root, 
 
 const fakes = await startFakes(env);
 log(`Serving Loopkeeper on http://127.0.0.1:${port} — demo accounts are listed in README.md.`);
-const server = spawn(path.join(root, "node_modules", ".bin", "next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+const server = spawn(process.execPath, [path.join(root, "scripts", "serve.mjs")], {
   cwd: root,
   stdio: "inherit",
-  env: { ...env, ...fakes.env, NODE_ENV: "production" },
+  env: { ...env, ...fakes.env, NODE_ENV: "production", PORT: String(port), HOST: "127.0.0.1" },
 });
 
 function stop(signal) {

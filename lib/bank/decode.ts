@@ -93,7 +93,7 @@ function readSlot(bytes: Uint8Array, offset: number, limit: number, index: numbe
     errors.push({ code: "bank.bad_slot_length", message: `Slot ${index} says it is ${length} bytes but its contents take ${r.at - offset}.`, offset, expected: length, actual: r.at - offset });
     return { slot: null, next: end };
   }
-  const fans: FanCurve = stop === NO_FAN_STOP ? fansCurve : { ...fansCurve, stopBelowTempC: tempFromCode(stop!) };
+  const fans: FanCurve = stop === NO_FAN_STOP ? fansCurve : { ...fansCurve, stopBelowTempC: tempFromCode(stop) };
   const settings: ProfileSettings = { criticalTempC: tempFromCode(critical), sensorLossDutyPct: dutyFromCode(sensorLoss), pump, fans };
   return { slot: { index, offset, contentHashPrefix: hash, version, settings }, next: end };
 }

@@ -1,4 +1,4 @@
-import type { BoardRevision as EngineBoardRevision, HardwareContext, MotorComponent, PumpComponent } from "@/lib/engine";
+import type { BoardRevision as EngineBoardRevision, HardwareContext, MotorComponent } from "@/lib/engine";
 
 /** The registry's fields the engine needs; plain objects, so client and server can both map them. */
 export interface ComponentFields {
@@ -65,7 +65,7 @@ export function toHardwareContext(input: { cooler: CoolerFields; fan: ComponentF
     name: `${input.cooler.name} on board ${input.revision.revision}`,
     fan: toEngineComponent(input.fan),
     fanCount: input.cooler.fanCount,
-    pump: { ...pump, kind: "pump", flowAtMaxRpmLpm: input.pump.flowAtMaxRpmLpm ?? 1 } as PumpComponent,
+    pump: { ...pump, kind: "pump", flowAtMaxRpmLpm: input.pump.flowAtMaxRpmLpm ?? 1 },
     radiator: {
       thermalResistanceAtMinFanKPerW: input.cooler.radiatorKPerWAtMinFan,
       thermalResistanceAtMaxFanKPerW: input.cooler.radiatorKPerWAtMaxFan,

@@ -1,24 +1,19 @@
 import "server-only";
+import pino, { type DestinationStream, type Logger } from "pino";
 
-type Fields = Record<string, unknown>;
-const SECRET_KEYS = /pass(word)?|secret|token|authorization|cookie/i;
+const REDACT = ["password", "*.password", "secret", "*.secret", "token", "*.token", "authorization", "*.authorization", "cookie", "*.cookie", "headers.authorization", "headers.cookie"];
 
-function scrub(fields: Fields): Fields {
-  const out: Fields = {};
-  for (const [k, v] of Object.entries(fields)) out[k] = SECRET_KEYS.test(k) && k !== "tokenId" ? "[redacted]" : v;
-  return out;
+/**
+ * Structured JSON logs (pino) with a request id on every request and audit line; anything
+ * that looks like a secret is redacted before it is written.
+ */
+export function createLogger(destination?: DestinationStream): Logger {
+  const options = {
+    level: process.env.LOOPKEEPER_LOG === "silent" ? "silent" : (process.env.LOG_LEVEL ?? "info"),
+    base: { service: "loopkeeper" },
+    redact: { paths: REDACT, censor: "[redacted]" },
+  };
+  return destination ? pino(options, destination) : pino(options);
 }
 
-function write(level: "info" | "warn" | "error", fields: Fields, msg: string) {
-  if (process.env.LOOPKEEPER_LOG === "silent") return;
-  const line = JSON.stringify({ level, time: new Date().toISOString(), msg, ...scrub(fields) });
-  if (level === "error") console.error(line);
-  else console.log(line);
-}
-
-/** Structured JSON lines with a request id; keys that look like secrets are redacted. */
-export const logger = {
-  info: (fields: Fields, msg: string) => write("info", fields, msg),
-  warn: (fields: Fields, msg: string) => write("warn", fields, msg),
-  error: (fields: Fields, msg: string) => write("error", fields, msg),
-};
+export const logger = createLogger();

@@ -77,8 +77,10 @@ function checkTrace(trace: readonly TraceSample[]): void {
   if (!Array.isArray(trace)) throw new EngineInputError("trace", "expected an array of { tSec, tempC } samples");
   if (trace.length > MAX_TRACE_SAMPLES) throw new EngineInputError("trace", `at most ${MAX_TRACE_SAMPLES} samples, got ${trace.length}`);
   let prev = -Infinity;
-  trace.forEach((s, i) => {
-    if (typeof s !== "object" || s === null) throw new EngineInputError(`trace[${i}]`, "expected { tSec, tempC }");
+  trace.forEach((raw: unknown, i) => {
+    // Callers may pass parsed JSON: check the shape rather than trust the type.
+    if (typeof raw !== "object" || raw === null) throw new EngineInputError(`trace[${i}]`, "expected { tSec, tempC }");
+    const s = raw as { tSec?: unknown; tempC?: unknown };
     if (typeof s.tSec !== "number" || !Number.isFinite(s.tSec)) throw new EngineInputError(`trace[${i}].tSec`, "expected a finite number of seconds");
     if (s.tSec < prev) throw new EngineInputError(`trace[${i}].tSec`, "times must not go backwards; sort the trace by tSec");
     if (s.tempC !== null && (typeof s.tempC !== "number" || !Number.isFinite(s.tempC))) {

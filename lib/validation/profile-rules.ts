@@ -95,7 +95,7 @@ function quantisationRules(doc: CoolingProfile, out: ValidationIssue[]): void {
       }
     }
   }
-  const single: [keyof CoolingProfile & string, number | undefined, number | undefined][] = [
+  const single: [Extract<keyof CoolingProfile, string>, number | undefined, number | undefined][] = [
     ["criticalTempC", doc.criticalTempC, q.criticalTempC],
     ["sensorLossDutyPct", doc.sensorLossDutyPct, q.sensorLossDutyPct],
   ];

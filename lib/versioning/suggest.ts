@@ -37,7 +37,7 @@ export function suggestNextVersion(prev: CoolingProfile, next: CoolingProfile, p
   const major: string[] = [];
   const minor: string[] = [];
   const patch: string[] = [];
-  if (prev.formatVersion !== next.formatVersion) major.push(`format version ${prev.formatVersion} → ${next.formatVersion}`);
+  if (prev.formatVersion !== next.formatVersion) major.push(`format version ${String(prev.formatVersion)} → ${String(next.formatVersion)}`);
   if (prev.criticalTempC !== next.criticalTempC) major.push(`critical temperature ${prev.criticalTempC} → ${next.criticalTempC} °C`);
   if (prev.sensorLossDutyPct !== next.sensorLossDutyPct) major.push(`sensor-loss duty ${prev.sensorLossDutyPct} → ${next.sensorLossDutyPct} %`);
   const prevStop = prev.fans.stopBelowTempC;
