@@ -88,7 +88,10 @@ test.describe("support lookup", () => {
 
 test.describe("lots API", () => {
   test("support and viewer tokens cannot post lots; a release manager's token can, and an overlap names the lot", async ({ baseURL }) => {
-    const lot = { lotCode: `E2E-${Date.now() % 100000}`, boardRevision: "1.1.0", buildVersion: "3.1.0", serialFrom: "TC1-00500000", serialTo: "TC1-00500099", producedOn: "2025-05-01", line: "Line E" };
+    // A fresh range each run: the test database keeps lots from earlier runs.
+    const base = 1_000_000 + Math.floor(Math.random() * 200_000) * 200;
+    const serial = (n: number) => `TC1-${String(n).padStart(8, "0")}`;
+    const lot = { lotCode: `E2E-${base}`, boardRevision: "1.1.0", buildVersion: "3.1.0", serialFrom: serial(base), serialTo: serial(base + 99), producedOn: "2025-05-01", line: "Line E" };
     const anon = await playwrightRequest.newContext({ baseURL });
     for (const role of ["support", "viewer"] as const) {
       const { ctx, secret } = await tokenFor(baseURL, ACCOUNTS[role]);
@@ -99,10 +102,10 @@ test.describe("lots API", () => {
     const { ctx, secret } = await tokenFor(baseURL, ACCOUNTS.release_manager);
     const created = await anon.post("/api/v1/lots", { data: lot, headers: { authorization: `Bearer ${secret}` } });
     expect(created.status()).toBe(201);
-    const overlap = await anon.post("/api/v1/lots", { data: { ...lot, lotCode: `${lot.lotCode}b`, serialFrom: "TC1-00500050", serialTo: "TC1-00500150" }, headers: { authorization: `Bearer ${secret}` } });
+    const overlap = await anon.post("/api/v1/lots", { data: { ...lot, lotCode: `${lot.lotCode}b`, serialFrom: serial(base + 50), serialTo: serial(base + 150) }, headers: { authorization: `Bearer ${secret}` } });
     expect(overlap.status()).toBe(409);
     expect(((await overlap.json()) as { error: { message: string } }).error.message).toContain(`overlap lot ${lot.lotCode}`);
-    const lookup = await anon.get("/api/v1/lookup?serial=TC1-00500042", { headers: { authorization: `Bearer ${secret}` } });
+    const lookup = await anon.get(`/api/v1/lookup?serial=${serial(base + 42)}`, { headers: { authorization: `Bearer ${secret}` } });
     expect(lookup.status()).toBe(200);
     expect(((await lookup.json()) as { lot: { lotCode: string } }).lot.lotCode).toBe(lot.lotCode);
     await ctx.dispose();
@@ -119,5 +122,33 @@ test.describe("lots API", () => {
     expect(csv.headers()["content-type"]).toContain("text/csv");
     expect(await csv.text()).toContain("TW-2502,1.1.0,3.0.1,TC1-00030000,TC1-00044999,15000");
     await ctx.dispose();
+  });
+});
+
+test.describe("lots page", () => {
+  test("a release manager previews a CSV with a bad row: the row is listed and nothing can be imported", async ({ page }) => {
+    await signInPage(page, ACCOUNTS.release_manager);
+    await page.goto("/lots");
+    await expect(page.getByRole("cell", { name: "TW-2501" })).toBeVisible();
+    const base = 600_000 + (Date.now() % 1000) * 100;
+    const csv = [
+      "lot_code,board_revision,build_version,serial_from,serial_to,produced_on,line",
+      `CSV-${base},1.1.0,3.1.0,TC1-${base},TC1-${base + 9},2025-05-02,Line A`,
+      `CSV-${base + 1},1.1.0,3.1.0,TC1-${base + 10},TC1-00000001,2025-05-02,Line A`,
+    ].join("\n");
+    await page.getByLabel("CSV file").setInputFiles({ name: "lots.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
+    await page.getByRole("button", { name: "Preview" }).click();
+    await expect(page.getByText("1 problem(s); nothing was imported")).toBeVisible();
+    const problems = page.getByRole("table", { name: "Problems by row" });
+    await expect(problems.getByRole("row").nth(1)).toContainText("3serial_toThe last serial must not be below the first.");
+    await expect(page.getByRole("button", { name: "Import", exact: true })).toBeDisabled();
+  });
+
+  test("a viewer sees the lots but no form to record them", async ({ page }) => {
+    await signInPage(page, ACCOUNTS.viewer);
+    await page.goto("/lots");
+    await expect(page.getByRole("cell", { name: "TW-2502" })).toBeVisible();
+    await expect(page.getByRole("heading", { name: "Record a lot" })).toHaveCount(0);
+    await expect(page.getByRole("heading", { name: "Import lots from CSV" })).toHaveCount(0);
   });
 });
