@@ -31,6 +31,14 @@ export const NAV: NavGroup[] = [
     ],
   },
   {
+    label: "Support",
+    items: [
+      { href: "/lookup", label: "Serial lookup", capability: "support" },
+      { href: "/lots", label: "Production lots", capability: "read" },
+      { href: "/support/withdrawn", label: "Withdrawn builds", capability: "support" },
+    ],
+  },
+  {
     label: "Admin",
     items: [
       { href: "/admin/users", label: "Users and roles", capability: "admin" },

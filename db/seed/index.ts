@@ -7,6 +7,7 @@ import { seedUsers } from "./users";
 import { seedHardware } from "./hardware";
 import { seedRegistry } from "./registry";
 import { seedBuilds } from "./builds";
+import { seedSupport } from "./support";
 
 const url =
   process.env.DATABASE_URL ??
@@ -20,6 +21,7 @@ export async function seedDemo(connectionString = url): Promise<void> {
     await seedHardware(db);
     await seedRegistry(db);
     await seedBuilds(db);
+    await seedSupport(db);
   } finally {
     await pool.end();
   }

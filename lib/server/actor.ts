@@ -43,7 +43,9 @@ export async function getTokenActor(authorization: string): Promise<Actor | null
   const db = getDb();
   const found = await findActiveToken(db, { tokenHash: hashToken(m[1]) });
   if (!found) return null;
-  await touchToken(db, { id: found.token.id });
+  // Last use is kept to the minute: skip the round trip while the stored time is recent.
+  const lastUsedMs = found.token.lastUsedAt?.getTime() ?? 0;
+  if (Date.now() - lastUsedMs > 60_000) await touchToken(db, { id: found.token.id });
   const { user, token } = found;
   return { userId: user.id, email: user.email, name: user.name, role: user.role, via: "token", tokenId: token.id };
 }

@@ -4,6 +4,7 @@ import * as admin from "./admin";
 import * as registry from "./registry";
 import * as profiles from "./profiles";
 import * as builds from "./builds";
+import * as support from "./support";
 
 function opsOf(mod: Record<string, unknown>): Operation[] {
   return Object.values(mod).filter(
@@ -12,4 +13,11 @@ function opsOf(mod: Record<string, unknown>): Operation[] {
 }
 
 /** Every /api/v1 operation; the OpenAPI document and the fuzz tests are generated from this list. */
-export const allOperations: Operation[] = [...opsOf(account), ...opsOf(admin), ...opsOf(registry), ...opsOf(profiles), ...opsOf(builds)];
+export const allOperations: Operation[] = [
+  ...opsOf(account),
+  ...opsOf(admin),
+  ...opsOf(registry),
+  ...opsOf(profiles),
+  ...opsOf(builds),
+  ...opsOf(support),
+];

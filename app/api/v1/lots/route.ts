@@ -1,0 +1,28 @@
+import { apiRoute } from "@/lib/server/api";
+import { createLot as createLotOp, listLots as listLotsOp } from "@/lib/api/operations/support";
+import { getDb } from "@/db/client";
+import { createLot, listLots } from "@/db/lots";
+import { auditActor } from "@/lib/server/actor";
+import { toLotView } from "@/lib/server/lot-view";
+import { AppError } from "@/lib/api/errors";
+
+export const GET = apiRoute(listLotsOp, async ({ query }) => {
+  const rows = await listLots(getDb(), {
+    boardModelId: query.board,
+    buildId: query.build,
+    lotCode: query.code,
+    sort: query.sort,
+    dir: query.dir,
+    limit: query.pageSize + 1,
+    offset: (query.page - 1) * query.pageSize,
+  });
+  return { items: rows.slice(0, query.pageSize).map(toLotView), page: query.page, pageSize: query.pageSize, hasMore: rows.length > query.pageSize };
+});
+
+export const POST = apiRoute(createLotOp, async ({ actor, body, requestId }) => {
+  const db = getDb();
+  const lot = await createLot(db, auditActor(actor, requestId), body);
+  const [row] = await listLots(db, { lotId: lot.id, sort: "serial", dir: "asc", limit: 1, offset: 0 });
+  if (!row) throw new AppError("internal", "The lot was recorded but could not be read back.");
+  return { lot: toLotView(row) };
+});

@@ -1,0 +1,124 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import { usePathname, useRouter, useSearchParams } from "next/navigation";
+import { apiFetch } from "@/lib/api/client";
+import type { LotOptions, LotView } from "@/lib/api/operations/support";
+import { formText } from "@/components/ui/form-data";
+import { Button } from "@/components/ui/button";
+import { Input, Select } from "@/components/ui/field";
+import { Panel } from "@/components/ui/panel";
+import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { StageBadge } from "./stage-badge";
+
+const SORTS = [
+  { value: "serial", label: "First serial" },
+  { value: "produced", label: "Production date" },
+  { value: "code", label: "Lot code" },
+] as const;
+
+export function LotsList({ options }: { options: LotOptions | undefined }) {
+  const sp = useSearchParams();
+  const router = useRouter();
+  const pathname = usePathname();
+  const page = Math.max(1, Number(sp.get("page") ?? "1") || 1);
+  const qs = new URLSearchParams();
+  for (const k of ["board", "build", "code", "sort", "dir"]) {
+    const v = sp.get(k);
+    if (v) qs.set(k, v);
+  }
+  qs.set("page", String(page));
+  const q = useQuery({ queryKey: ["lots", qs.toString()], queryFn: () => apiFetch<{ items: LotView[]; hasMore: boolean }>(`/api/v1/lots?${qs.toString()}`) });
+  const builds = (options?.boardModels ?? []).flatMap((m) => m.builds.map((b) => ({ ...b, model: m.name })));
+
+  function setParams(next: Record<string, string>) {
+    const p = new URLSearchParams(sp.toString());
+    for (const [k, v] of Object.entries(next)) {
+      if (v) p.set(k, v);
+      else p.delete(k);
+    }
+    router.replace(`${pathname}?${p.toString()}`);
+  }
+
+  return (
+    <Panel title="Lots">
+      <form
+        className="mb-4 flex flex-wrap items-end gap-3"
+        onSubmit={(e) => {
+          e.preventDefault();
+          const fd = new FormData(e.currentTarget);
+          setParams({ board: formText(fd, "board"), build: formText(fd, "build"), code: formText(fd, "code"), sort: formText(fd, "sort"), dir: formText(fd, "dir"), page: "" });
+        }}
+      >
+        <label className="text-sm">
+          <span className="mb-1 block font-medium text-ink-800">Board model</span>
+          <Select name="board" defaultValue={sp.get("board") ?? ""} className="w-56">
+            <option value="">All</option>
+            {options?.boardModels.map((m) => <option key={m.id} value={m.id}>{m.name}</option>)}
+          </Select>
+        </label>
+        <label className="text-sm">
+          <span className="mb-1 block font-medium text-ink-800">Build</span>
+          <Select name="build" defaultValue={sp.get("build") ?? ""} className="w-56">
+            <option value="">All</option>
+            {builds.map((b) => <option key={b.id} value={b.id}>{b.model} {b.version} ({b.stage})</option>)}
+          </Select>
+        </label>
+        <label className="text-sm">
+          <span className="mb-1 block font-medium text-ink-800">Lot code contains</span>
+          <Input name="code" defaultValue={sp.get("code") ?? ""} className="w-40" />
+        </label>
+        <label className="text-sm">
+          <span className="mb-1 block font-medium text-ink-800">Sort by</span>
+          <Select name="sort" defaultValue={sp.get("sort") ?? "serial"} className="w-40">
+            {SORTS.map((s) => <option key={s.value} value={s.value}>{s.label}</option>)}
+          </Select>
+        </label>
+        <label className="text-sm">
+          <span className="mb-1 block font-medium text-ink-800">Order</span>
+          <Select name="dir" defaultValue={sp.get("dir") ?? "asc"} className="w-32">
+            <option value="asc">Ascending</option>
+            <option value="desc">Descending</option>
+          </Select>
+        </label>
+        <Button type="submit" variant="secondary">Apply</Button>
+      </form>
+      <Table caption="Production lots">
+        <thead>
+          <tr>
+            <Th>Lot</Th>
+            <Th>Board</Th>
+            <Th>Serials</Th>
+            <Th>Boards</Th>
+            <Th>Build</Th>
+            <Th>Produced</Th>
+          </tr>
+        </thead>
+        <tbody>
+          {q.isPending && <SkeletonRows cols={6} />}
+          {q.isError && (
+            <EmptyRow colSpan={6}>
+              Could not load lots. <button className="underline" onClick={() => void q.refetch()}>Retry</button>
+            </EmptyRow>
+          )}
+          {q.data?.items.length === 0 && <EmptyRow colSpan={6}>No lots match.</EmptyRow>}
+          {q.data?.items.map((l) => (
+            <tr key={l.id}>
+              <Td className="font-medium">{l.lotCode}</Td>
+              <Td>{l.boardModelName} <span className="text-ink-600">rev {l.revision}</span></Td>
+              <Td className="whitespace-nowrap font-mono text-xs">{l.serialFrom} – {l.serialTo}</Td>
+              <Td className="tabular-nums">{l.boards.toLocaleString("en")}</Td>
+              <Td className="whitespace-nowrap">{l.buildVersion} <StageBadge stage={l.buildStage} /></Td>
+              <Td className="whitespace-nowrap">{l.producedOn} · {l.line}</Td>
+            </tr>
+          ))}
+        </tbody>
+      </Table>
+      <div className="mt-3 flex items-center gap-2 text-sm">
+        <Button variant="secondary" disabled={page <= 1} onClick={() => setParams({ page: String(page - 1) })}>Previous</Button>
+        <span className="tabular-nums text-ink-600">Page {page}</span>
+        <Button variant="secondary" disabled={!q.data?.hasMore} onClick={() => setParams({ page: String(page + 1) })}>Next</Button>
+      </div>
+    </Panel>
+  );
+}

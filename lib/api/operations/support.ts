@@ -1,0 +1,237 @@
+import { z } from "zod";
+import { defineOperation } from "../operation";
+import { lotInput } from "@/lib/lots/input";
+import { idParams } from "./account";
+import type { ComponentFields, CoolerFields, RevisionFields } from "@/lib/registry/hardware-context";
+import type { ProfileChange } from "@/lib/support/curve-diff";
+import type { CoolingProfile } from "@/lib/engine";
+
+export const lotBody = lotInput;
+
+const stage = z.enum(["draft", "review", "validation", "pilot", "production", "withdrawn"]);
+
+export const lotView = z.object({
+  id: z.string(),
+  lotCode: z.string(),
+  serialFrom: z.string(),
+  serialTo: z.string(),
+  boards: z.number(),
+  producedOn: z.string(),
+  line: z.string(),
+  boardModelName: z.string(),
+  revision: z.string(),
+  buildId: z.string(),
+  buildVersion: z.string(),
+  buildStage: stage,
+});
+export type LotView = z.infer<typeof lotView>;
+
+export const lotsQuery = z.strictObject({
+  board: z.uuid("Not a valid board model id.").optional(),
+  build: z.uuid("Not a valid build id.").optional(),
+  code: z.string().max(40).optional(),
+  sort: z.enum(["serial", "produced", "code"]).default("serial"),
+  dir: z.enum(["asc", "desc"]).default("asc"),
+  page: z.coerce.number().int().min(1).max(100000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(200).default(50),
+});
+
+export const listLots = defineOperation({
+  id: "listLots",
+  method: "GET",
+  path: "/api/v1/lots",
+  summary: "Production lots, filtered, sorted and paged",
+  tag: "Support",
+  access: "read",
+  query: lotsQuery,
+  response: z.object({ items: z.array(lotView), page: z.number(), pageSize: z.number(), hasMore: z.boolean() }),
+});
+
+export const createLot = defineOperation({
+  id: "createLot",
+  method: "POST",
+  path: "/api/v1/lots",
+  summary: "Record a production lot (factory stations use an API token)",
+  tag: "Support",
+  access: "lot:write",
+  body: lotBody,
+  response: z.object({ lot: lotView }),
+  successStatus: 201,
+});
+
+export const lotOptionsView = z.object({
+  boardModels: z.array(
+    z.object({
+      id: z.string(),
+      name: z.string(),
+      serialPrefix: z.string(),
+      revisions: z.array(z.string()),
+      builds: z.array(z.object({ id: z.string(), version: z.string(), stage, revisionRange: z.string() })),
+    }),
+  ),
+});
+export type LotOptions = z.infer<typeof lotOptionsView>;
+
+export const getLotOptions = defineOperation({
+  id: "getLotOptions",
+  method: "GET",
+  path: "/api/v1/lots/options",
+  summary: "Board models, revisions and released builds a lot may name",
+  tag: "Support",
+  access: "read",
+  response: lotOptionsView,
+});
+
+export const MAX_LOTS_CSV_BYTES = 1024 * 1024;
+
+export const importQuery = z.strictObject({ dryRun: z.enum(["true", "false"]).default("true") });
+
+export const importResult = z.object({
+  dryRun: z.boolean(),
+  checked: z.number(),
+  committed: z.number(),
+  issues: z.array(z.object({ row: z.number(), column: z.string(), message: z.string() })),
+});
+export type ImportResult = z.infer<typeof importResult>;
+
+export const importLots = defineOperation({
+  id: "importLots",
+  method: "POST",
+  path: "/api/v1/lots/import",
+  summary: "Import lots from CSV: dryRun=true previews, dryRun=false commits all rows or none",
+  tag: "Support",
+  access: "lot:write",
+  query: importQuery,
+  rawBody: { contentTypes: ["text/csv", "text/plain"], maxBytes: MAX_LOTS_CSV_BYTES },
+  response: importResult,
+});
+
+export const lookupQuery = z.strictObject({ serial: z.string().max(64, "A serial is at most 17 characters.") });
+
+export interface LookupSlot {
+  slotIndex: number;
+  profileVersionId: string;
+  profileId: string;
+  profileName: string;
+  version: string;
+  document: CoolingProfile;
+  cooler: CoolerFields;
+  fan: ComponentFields;
+  pump: ComponentFields;
+}
+
+export interface LookupResult {
+  serial: string;
+  lot: { id: string; lotCode: string; serialFrom: string; serialTo: string; producedOn: string; line: string };
+  boardModel: { id: string; serialPrefix: string };
+  boardRevision: RevisionFields & { id: string };
+  build: { id: string; version: string; stage: z.infer<typeof stage>; revisionRange: string; withdrawnReason: string | null };
+  slots: LookupSlot[];
+  pump: { name: string | null; pulsesPerRev: number; source: "registry" | "default" };
+  newerBuilds: { id: string; version: string; changes: ProfileChange[] }[];
+}
+
+export const lookupSerial = defineOperation({
+  id: "lookupSerial",
+  method: "GET",
+  path: "/api/v1/lookup",
+  summary: "What shipped on a board: lot, revision, build and stage, curves per slot, newer builds and what changed",
+  tag: "Support",
+  access: "support",
+  query: lookupQuery,
+});
+
+export const recentLookupsView = z.object({ items: z.array(z.object({ serial: z.string(), found: z.boolean(), createdAt: z.string() })) });
+
+export const listRecentLookups = defineOperation({
+  id: "listRecentLookups",
+  method: "GET",
+  path: "/api/v1/lookup/recent",
+  summary: "Your latest serial lookups",
+  tag: "Support",
+  access: "support",
+  response: recentLookupsView,
+});
+
+export const MAX_DUMP_BYTES = 256 * 1024;
+
+export interface DumpSlotView {
+  slotIndex: number;
+  version: string;
+  contentHashPrefix: string;
+  match: "exact" | "hash_only" | "unknown";
+  profileVersionId?: string;
+  profileName?: string;
+  coolerName?: string;
+  knownVersion?: string;
+}
+
+export interface DumpIdentifyResult {
+  fileName: string | null;
+  format: "bin" | "hex";
+  sizeBytes: number;
+  hex?: { ok: boolean; startAddress?: number; recordCount: number; errors: { line: number; message: string }[] };
+  status: "ok" | "corrupt" | "unreadable";
+  crc?: { stored: string; computed: string; ok: boolean };
+  slotCount?: number;
+  slots: DumpSlotView[];
+  errors: { code: string; message: string }[];
+}
+
+export const identifyDump = defineOperation({
+  id: "identifyDump",
+  method: "POST",
+  path: "/api/v1/dumps/identify",
+  summary: "Identify a memory dump (.bin or Intel .hex) read back from a board: CRC, slots, matching profile versions",
+  tag: "Support",
+  access: "support",
+  rawBody: { contentTypes: ["application/octet-stream", "text/plain", "multipart/form-data"], maxBytes: MAX_DUMP_BYTES },
+});
+
+export const withdrawnBuildView = z.object({
+  id: z.string(),
+  version: z.string(),
+  boardModelName: z.string(),
+  withdrawnReason: z.string().nullable(),
+  lots: z.number(),
+  boards: z.number(),
+});
+export type WithdrawnBuildView = z.infer<typeof withdrawnBuildView>;
+
+export const listWithdrawnBuilds = defineOperation({
+  id: "listWithdrawnBuilds",
+  method: "GET",
+  path: "/api/v1/support/withdrawn",
+  summary: "Withdrawn builds with how many boards shipped with each",
+  tag: "Support",
+  access: "support",
+  response: z.object({ items: z.array(withdrawnBuildView) }),
+});
+
+export const shippedLotView = z.object({ lotCode: z.string(), revision: z.string(), serialFrom: z.string(), serialTo: z.string(), boards: z.number(), producedOn: z.string(), line: z.string() });
+export type ShippedLotView = z.infer<typeof shippedLotView>;
+
+export const getShippedWithBuild = defineOperation({
+  id: "getShippedWithBuild",
+  method: "GET",
+  path: "/api/v1/support/withdrawn/{id}",
+  summary: "Lots and boards that shipped with a build",
+  tag: "Support",
+  access: "support",
+  params: idParams,
+  response: z.object({
+    build: z.object({ id: z.string(), version: z.string(), stage, withdrawnReason: z.string().nullable(), boardModelName: z.string() }),
+    boards: z.number(),
+    lots: z.array(shippedLotView),
+  }),
+});
+
+export const exportShippedCsv = defineOperation({
+  id: "exportShippedCsv",
+  method: "GET",
+  path: "/api/v1/support/withdrawn/{id}/shipped.csv",
+  summary: "CSV of the lots that shipped with a build",
+  tag: "Support",
+  access: "support",
+  params: idParams,
+});

@@ -1,0 +1,141 @@
+import { LOT_CSV_COLUMNS, lotInput, type LotInput } from "./input";
+import { parseSerial, rangesOverlap } from "../serials/serial";
+
+/** A problem in one cell or row of an uploaded lots CSV; row 1 is the header. */
+export interface CsvRowIssue {
+  row: number;
+  column: string;
+  message: string;
+}
+
+export interface ParsedLotRow {
+  row: number;
+  lot: LotInput;
+}
+
+export interface ParsedLotsCsv {
+  rows: ParsedLotRow[];
+  issues: CsvRowIssue[];
+}
+
+export const MAX_CSV_ROWS = 5000;
+
+/**
+ * Splits CSV text into records (RFC 4180: comma separated, double-quoted fields may
+ * hold commas, newlines and doubled quotes; CRLF or LF line ends). Returns each
+ * record with the 1-based line it starts on.
+ */
+export function splitCsv(text: string): { line: number; fields: string[] }[] {
+  const out: { line: number; fields: string[] }[] = [];
+  let fields: string[] = [];
+  let field = "";
+  let quoted = false;
+  let line = 1;
+  let startLine = 1;
+  let sawAny = false;
+  for (let i = 0; i < text.length; i++) {
+    const ch = text[i]!;
+    if (quoted) {
+      if (ch === '"') {
+        if (text[i + 1] === '"') {
+          field += '"';
+          i++;
+        } else quoted = false;
+      } else {
+        if (ch === "\n") line++;
+        field += ch;
+      }
+      continue;
+    }
+    if (ch === '"' && field === "") {
+      quoted = true;
+      sawAny = true;
+    } else if (ch === ",") {
+      fields.push(field);
+      field = "";
+      sawAny = true;
+    } else if (ch === "\n" || ch === "\r") {
+      if (ch === "\r" && text[i + 1] === "\n") i++;
+      fields.push(field);
+      if (sawAny || fields.some((f) => f !== "")) out.push({ line: startLine, fields });
+      fields = [];
+      field = "";
+      sawAny = false;
+      line++;
+      startLine = line;
+    } else {
+      field += ch;
+      sawAny = true;
+    }
+  }
+  fields.push(field);
+  if (sawAny || fields.some((f) => f !== "")) out.push({ line: startLine, fields });
+  return out;
+}
+
+/**
+ * Reads a lots CSV: a header naming the seven columns (any order), then one lot per
+ * row. Each row is checked with the same schema as the form and the API; rows whose
+ * serial ranges overlap each other are reported too. Nothing is looked up here: the
+ * database checks (board, build stage, existing lots) run in the dry run and commit.
+ */
+export function parseLotsCsv(text: string): ParsedLotsCsv {
+  const issues: CsvRowIssue[] = [];
+  const records = splitCsv(text.replace(/^\uFEFF/, ""));
+  const header = records.shift();
+  if (!header) return { rows: [], issues: [{ row: 1, column: "", message: "The file is empty; the first row must name the columns." }] };
+  const names = header.fields.map((f) => f.trim().toLowerCase());
+  const index = new Map<string, number>();
+  for (const [col] of LOT_CSV_COLUMNS) {
+    const at = names.indexOf(col);
+    if (at < 0) issues.push({ row: header.line, column: col, message: `The header has no "${col}" column. Expected: ${LOT_CSV_COLUMNS.map(([c]) => c).join(",")}.` });
+    else index.set(col, at);
+  }
+  const unknown = names.filter((n) => n && !LOT_CSV_COLUMNS.some(([c]) => c === n));
+  if (unknown.length) issues.push({ row: header.line, column: unknown[0]!, message: `Unknown column(s): ${unknown.join(", ")}. Remove them.` });
+  if (issues.length) return { rows: [], issues };
+  if (records.length > MAX_CSV_ROWS) return { rows: [], issues: [{ row: 1, column: "", message: `The file has ${records.length} lots; import at most ${MAX_CSV_ROWS} at a time.` }] };
+  if (records.length === 0) return { rows: [], issues: [{ row: 2, column: "", message: "The file has a header but no lots." }] };
+
+  const rows: ParsedLotRow[] = [];
+  for (const rec of records) {
+    if (rec.fields.length !== names.length) {
+      issues.push({ row: rec.line, column: "", message: `Row has ${rec.fields.length} values; the header has ${names.length}.` });
+      continue;
+    }
+    const raw = Object.fromEntries(LOT_CSV_COLUMNS.map(([col, key]) => [key, rec.fields[index.get(col)!] ?? ""]));
+    const r = lotInput.safeParse(raw);
+    if (!r.success) {
+      for (const issue of r.error.issues) {
+        const key = String(issue.path[0] ?? "");
+        const col = LOT_CSV_COLUMNS.find(([, k]) => k === key)?.[0] ?? "";
+        issues.push({ row: rec.line, column: col, message: issue.message });
+      }
+      continue;
+    }
+    rows.push({ row: rec.line, lot: r.data });
+  }
+  issues.push(...duplicateIssues(rows));
+  issues.sort((a, b) => a.row - b.row);
+  return { rows, issues };
+}
+
+/** Lot codes repeated and serial ranges overlapping within the file itself. */
+function duplicateIssues(rows: ParsedLotRow[]): CsvRowIssue[] {
+  const issues: CsvRowIssue[] = [];
+  const codes = new Map<string, number>();
+  const ranges: { row: number; prefix: string; from: number; to: number; code: string }[] = [];
+  for (const { row, lot } of rows) {
+    const seen = codes.get(lot.lotCode);
+    if (seen !== undefined) issues.push({ row, column: "lot_code", message: `Lot code ${lot.lotCode} is already used on row ${seen} of this file.` });
+    else codes.set(lot.lotCode, row);
+    const from = parseSerial(lot.serialFrom);
+    const to = parseSerial(lot.serialTo);
+    if (!from.ok || !to.ok) continue;
+    const mine = { row, prefix: from.serial.prefix, from: from.serial.number, to: to.serial.number, code: lot.lotCode };
+    const clash = ranges.find((r) => r.prefix === mine.prefix && rangesOverlap(r.from, r.to, mine.from, mine.to));
+    if (clash) issues.push({ row, column: "serial_from", message: `Serials overlap lot ${clash.code} on row ${clash.row} of this file.` });
+    ranges.push(mine);
+  }
+  return issues;
+}
