@@ -7,9 +7,9 @@ const REDACT = ["password", "*.password", "secret", "*.secret", "token", "*.toke
  * Structured JSON logs (pino) with a request id on every request and audit line; anything
  * that looks like a secret is redacted before it is written.
  */
-export function createLogger(destination?: DestinationStream): Logger {
+export function createLogger(destination?: DestinationStream, level?: string): Logger {
   const options = {
-    level: process.env.LOOPKEEPER_LOG === "silent" ? "silent" : (process.env.LOG_LEVEL ?? "info"),
+    level: level ?? (process.env.LOOPKEEPER_LOG === "silent" ? "silent" : (process.env.LOG_LEVEL ?? "info")),
     base: { service: "loopkeeper" },
     redact: { paths: REDACT, censor: "[redacted]" },
   };

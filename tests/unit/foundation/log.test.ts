@@ -4,7 +4,6 @@ import { createLogger } from "@/lib/server/log";
 
 describe("structured logs", () => {
   it("writes JSON lines with the request id and redacts secrets", () => {
-    process.env.LOG_LEVEL = "info";
     const lines: string[] = [];
     const sink = new Writable({
       write(chunk: Buffer, _enc, done) {
@@ -12,7 +11,7 @@ describe("structured logs", () => {
         done();
       },
     });
-    const log = createLogger(sink);
+    const log = createLogger(sink, "info");
     log.info({ requestId: "r-1", authorization: "Bearer lk_secret", headers: { cookie: "next-auth.session-token=abc" }, body: { password: "hunter2-hunter2" } }, "request");
     const entry = JSON.parse(lines[0]!) as Record<string, unknown>;
     expect(entry).toMatchObject({ requestId: "r-1", msg: "request", authorization: "[redacted]", headers: { cookie: "[redacted]" }, body: { password: "[redacted]" } });
