@@ -48,15 +48,16 @@ test("a build goes from draft to the factory and is withdrawn, with reviews, lab
   await engineer.getByLabel("Build version").fill(version);
   await engineer.getByLabel("Board revisions").fill(">=1.0.0 <3.0.0");
   const slot1 = engineer.getByLabel("Slot 1", { exact: true });
-  await expect(slot1.locator("option", { hasText: "Tarn 240 · Factory default" }).first()).toBeAttached();
+  await expect(slot1.locator("option", { hasText: "Tarn 240 · Quiet office" }).first()).toBeAttached();
   const pick = async (slot: string, text: string) => {
     const select = engineer.getByLabel(slot, { exact: true });
     const value = await select.locator("option", { hasText: text }).first().getAttribute("value");
     expect(value).toBeTruthy();
     await select.selectOption(value ?? "");
   };
-  await pick("Slot 1", "Tarn 240 · Factory default");
-  await pick("Slot 2", "Tarn 240 · Low noise");
+  // Demo profiles authored by engineer@, so engineer2@ and engineer3@ are independent reviewers.
+  await pick("Slot 1", "Tarn 240 · Quiet office");
+  await pick("Slot 2", "Tarn 360 · Hush");
   await expectAccessible(engineer);
   await engineer.getByLabel("Firmware image").setInputFiles({ name: "tc1-fw.bin", mimeType: "application/octet-stream", buffer: Buffer.alloc(4096, 0xa5) });
   await engineer.getByRole("button", { name: "Create build" }).click();
