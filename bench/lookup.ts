@@ -130,6 +130,8 @@ async function main() {
     await waitFor(`http://127.0.0.1:${BARE_PORT}/lookup?serial=x`, 10_000);
     const targets: { name: string; url: (s: string) => string; headers: Record<string, string> }[] = [
       { name: "app GET /api/v1/lookup", url: (s: string) => `http://127.0.0.1:${APP_PORT}/api/v1/lookup?serial=${s}`, headers: { authorization: `Bearer ${secret}` } },
+      // The framework's floor on this machine: a route with one query and no token, rate limit or body.
+      { name: "app GET /api/health (floor)", url: () => `http://127.0.0.1:${APP_PORT}/api/health`, headers: {} },
       { name: "bare node:http + pg", url: (s: string) => `http://127.0.0.1:${BARE_PORT}/lookup?serial=${s}`, headers: {} },
     ];
     for (const t of targets) {
@@ -153,7 +155,7 @@ function writeSection(results: Result[]) {
   const cpu = os.cpus();
   const row = (r: Result) => `| ${r.target} | ${r.concurrency} | ${r.requests.toLocaleString("en")} | ${r.rps.toFixed(0)} | ${r.p50.toFixed(2)} | ${r.p99.toFixed(2)} | ${r.errors} |`;
   const ratios = CONCURRENCY.map((c) => {
-    const a = results.find((r) => r.concurrency === c && r.target.startsWith("app"));
+    const a = results.find((r) => r.concurrency === c && r.target.startsWith("app GET /api/v1/lookup"));
     const b = results.find((r) => r.concurrency === c && r.target.startsWith("bare"));
     return a && b ? `- ${c} concurrent: app / bare throughput = ${(a.rps / b.rps).toFixed(2)}; app p99 ${a.p99.toFixed(1)} ms (aim < 50 ms at 50 concurrent).` : "";
   });
@@ -163,7 +165,8 @@ function writeSection(results: Result[]) {
     "",
     "Command: `npm run seed:scale && npm run bench:lookup` (bench/lookup.ts, bench/bare-lookup-server.mjs). 10,000,000 serials in 100,000 lots (prefix TCX); random serials; closed-loop load generator (node:http, keep-alive) on loopback, " +
       `${DURATION_S} s per run after a 3 s warm-up. The app is \`next start\` of a production build with an API token of the support account (rate limit raised for the run); ` +
-      "the bare handler is node:http + pg running the same lot query as a named prepared statement. The app does more per request: token lookup, per-token rate-limit counter, the lot query and the slots query (curves, newer builds).",
+      "the bare handler is node:http + pg running the same lot query as a named prepared statement. The app does more per request: token lookup, per-token rate-limit counter (an upsert), the lot query and the slots query (curves, newer builds). " +
+      "`/api/health` (one query, no auth) shows what the framework alone costs on this machine.",
     "",
     `Machine: Node ${process.version}, ${cpu.length} × ${cpu[0]?.model.trim() ?? "CPU"}, ${os.platform()}, load average ${os.loadavg()[0]!.toFixed(1)} at the end of the run; load generator, app, bare handler and PostgreSQL share the cores. Run ${new Date().toISOString().slice(0, 10)}.`,
     "",
