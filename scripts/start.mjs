@@ -6,7 +6,6 @@ import fs from "node:fs";
 import path from "node:path";
 import { log } from "./log.mjs";
 import { prepare, root, run } from "./prepare.mjs";
-import { startFakes } from "./fakes.mjs";
 
 const port = Number(process.env.PORT || 3000);
 const env = await prepare({ port });
@@ -16,6 +15,8 @@ if (process.env.LOOPKEEPER_SKIP_BUILD !== "1" || !fs.existsSync(path.join(root, 
   run("npx", ["next", "build"], { ...env, NODE_ENV: "production" }, "Building the app (next build)…");
 }
 
+// Loaded only now: it needs packages that prepare() installs on a fresh machine.
+const { startFakes } = await import("./fakes.mjs");
 const fakes = await startFakes(env);
 log(`Serving Loopkeeper on http://127.0.0.1:${port} — demo accounts are listed in README.md.`);
 const server = spawn(process.execPath, [path.join(root, "scripts", "serve.mjs")], {

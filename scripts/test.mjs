@@ -5,7 +5,6 @@ import { execFileSync } from "node:child_process";
 import fs from "node:fs";
 import { log, fail } from "./log.mjs";
 import { prepare, run } from "./prepare.mjs";
-import { startFakes } from "./fakes.mjs";
 
 const E2E_PORT = Number(process.env.E2E_PORT || 3100);
 const CHROMIUM = "/usr/bin/chromium";
@@ -31,6 +30,8 @@ if (!only || only === "integration") run("npx", ["vitest", "run", "--project", "
 if (!only || only === "e2e") {
   ensureChromium();
   run("npx", ["next", "build"], { ...testEnv, NODE_ENV: "production" }, "Building the app for the browser tests…");
+  // Loaded only now: it needs packages that prepare() installs on a fresh machine.
+  const { startFakes } = await import("./fakes.mjs");
   const fakes = await startFakes(testEnv);
   try {
     run("npx", ["playwright", "test"], { ...testEnv, ...fakes.env, E2E_PORT: String(E2E_PORT) }, "End-to-end tests (Playwright, Debian's chromium)…");
