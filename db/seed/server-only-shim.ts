@@ -3,3 +3,6 @@
 // functions the app uses (so published versions are encoded and audited the same way).
 const id = require.resolve("server-only");
 require.cache[id] = { id, filename: id, loaded: true, exports: {} } as NodeJS.Module;
+
+// Seeding writes many audit events; their log lines would drown the start-up progress.
+process.env.LOOPKEEPER_LOG ??= "silent";

@@ -4,7 +4,7 @@ import { getServerSession } from "next-auth";
 import { connection } from "next/server";
 import { getDb } from "@/db/client";
 import { getUserById } from "@/db/users";
-import { findActiveToken, touchToken } from "@/db/tokens";
+import { findActiveTokenCounting, touchToken } from "@/db/tokens";
 import type { AuditActor } from "@/db/audit";
 import type { Role } from "@/lib/auth/roles";
 import { authOptions } from "./auth";
@@ -17,6 +17,8 @@ export interface Actor {
   role: Role;
   via: "session" | "token";
   tokenId?: string;
+  /** For tokens: this request already counted against the rate limit (same round trip as the lookup). */
+  rate?: { count: number; retryAfterSec: number };
 }
 
 export function hashToken(secret: string): string {
@@ -41,13 +43,13 @@ export async function getTokenActor(authorization: string): Promise<Actor | null
   const m = /^Bearer\s+(\S{10,200})$/i.exec(authorization.trim());
   if (!m?.[1]) return null;
   const db = getDb();
-  const found = await findActiveToken(db, { tokenHash: hashToken(m[1]) });
+  const found = await findActiveTokenCounting(db, { tokenHash: hashToken(m[1]) });
   if (!found) return null;
   // Last use is kept to the minute: skip the round trip while the stored time is recent.
-  const lastUsedMs = found.token.lastUsedAt?.getTime() ?? 0;
-  if (Date.now() - lastUsedMs > 60_000) await touchToken(db, { id: found.token.id });
-  const { user, token } = found;
-  return { userId: user.id, email: user.email, name: user.name, role: user.role, via: "token", tokenId: token.id };
+  const lastUsedMs = found.lastUsedAt?.getTime() ?? 0;
+  if (Date.now() - lastUsedMs > 60_000) await touchToken(db, { id: found.tokenId });
+  const { user } = found;
+  return { userId: user.id, email: user.email, name: user.name, role: user.role, via: "token", tokenId: found.tokenId, rate: found.rate };
 }
 
 export function auditActor(actor: Actor, requestId?: string): AuditActor {

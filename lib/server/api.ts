@@ -80,8 +80,7 @@ function checkOrigin(req: NextRequest): void {
 
 /** Per-token (machine clients) or per-account (people) request budget; 429 with Retry-After past it. */
 async function enforceRateLimit(actor: Actor): Promise<void> {
-  const key = actor.tokenId ? `token:${actor.tokenId}` : `user:${actor.userId}`;
-  const { count, retryAfterSec } = await hitRateLimit(getDb(), { key });
+  const { count, retryAfterSec } = actor.rate ?? (await hitRateLimit(getDb(), { key: `user:${actor.userId}` }));
   if (Math.random() < 0.001) void pruneRateLimits(getDb()).catch(() => undefined);
   if (count > env().API_RATE_LIMIT_PER_MIN) {
     throw new AppError("rate_limited", `Too many requests: at most ${env().API_RATE_LIMIT_PER_MIN} a minute. Try again in ${retryAfterSec} s.`, {
