@@ -11,6 +11,7 @@ import { hitRateLimit, pruneRateLimits } from "@/db/rate-limit";
 import { fromDbError } from "./db-errors";
 import { env } from "./env";
 import { logger } from "./log";
+import { readCappedBody } from "./raw-body";
 
 const DEFAULT_MAX_BODY = 256 * 1024;
 
@@ -34,24 +35,7 @@ async function readJsonBody(req: NextRequest, maxBytes: number): Promise<unknown
   if (!/^application\/json\b/i.test(type)) {
     throw new AppError("unsupported_media_type", "Send the body as JSON with Content-Type: application/json.");
   }
-  const declared = Number(req.headers.get("content-length") ?? "0");
-  if (declared > maxBytes) throw new AppError("payload_too_large", `The body is larger than ${maxBytes} bytes.`);
-  const reader = req.body?.getReader();
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  if (reader) {
-    for (;;) {
-      const { done, value } = await reader.read();
-      if (done) break;
-      size += value.byteLength;
-      if (size > maxBytes) {
-        await reader.cancel();
-        throw new AppError("payload_too_large", `The body is larger than ${maxBytes} bytes.`);
-      }
-      chunks.push(value);
-    }
-  }
-  const text = Buffer.concat(chunks).toString("utf8");
+  const text = (await readCappedBody(req, maxBytes, `The body is larger than ${maxBytes} bytes.`)).toString("utf8");
   if (!text.trim()) throw new AppError("bad_request", "The body is empty; send a JSON object.");
   try {
     return JSON.parse(text) as unknown;

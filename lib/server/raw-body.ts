@@ -2,15 +2,25 @@ import "server-only";
 import type { NextRequest } from "next/server";
 import { AppError } from "@/lib/api/errors";
 
-/** Reads a request body as bytes, stopping as soon as it passes `maxBytes` (413), whatever Content-Length claims. */
-export async function readRawBody(req: NextRequest, { maxBytes, contentTypes }: { maxBytes: number; contentTypes: readonly string[] }): Promise<{ bytes: Buffer; contentType: string }> {
-  // Keep the header as sent: a multipart boundary is case-sensitive.
-  const contentType = req.headers.get("content-type") ?? "";
-  const base = contentType.split(";")[0]!.trim().toLowerCase();
-  if (!contentTypes.includes(base)) throw new AppError("unsupported_media_type", `Send the file as ${contentTypes.join(", ")}.`);
-  const declared = Number(req.headers.get("content-length") ?? "0");
-  const tooLarge = () => new AppError("payload_too_large", `The upload is larger than ${Math.round(maxBytes / 1024)} KiB.`);
-  if (declared > maxBytes) throw tooLarge();
+/**
+ * Refuses compressed request bodies: the app never inflates what a client sends, so a
+ * small gzip "bomb" can never grow into gigabytes in memory or on disk.
+ */
+export function assertIdentityEncoding(req: NextRequest): void {
+  const encoding = (req.headers.get("content-encoding") ?? "identity").trim().toLowerCase();
+  if (encoding !== "identity" && encoding !== "") {
+    throw new AppError("unsupported_media_type", `Compressed request bodies (Content-Encoding: ${encoding}) are not accepted; send the file as it is.`);
+  }
+}
+
+/**
+ * The one capped reader: a request body as bytes, refused (413) as soon as it passes
+ * `maxBytes`, whatever Content-Length claims, so an oversize upload never fills memory.
+ */
+export async function readCappedBody(req: NextRequest, maxBytes: number, tooLargeMessage: string): Promise<Buffer> {
+  assertIdentityEncoding(req);
+  const tooLarge = () => new AppError("payload_too_large", tooLargeMessage);
+  if (Number(req.headers.get("content-length") ?? "0") > maxBytes) throw tooLarge();
   const reader = req.body?.getReader();
   const chunks: Uint8Array[] = [];
   let size = 0;
@@ -26,7 +36,17 @@ export async function readRawBody(req: NextRequest, { maxBytes, contentTypes }: 
       chunks.push(value);
     }
   }
-  return { bytes: Buffer.concat(chunks), contentType };
+  return Buffer.concat(chunks);
+}
+
+/** Reads an upload of one of `contentTypes` as bytes within `maxBytes`. */
+export async function readRawBody(req: NextRequest, { maxBytes, contentTypes }: { maxBytes: number; contentTypes: readonly string[] }): Promise<{ bytes: Buffer; contentType: string }> {
+  // Keep the header as sent: a multipart boundary is case-sensitive.
+  const contentType = req.headers.get("content-type") ?? "";
+  const base = contentType.split(";")[0]!.trim().toLowerCase();
+  if (!contentTypes.includes(base)) throw new AppError("unsupported_media_type", `Send the file as ${contentTypes.join(", ")}.`);
+  const bytes = await readCappedBody(req, maxBytes, `The upload is larger than ${Math.round(maxBytes / 1024)} KiB.`);
+  return { bytes, contentType };
 }
 
 /** The first file of a multipart/form-data body already read within its limit. */

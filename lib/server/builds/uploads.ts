@@ -1,4 +1,5 @@
 import "server-only";
+import { assertIdentityEncoding } from "@/lib/server/raw-body";
 import type { NextRequest } from "next/server";
 import { getDb, type Tx } from "@/db/client";
 import type { AuditActor } from "@/db/audit";
@@ -42,6 +43,7 @@ export async function acceptUpload(
 
 /** The declared length, when present, refuses an oversize upload before reading it. */
 export function requestBody(req: NextRequest, kind: UploadKind): ByteSource | null {
+  assertIdentityEncoding(req);
   const declared = Number(req.headers.get("content-length") ?? "0");
   if (declared > UPLOAD_MAX_BYTES[kind]) throw new AppError("payload_too_large", `The file is larger than ${UPLOAD_MAX_BYTES[kind]} bytes; upload a smaller one.`);
   return req.body;
