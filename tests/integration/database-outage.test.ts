@@ -1,4 +1,5 @@
 import { execFileSync } from "node:child_process";
+import fs from "node:fs";
 import { afterAll, describe, expect, it } from "vitest";
 import { closeDb } from "./support/db";
 import { callRoute, tokenFor } from "./support/http";
@@ -53,12 +54,16 @@ describe.runIf(localCluster)("PostgreSQL stopped while the app runs", () => {
     expect(page.ms).toBeLessThan(5000);
 
     pg("up");
+    const upAt = performance.now();
     let status = 0;
     for (let i = 0; i < 30 && status !== 200; i++) {
       status = (await callRoute(health, { url: "/api/health" })).status;
       if (status !== 200) await new Promise((r) => setTimeout(r, 500));
     }
     expect(status).toBe(200);
+    const recoveredMs = performance.now() - upAt;
+    fs.mkdirSync(".data", { recursive: true });
+    fs.writeFileSync(".data/outage-stats.json", JSON.stringify({ healthDownMs: Math.round(down.ms), apiDownMs: Math.round(api.ms), pageDownMs: Math.round(page.ms), recoveredAfterRestartMs: Math.round(recoveredMs) }, null, 2));
     expect((await callRoute(getMe, { url: "/api/v1/me", token })).status).toBe(200);
     // Signed-out visitors of a screen go to sign-in again once the database is back.
     expect((await proxy(new NextRequest("http://127.0.0.1:3000/profiles"))).status).toBe(307);

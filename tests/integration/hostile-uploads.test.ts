@@ -66,7 +66,7 @@ describe("hostile uploads", () => {
     const [files, before] = [storedFiles(), await rows()];
     const bomb = zipBomb(50 * 1024 * 1024);
     expect(bomb.length).toBeLessThan(100 * 1024);
-    const res = await callRoute(uploadEvidence, { url: `/api/v1/builds/${b.id}/evidence?kind=lab_report&name=report.pdf`, method: "POST", token, params: { id: b.id }, body: bomb });
+    const res = await callRoute(uploadEvidence, { url: `/api/v1/builds/${b.id}/evidence?kind=lab_report&name=report.pdf`, method: "POST", token, params: { id: b.id }, body: new Uint8Array(bomb) });
     expect(res.status).toBe(415);
     expect(storedFiles()).toBe(files);
     expect(await rows()).toBe(before);
@@ -76,10 +76,10 @@ describe("hostile uploads", () => {
     const token = await tokenFor("engineer@tarnwell.example");
     const gz = gzipSync(Buffer.alloc(64 * 1024 * 1024));
     const [files, before] = [storedFiles(), await rows()];
-    const fw = await callRoute(uploadFirmware, { url: "/api/v1/uploads?name=fw.bin", method: "POST", token, body: gz, headers: { "content-encoding": "gzip" } });
+    const fw = await callRoute(uploadFirmware, { url: "/api/v1/uploads?name=fw.bin", method: "POST", token, body: new Uint8Array(gz), headers: { "content-encoding": "gzip" } });
     expect(fw.status).toBe(415);
     expect(((await fw.json()) as { error: { message: string } }).error.message).toMatch(/Compressed request bodies/);
-    const json = await callRoute(createToken, { url: "/api/v1/tokens", method: "POST", token, body: gzipSync(JSON.stringify({ name: "x", expiresInDays: 1 })), headers: { "content-type": "application/json", "content-encoding": "gzip" } });
+    const json = await callRoute(createToken, { url: "/api/v1/tokens", method: "POST", token, body: new Uint8Array(gzipSync(JSON.stringify({ name: "x", expiresInDays: 1 }))), headers: { "content-type": "application/json", "content-encoding": "gzip" } });
     expect(json.status).toBe(415);
     expect(storedFiles()).toBe(files);
     expect(await rows()).toBe(before);

@@ -1,4 +1,5 @@
 import "server-only";
+import { AppError } from "@/lib/api/errors";
 import { createHash } from "node:crypto";
 import { CreateBucketCommand, DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import { assertKey, limitedChunks, newKey, type ByteSource, type PutOptions, type Storage, type StoredObject } from "./types";
@@ -36,7 +37,7 @@ export function s3Storage(config: S3Config): Storage {
       throw err;
     }));
 
-  return {
+  const storage: Storage = {
     driver: "s3",
     async put(body: ByteSource, { maxBytes, contentType }: PutOptions): Promise<StoredObject> {
       await ensureBucket();
@@ -63,4 +64,24 @@ export function s3Storage(config: S3Config): Storage {
       await client.send(new DeleteObjectCommand({ Bucket: config.bucket, Key: key }));
     },
   };
+  return withUnavailableErrors(storage);
 }
+
+/**
+ * An object store that cannot be reached is the user's "try again later", not an internal
+ * error: driver failures other than our own refusals become a 503 that says nothing was kept.
+ */
+function withUnavailableErrors(storage: Storage): Storage {
+  const wrap =
+    <A extends unknown[], R>(fn: (...args: A) => Promise<R>) =>
+    async (...args: A): Promise<R> => {
+      try {
+        return await fn(...args);
+      } catch (err) {
+        if (err instanceof AppError) throw err;
+        throw new AppError("unavailable", "File storage is not reachable right now; nothing was saved. Try again in a moment.", { headers: { "retry-after": "10" } });
+      }
+    };
+  return { ...storage, put: wrap(storage.put.bind(storage)), get: wrap(storage.get.bind(storage)), delete: wrap(storage.delete.bind(storage)) };
+}
+
