@@ -1,5 +1,6 @@
 import "server-only";
 import { AppError } from "@/lib/api/errors";
+import { constraintIssues } from "./constraint-messages";
 
 const CONNECTION_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "EPIPE", "57P01", "57P02", "57P03", "08000", "08001", "08003", "08006"]);
 
@@ -22,6 +23,8 @@ export function fromDbError(err: unknown): AppError | null {
   if ((code && CONNECTION_CODES.has(code)) || /Connection terminated|connect ECONNREFUSED|timeout exceeded when trying to connect/i.test(msg)) {
     return new AppError("unavailable", "The database is not reachable right now. Try again in a moment.", { headers: { "retry-after": "5" } });
   }
+  const known = code?.startsWith("23") ? constraintIssues(constraint) : undefined;
+  if (known) return new AppError(code === "23514" ? "validation_failed" : "conflict", known.message, known.issues ? { issues: known.issues } : {});
   switch (code) {
     case "23505":
       return new AppError("conflict", `That already exists (${constraint ?? "unique value"}).${detail ? " " + detail : ""}`);

@@ -81,6 +81,18 @@ export const createCoolerModel = defineOperation({
   successStatus: 201,
 });
 
+export const updateCoolerModel = defineOperation({
+  id: "updateCoolerModel",
+  method: "PUT",
+  path: "/api/v1/cooler-models/{id}",
+  summary: "Replace a cooler model's parts and radiator figures (its board model is fixed once profiles exist)",
+  tag: "Registry",
+  access: "registry:write",
+  params: idParams,
+  body: coolerModelBody,
+  response: z.object({ coolerModel: coolerModelView }),
+});
+
 export const listBoardModels = defineOperation({
   id: "listBoardModels",
   method: "GET",
@@ -101,6 +113,18 @@ export const createBoardModel = defineOperation({
   body: boardModelBody,
   response: z.object({ boardModel: boardModelView }),
   successStatus: 201,
+});
+
+export const updateBoardModel = defineOperation({
+  id: "updateBoardModel",
+  method: "PUT",
+  path: "/api/v1/board-models/{id}",
+  summary: "Rename or describe a board model (its serial prefix is fixed once production lots exist)",
+  tag: "Registry",
+  access: "registry:write",
+  params: idParams,
+  body: boardModelBody,
+  response: z.object({ boardModel: boardModelView }),
 });
 
 export const createBoardRevision = defineOperation({
@@ -126,4 +150,16 @@ export const getBoardRevision = defineOperation({
   params: idParams,
   response: z.object({ revision: boardRevisionView, boardModelName: z.string(), compatibility: compatibilityView }),
 });
+export const updateBoardRevision = defineOperation({
+  id: "updateBoardRevision",
+  method: "PUT",
+  path: "/api/v1/board-revisions/{id}",
+  summary: "Correct a board revision's limits (only its notes once production lots of it exist)",
+  tag: "Registry",
+  access: "registry:write",
+  params: idParams,
+  body: boardRevisionBody,
+  response: z.object({ revision: boardRevisionView }),
+});
+
 export type BoardRevisionDetail = { revision: z.infer<typeof boardRevisionView>; boardModelName: string; compatibility: CompatibilityView };

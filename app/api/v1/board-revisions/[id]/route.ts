@@ -1,10 +1,11 @@
 import { apiRoute } from "@/lib/server/api";
-import { getBoardRevision } from "@/lib/api/operations/registry";
+import { getBoardRevision, updateBoardRevision } from "@/lib/api/operations/registry";
 import { AppError } from "@/lib/api/errors";
 import { getDb } from "@/db/client";
 import * as boards from "@/db/boards";
 import { listVersionsForBoardModel } from "@/db/profile-versions";
 import { compatibilityCells } from "@/lib/registry/version-image";
+import { auditActor } from "@/lib/server/actor";
 
 export const GET = apiRoute(getBoardRevision, async ({ params }) => {
   const db = getDb();
@@ -17,3 +18,7 @@ export const GET = apiRoute(getBoardRevision, async ({ params }) => {
     compatibility: { revisions: siblings, rows: versions.map((v) => ({ ...v, cells: compatibilityCells(v, siblings) })) },
   };
 });
+
+export const PUT = apiRoute(updateBoardRevision, async ({ actor, params, body, requestId }) => ({
+  revision: await boards.updateBoardRevision(getDb(), auditActor(actor, requestId), { id: params.id, ...body }),
+}));
