@@ -6,38 +6,52 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { apiFetch } from "@/lib/api/client";
 import type { AppError } from "@/lib/api/errors";
-import { boardModelBody, boardRevisionBody, type BoardModelBody, type BoardModelView, type BoardRevisionBody } from "@/lib/api/operations/registry-schemas";
+import { boardModelBody, boardRevisionBody, type BoardModelBody, type BoardModelView, type BoardRevisionBody, type BoardRevisionView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { NumberField } from "./number-field";
+import { showServerIssues } from "./server-issues";
 
-export function BoardModelForm() {
+/** Adds a board model, or edits `editing` (same schema as the API body). */
+export function BoardModelForm({ editing, onDone }: { editing?: BoardModelView; onDone?: () => void }) {
   const qc = useQueryClient();
-  const form = useForm<BoardModelBody>({ resolver: zodResolver(boardModelBody), defaultValues: { description: "" } });
+  const form = useForm<BoardModelBody>({
+    resolver: zodResolver(boardModelBody),
+    defaultValues: editing ? { name: editing.name, serialPrefix: editing.serialPrefix, description: editing.description } : { description: "" },
+  });
   const create = useMutation({
-    mutationFn: (v: BoardModelBody) => apiFetch("/api/v1/board-models", { method: "POST", json: v }),
+    mutationFn: (v: BoardModelBody) =>
+      editing ? apiFetch(`/api/v1/board-models/${editing.id}`, { method: "PUT", json: v }) : apiFetch("/api/v1/board-models", { method: "POST", json: v }),
     onSuccess: () => {
-      form.reset({ name: "", serialPrefix: "", description: "" });
+      if (!editing) form.reset({ name: "", serialPrefix: "", description: "" });
       void qc.invalidateQueries({ queryKey: ["board-models"] });
+      onDone?.();
     },
+    onError: (err) => showServerIssues(form, err),
   });
   const { errors } = form.formState;
+  const p = editing ? `bme-${editing.id.slice(0, 8)}` : "bm";
   return (
-    <Panel title="Add a board model">
+    <Panel title={editing ? `Edit ${editing.name}` : "Add a board model"}>
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="space-y-3" noValidate>
         {create.error && <Notice tone="fault" role="alert">{(create.error as AppError).message}</Notice>}
-        <Field id="bm-name" label="Name" error={errors.name?.message}>
-          <Input {...describedBy("bm-name", errors.name?.message)} {...form.register("name")} />
+        <Field id={`${p}-name`} label="Name" error={errors.name?.message}>
+          <Input {...describedBy(`${p}-name`, errors.name?.message)} {...form.register("name")} />
         </Field>
-        <Field id="bm-prefix" label="Serial prefix" hint="2–8 capital letters or digits." error={errors.serialPrefix?.message}>
-          <Input {...describedBy("bm-prefix", errors.serialPrefix?.message)} {...form.register("serialPrefix")} />
+        <Field id={`${p}-prefix`} label="Serial prefix" hint="2–8 capital letters or digits." error={errors.serialPrefix?.message}>
+          <Input {...describedBy(`${p}-prefix`, errors.serialPrefix?.message)} {...form.register("serialPrefix")} />
         </Field>
-        <Field id="bm-desc" label="Description" error={errors.description?.message}>
-          <Textarea rows={2} {...describedBy("bm-desc", errors.description?.message)} {...form.register("description")} />
+        <Field id={`${p}-desc`} label="Description" error={errors.description?.message}>
+          <Textarea rows={2} {...describedBy(`${p}-desc`, errors.description?.message)} {...form.register("description")} />
         </Field>
-        <Button type="submit" disabled={create.isPending}>Add board model</Button>
+        <div className="flex gap-2">
+          <Button type="submit" disabled={create.isPending}>{editing ? "Save changes" : "Add board model"}</Button>
+          {editing && onDone && (
+            <Button type="button" variant="secondary" onClick={onDone}>Cancel</Button>
+          )}
+        </div>
       </form>
     </Panel>
   );
@@ -88,6 +102,64 @@ export function BoardRevisionForm({ boardModels }: { boardModels: BoardModelView
         </div>
         <div className="md:col-span-2">
           <Button type="submit" disabled={create.isPending || !boardModelId}>Add revision</Button>
+        </div>
+      </form>
+    </Panel>
+  );
+}
+
+const revisionBodyOf = (r: BoardRevisionView): BoardRevisionBody => ({
+  revision: r.revision,
+  memoryBytes: r.memoryBytes,
+  baseAddress: r.baseAddress,
+  slotCount: r.slotCount,
+  maxPointsPerCurve: r.maxPointsPerCurve,
+  pwmFrequencyHz: r.pwmFrequencyHz,
+  tachPulsesPerRev: r.tachPulsesPerRev,
+  notes: r.notes,
+});
+
+/** Corrects a revision's limits; once boards of it shipped the server only accepts note changes. */
+export function BoardRevisionEditForm({ revision, onDone }: { revision: BoardRevisionView; onDone: () => void }) {
+  const qc = useQueryClient();
+  const form = useForm<BoardRevisionBody>({ resolver: zodResolver(boardRevisionBody), defaultValues: revisionBodyOf(revision) });
+  const save = useMutation({
+    mutationFn: (v: BoardRevisionBody) => apiFetch(`/api/v1/board-revisions/${revision.id}`, { method: "PUT", json: v }),
+    onSuccess: () => {
+      void qc.invalidateQueries({ queryKey: ["board-revision", revision.id] });
+      void qc.invalidateQueries({ queryKey: ["board-models"] });
+      onDone();
+    },
+    onError: (err) => showServerIssues(form, err),
+  });
+  const { errors } = form.formState;
+  const num = (name: keyof BoardRevisionBody) => form.register(name, { setValueAs: (v: string) => (v === "" ? Number.NaN : Number(v)) });
+  return (
+    <Panel title={`Edit revision ${revision.revision}`}>
+      <form onSubmit={(e) => void form.handleSubmit((v) => save.mutate(v))(e)} className="grid gap-3 md:grid-cols-2" noValidate>
+        {save.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{(save.error as AppError).message}</Notice></div>}
+        <Field id="bre-rev" label="Revision" hint="Semantic version, e.g. 2.1.0." error={errors.revision?.message}>
+          <Input {...describedBy("bre-rev", errors.revision?.message)} {...form.register("revision")} />
+        </Field>
+        <NumberField id="bre-mem" label="Profile memory (bytes)" error={errors.memoryBytes?.message} reg={num("memoryBytes")} step="1" />
+        <Field id="bre-base" label="Base address" hint="Decimal, or hex as 0x0801F800." error={errors.baseAddress?.message}>
+          <Input
+            {...describedBy("bre-base", errors.baseAddress?.message)}
+            {...form.register("baseAddress", { setValueAs: (v: string | number) => (String(v).trim() === "" ? Number.NaN : Number(String(v).trim())) })}
+          />
+        </Field>
+        <NumberField id="bre-slots" label="Profile slots" error={errors.slotCount?.message} reg={num("slotCount")} step="1" />
+        <NumberField id="bre-points" label="Max points per curve" error={errors.maxPointsPerCurve?.message} reg={num("maxPointsPerCurve")} step="1" />
+        <NumberField id="bre-pwm" label="PWM frequency (Hz)" error={errors.pwmFrequencyHz?.message} reg={num("pwmFrequencyHz")} step="1" />
+        <NumberField id="bre-tach" label="Tach pulses per revolution" error={errors.tachPulsesPerRev?.message} reg={num("tachPulsesPerRev")} step="1" />
+        <div className="md:col-span-2">
+          <Field id="bre-notes" label="Notes" error={errors.notes?.message}>
+            <Textarea rows={2} {...describedBy("bre-notes", errors.notes?.message)} {...form.register("notes")} />
+          </Field>
+        </div>
+        <div className="flex gap-2 md:col-span-2">
+          <Button type="submit" disabled={save.isPending}>Save changes</Button>
+          <Button type="button" variant="secondary" onClick={onDone}>Cancel</Button>
         </div>
       </form>
     </Panel>

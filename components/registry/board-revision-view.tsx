@@ -2,16 +2,20 @@
 
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
+import { useState } from "react";
 import { apiFetch } from "@/lib/api/client";
 import type { AppError } from "@/lib/api/errors";
 import type { BoardRevisionDetail } from "@/lib/api/operations/registry";
 import { Notice } from "@/components/ui/notice";
+import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { BoardRevisionEditForm } from "./board-forms";
 import { CompatibilityMatrix } from "./compatibility-matrix";
 
-export function BoardRevisionView({ id }: { id: string }) {
+export function BoardRevisionView({ id, canWrite }: { id: string; canWrite: boolean }) {
   const q = useQuery({ queryKey: ["board-revision", id], queryFn: () => apiFetch<BoardRevisionDetail>(`/api/v1/board-revisions/${id}`) });
+  const [editing, setEditing] = useState(false);
   if (q.isPending) return <Panel title="Board revision"><Table caption="Loading"><tbody><SkeletonRows cols={4} rows={4} /></tbody></Table></Panel>;
   if (q.isError)
     return (
@@ -43,7 +47,13 @@ export function BoardRevisionView({ id }: { id: string }) {
           ))}
         </dl>
         {r.notes && <p className="mt-3 text-sm text-ink-700">{r.notes}</p>}
+        {canWrite && !editing && (
+          <div className="mt-3">
+            <Button variant="secondary" onClick={() => setEditing(true)}>Edit limits</Button>
+          </div>
+        )}
       </Panel>
+      {canWrite && editing && <BoardRevisionEditForm revision={r} onDone={() => setEditing(false)} />}
       <Panel title={`Profile versions that run on ${r.revision}`}>
         <Table caption={`Compatible profile versions for revision ${r.revision}`}>
           <thead>

@@ -2,8 +2,10 @@
 
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
+import { useState } from "react";
 import { apiFetch } from "@/lib/api/client";
 import type { BoardModelView } from "@/lib/api/operations/registry-schemas";
+import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { BoardModelForm, BoardRevisionForm } from "./board-forms";
@@ -12,6 +14,7 @@ const hex = (n: number) => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
 
 export function BoardsView({ canWrite }: { canWrite: boolean }) {
   const q = useQuery({ queryKey: ["board-models"], queryFn: () => apiFetch<{ items: BoardModelView[] }>("/api/v1/board-models") });
+  const [editingId, setEditingId] = useState<string | null>(null);
   return (
     <div className="space-y-5">
       {q.isPending && (
@@ -29,6 +32,18 @@ export function BoardsView({ canWrite }: { canWrite: boolean }) {
       {q.data?.items.map((b) => (
         <Panel key={b.id} title={`${b.name} · serial prefix ${b.serialPrefix}`}>
           {b.description && <p className="mb-3 text-sm text-ink-700">{b.description}</p>}
+          {canWrite && editingId !== b.id && (
+            <div className="mb-3">
+              <Button variant="secondary" onClick={() => setEditingId(b.id)}>
+                Edit board model <span className="sr-only">{b.name}</span>
+              </Button>
+            </div>
+          )}
+          {canWrite && editingId === b.id && (
+            <div className="mb-3">
+              <BoardModelForm editing={b} onDone={() => setEditingId(null)} />
+            </div>
+          )}
           <Table caption={`Revisions of ${b.name}`}>
             <thead>
               <tr>

@@ -5,6 +5,8 @@ import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { apiFetch } from "@/lib/api/client";
 import type { CoolerModelView } from "@/lib/api/operations/registry-schemas";
+import { useMemo, useState } from "react";
+import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import { DataTable, type ServerPage } from "./data-table";
@@ -36,8 +38,23 @@ const columns: ColumnDef<CoolerModelView>[] = [
   },
 ];
 
+function editColumn(onEdit: (c: CoolerModelView) => void): ColumnDef<CoolerModelView> {
+  return {
+    id: "edit",
+    header: () => <span className="sr-only">Actions</span>,
+    enableSorting: false,
+    cell: (c) => (
+      <Button variant="quiet" onClick={() => onEdit(c.row.original)}>
+        Edit <span className="sr-only">{c.row.original.name}</span>
+      </Button>
+    ),
+  };
+}
+
 export function CoolerModelsList({ canWrite }: { canWrite: boolean }) {
   const list = useListParams(["q"]);
+  const [editing, setEditing] = useState<CoolerModelView | null>(null);
+  const shown = useMemo(() => (canWrite ? [...columns, editColumn(setEditing)] : columns), [canWrite]);
   const q = useQuery({
     queryKey: ["cooler-models", list.apiQuery],
     queryFn: () => apiFetch<ServerPage<CoolerModelView>>(`/api/v1/cooler-models?${list.apiQuery}`),
@@ -53,7 +70,7 @@ export function CoolerModelsList({ canWrite }: { canWrite: boolean }) {
         </FilterBar>
         <DataTable
           caption="Cooler models"
-          columns={columns}
+          columns={shown}
           data={q.data}
           isPending={q.isPending}
           isError={q.isError}
@@ -65,6 +82,7 @@ export function CoolerModelsList({ canWrite }: { canWrite: boolean }) {
           onPage={(p) => list.set({ page: String(p) })}
         />
       </Panel>
+      {canWrite && editing && <CoolerModelForm key={editing.id} editing={editing} onDone={() => setEditing(null)} />}
       {canWrite && <CoolerModelForm />}
     </div>
   );
