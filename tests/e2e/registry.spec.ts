@@ -114,5 +114,59 @@ test.describe("registry, as a viewer", () => {
     await page.getByRole("link", { name: "0.9.0" }).click();
     await expect(page.getByText(/99 bytes but the revision has 96/).first()).toBeVisible();
     await expect(page.getByRole("button", { name: "Add revision" })).toHaveCount(0);
+    await expect(page.getByRole("button", { name: "Edit limits" })).toHaveCount(0);
+  });
+
+  test("the editor evaluates a profile on another cooler of the same board, and says whose profile it is", async ({ page }) => {
+    await signInPage(page, ACCOUNTS.viewer);
+    const list = (await (await page.request.get("/api/v1/profiles?q=Hush")).json()) as { items: { id: string; name: string }[] };
+    const hush = list.items.find((p) => p.name === "Hush")!;
+    await page.goto(`/profiles/${hush.id}`);
+    const own = (await page.getByTestId("cooler-name").textContent())!;
+    const chart = page.getByTestId("curve-chart");
+    await expect(chart).toBeVisible();
+    const picker = page.getByLabel("Evaluate on cooler");
+    await expect(picker.locator("option")).toHaveCount(2);
+    await expect(picker.locator("option:checked")).toContainText(`${own} (this profile's cooler)`);
+    const fanBefore = await chart.getAttribute("data-fan-rpm-40c");
+
+    const other = own === "Tarn 240" ? "Tarn 360" : "Tarn 240";
+    const otherLabel = (await picker.locator("option", { hasText: other }).textContent())!;
+    await picker.selectOption({ label: otherLabel });
+    // The two coolers use different fans, so the plotted fan speed at 40 °C moves.
+    await expect.poll(() => chart.getAttribute("data-fan-rpm-40c")).not.toBe(fanBefore);
+    await expect(page.getByTestId("evaluating-other-cooler")).toContainText(`on ${other}`);
+    await expect(page.getByTestId("evaluating-other-cooler")).toContainText(`still belongs to ${own}`);
+    await expect(page.getByTestId("cooler-name")).toHaveText(own);
+
+    await page.getByRole("button", { name: `Back to ${own}` }).click();
+    await expect(page.getByTestId("evaluating-other-cooler")).toHaveCount(0);
+    await expect.poll(() => chart.getAttribute("data-fan-rpm-40c")).toBe(fanBefore);
+  });
+});
+
+test.describe("registry edits, as an engineer", () => {
+  test("edit a cooler model: field error from the shared schema, then a saved change", async ({ page }) => {
+    await signInPage(page, ACCOUNTS.engineer);
+    const all = (await (await page.request.get("/api/v1/cooler-models?q=Tarn 240")).json()) as { items: { fanComponentId: string; pumpComponentId: string; boardModelId: string }[] };
+    const base = all.items[0]!;
+    const name = `Edit test ${Date.now()}`;
+    const created = await page.request.post("/api/v1/cooler-models", {
+      data: { name, radiatorMm: 240, fanComponentId: base.fanComponentId, fanCount: 2, pumpComponentId: base.pumpComponentId, boardModelId: base.boardModelId, radiatorKPerWAtMinFan: 0.12, radiatorKPerWAtMaxFan: 0.06 },
+    });
+    expect(created.status()).toBe(201);
+
+    await page.goto(`/cooler-models?q=${encodeURIComponent(name)}`);
+    await page.getByRole("button", { name: `Edit ${name}` }).click();
+    const form = page.locator("form").filter({ has: page.getByRole("button", { name: "Save changes" }) });
+    const fans = form.getByLabel("Number of fans");
+    await expect(fans).toHaveValue("2");
+    await fans.fill("0");
+    await form.getByRole("button", { name: "Save changes" }).click();
+    await expect(form.getByText("At least 1 fan.")).toBeVisible();
+    await fans.fill("3");
+    await form.getByRole("button", { name: "Save changes" }).click();
+    await expect(page.getByRole("button", { name: "Save changes" })).toHaveCount(0);
+    await expect(page.getByRole("table", { name: "Cooler models" }).getByRole("row", { name: new RegExp(name) })).toContainText("3 ×");
   });
 });

@@ -1,5 +1,6 @@
 "use client";
 
+import { memo } from "react";
 import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { PlotRow } from "@/lib/registry/editor-evaluation";
 
@@ -11,7 +12,7 @@ export interface MotorLimits {
 }
 
 /** Pump and fan RPM against liquid temperature, authored and as flashed, with sound on a second axis. */
-export default function CurveChart({ rows, limits, criticalTempC }: { rows: PlotRow[]; limits: MotorLimits; criticalTempC: number | undefined }) {
+function CurveChart({ rows, limits, criticalTempC }: { rows: PlotRow[]; limits: MotorLimits; criticalTempC: number | undefined }) {
   return (
     <figure aria-label="Pump and fan speed and estimated sound against liquid temperature" data-testid="curve-chart" data-rows={rows.length} data-first-pump-rpm={rows[0]?.pumpRpm ?? ""} data-fan-rpm-40c={rows.find((r) => r.tempC === 40)?.fanRpm ?? ""}>
       <ResponsiveContainer width="100%" height={320}>
@@ -39,3 +40,6 @@ export default function CurveChart({ rows, limits, criticalTempC }: { rows: Plot
     </figure>
   );
 }
+
+// Re-drawn only when its rows or limits change, not on every render of the editor around it.
+export default memo(CurveChart);

@@ -2,7 +2,7 @@
 
 import Editor from "@monaco-editor/react";
 import type * as Monaco from "monaco-editor";
-import { useEffect, useRef } from "react";
+import { memo, useEffect, useRef } from "react";
 import type { ValidationIssue } from "@/lib/engine";
 import { PROFILE_MODEL_URI, setupMonaco } from "./monaco-setup";
 
@@ -32,7 +32,7 @@ function toMarker(issue: ValidationIssue): Monaco.editor.IMarkerData {
 }
 
 /** The profile's JSON in Monaco, with the engine's issues as markers. */
-export default function JsonEditor({
+function JsonEditor({
   value,
   onChange,
   issues,
@@ -93,3 +93,6 @@ export default function JsonEditor({
     />
   );
 }
+
+// Monaco is re-rendered only for new text or markers; background panel updates leave it alone.
+export default memo(JsonEditor);

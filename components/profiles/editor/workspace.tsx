@@ -3,7 +3,7 @@
 import { useQuery } from "@tanstack/react-query";
 import dynamic from "next/dynamic";
 import Link from "next/link";
-import { useEffect, useMemo, useRef, useState } from "react";
+import { memo, useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
 import { apiFetch } from "@/lib/api/client";
 import type { AppError } from "@/lib/api/errors";
 import type { ProfileDetailView, VersionWithDocumentView } from "@/lib/api/operations/profile-schemas";
@@ -11,6 +11,7 @@ import { suggestNextVersion, type CoolingProfile } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { evaluateEditorText } from "@/lib/registry/editor-evaluation";
 import { Select } from "@/components/ui/field";
+import { CoolerPicker, useCoolerChoices } from "./hardware-picker";
 import { EstimateCaution, Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import type { EditorHandle } from "./json-editor";
@@ -26,12 +27,19 @@ import { VersionHistory } from "./version-history";
 const JsonEditor = dynamic(() => import("./json-editor"), { ssr: false, loading: () => <div className="h-[520px] animate-pulse rounded bg-ink-100" aria-label="Loading the editor" /> });
 const CurveChart = dynamic(() => import("../charts/curve-chart"), { ssr: false, loading: () => <div className="h-80 animate-pulse rounded bg-ink-100" /> });
 
+// Panels outside the keystroke path re-render only when their (deferred) inputs change.
+const MemoOperatingPanel = memo(OperatingPanel);
+const MemoMemoryGauge = memo(MemoryGauge);
+const MemoVersionHistory = memo(VersionHistory);
+
 declare global {
   interface Window {
     /** The editor handle, for the browser benchmark and tests. */
     __loopkeeperEditor?: EditorHandle;
   }
 }
+
+const NO_ISSUES: never[] = [];
 
 export function ProfileWorkspace({ id, canWrite }: { id: string; canWrite: boolean }) {
   const q = useQuery({ queryKey: ["profile", id], queryFn: () => apiFetch<ProfileDetailView>(`/api/v1/profiles/${id}`) });
@@ -46,13 +54,23 @@ export function ProfileWorkspace({ id, canWrite }: { id: string; canWrite: boole
 }
 
 function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: boolean }) {
-  const { profile, cooler, fan, pump, revisions, versions } = detail;
+  const { profile, cooler, revisions, versions } = detail;
   const [text, setText] = useState<string>(() => profile.draftText ?? "{}\n");
   const [revisionId, setRevisionId] = useState(revisions[revisions.length - 1]?.id ?? "");
+  const [coolerId, setCoolerId] = useState(cooler.id);
   const editor = useRef<EditorHandle | null>(null);
+  const { choices, loadError } = useCoolerChoices(detail);
+  const chosen = choices.find((c) => c.id === coolerId) ?? choices[0]!;
+  const { fan, pump } = chosen;
   const revision = revisions.find((r) => r.id === revisionId) ?? revisions[revisions.length - 1];
-  const hw = useMemo(() => (revision ? toHardwareContext({ cooler, fan, pump, revision }) : null), [cooler, fan, pump, revision]);
+  const hw = useMemo(() => (revision ? toHardwareContext({ cooler: chosen.cooler, fan, pump, revision }) : null), [chosen.cooler, fan, pump, revision]);
+  // Keystroke path: validation (markers, problems) and the curve table (plots) only.
   const evaluation = useMemo(() => (hw ? evaluateEditorText(text, hw) : null), [text, hw]);
+  // Everything slower (operating point and load sweep, memory, version suggestion)
+  // renders in a background pass React may interrupt, so typing stays within a frame. The publish
+  // form takes the live text: what is sent is what is on screen (the server checks it again).
+  const deferredEvaluation = useDeferredValue(evaluation);
+  const deferredHw = useDeferredValue(hw);
   const save = useAutosave(profile.id, text, canWrite);
 
   const latest = versions[0];
@@ -61,7 +79,7 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
     queryFn: () => apiFetch<{ version: VersionWithDocumentView }>(`/api/v1/profile-versions/${latest!.id}`),
     enabled: Boolean(latest),
   });
-  const current = evaluation?.profile;
+  const current = deferredEvaluation?.profile;
   const latestDocument = latestDoc.data?.version.document as CoolingProfile | undefined;
   const suggestion = useMemo(() => {
     if (!latest || !latestDocument || !current) return null;
@@ -76,17 +94,29 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
     }
   }, [evaluation]);
 
-  const errors = evaluation?.issues.filter((i) => i.severity === "error").length ?? 0;
-  const limits = { fanMinRpm: fan.rpmAtMinDuty, fanMaxRpm: fan.maxRpm, pumpMinRpm: pump.rpmAtMinDuty, pumpMaxRpm: pump.maxRpm };
+  const onEdit = useCallback((t: string) => {
+    performance.mark("lk-edit");
+    setText(t);
+  }, []);
+  const onReady = useCallback((h: EditorHandle) => {
+    editor.current = h;
+    window.__loopkeeperEditor = h;
+  }, []);
+  const onJump = useCallback((line: number, column: number) => editor.current?.reveal(line, column), []);
+  const limits = useMemo(() => ({ fanMinRpm: fan.rpmAtMinDuty, fanMaxRpm: fan.maxRpm, pumpMinRpm: pump.rpmAtMinDuty, pumpMaxRpm: pump.maxRpm }), [fan, pump]);
+  const issues = evaluation?.issues ?? NO_ISSUES;
+
+  const errors = deferredEvaluation?.issues.filter((i) => i.severity === "error").length ?? 0;
 
   return (
     <div className="space-y-5">
       <EstimateCaution />
       <div className="flex flex-wrap items-end gap-4 rounded-md bg-white p-4 shadow-panel">
         <div className="text-sm">
-          <span className="block font-medium text-ink-800">Cooler model</span>
-          <span data-testid="cooler-name">{cooler.name}</span> <span className="text-ink-600">({cooler.fanCount} × {fan.name}, {pump.name})</span>
+          <span className="block font-medium text-ink-800">Profile for cooler model</span>
+          <span data-testid="cooler-name">{cooler.name}</span> <span className="text-ink-600">({cooler.fanCount} × {detail.fan.name}, {detail.pump.name})</span>
         </div>
+        <CoolerPicker choices={choices} value={chosen.id} onChange={setCoolerId} loadError={loadError} />
         <label className="text-sm">
           <span className="mb-1 block font-medium text-ink-800">Board revision ({cooler.boardModelName})</span>
           <Select value={revision?.id ?? ""} onChange={(e) => setRevisionId(e.target.value)} className="w-64">
@@ -110,6 +140,15 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
           )}
         </div>
       </div>
+      {!chosen.own && (
+        <Notice tone="info" role="status">
+          <span data-testid="evaluating-other-cooler">
+            Evaluating this document on <strong>{chosen.cooler.name}</strong> ({chosen.cooler.fanCount} × {fan.name}, {pump.name}). The profile still belongs to{" "}
+            <strong>{cooler.name}</strong>: drafts and published versions are unchanged.
+          </span>{" "}
+          <button type="button" className="underline" onClick={() => setCoolerId(cooler.id)}>Back to {cooler.name}</button>
+        </Notice>
+      )}
 
       <div className="grid gap-5 xl:grid-cols-2">
         <div className="space-y-3">
@@ -118,21 +157,15 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
               value={text}
               readOnly={!canWrite}
               label={`Profile ${profile.name} JSON`}
-              issues={evaluation?.issues ?? []}
-              onChange={(t) => {
-                performance.mark("lk-edit");
-                setText(t);
-              }}
-              onReady={(h) => {
-                editor.current = h;
-                window.__loopkeeperEditor = h;
-              }}
+              issues={issues}
+              onChange={onEdit}
+              onReady={onReady}
             />
           </div>
-          <ProblemsList issues={evaluation?.issues ?? []} onJump={(line, column) => editor.current?.reveal(line, column)} />
+          <ProblemsList issues={issues} onJump={onJump} />
         </div>
         <div className="space-y-5">
-          <Panel title="Speeds and sound against liquid temperature">
+          <Panel title={`Speeds and sound against liquid temperature · ${chosen.cooler.name}`}>
             {evaluation && evaluation.rows.length > 0 ? (
               <CurveChart rows={evaluation.rows} limits={limits} criticalTempC={evaluation.profile?.criticalTempC} />
             ) : (
@@ -140,13 +173,13 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
             )}
             <p className="mt-2 text-xs text-ink-600">Solid: as authored. Dashed: as the board runs it after storing in 0.5 °C / 0.5 % steps.</p>
           </Panel>
-          {evaluation?.profile && hw && (
+          {deferredEvaluation?.profile && deferredHw && (
             <>
-              <Panel title="Operating point">
-                <OperatingPanel profile={evaluation.profile} hw={hw} />
+              <Panel title={`Operating point · ${deferredHw.name}`}>
+                <MemoOperatingPanel profile={deferredEvaluation.profile} hw={deferredHw} />
               </Panel>
               <Panel title="Memory">
-                <MemoryGauge profile={evaluation.profile} revisions={revisions} boardRange={latest?.boardRange ?? null} />
+                <MemoMemoryGauge profile={deferredEvaluation.profile} revisions={revisions} boardRange={latest?.boardRange ?? null} />
               </Panel>
             </>
           )}
@@ -155,11 +188,11 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
 
       {canWrite && (
         <Panel title="Publish">
-          <PublishPanel profileId={profile.id} text={text} suggestion={suggestion} defaultRange={latest?.boardRange ?? ">=1.0.0"} blocked={errors > 0 || !evaluation?.profile} />
+          <PublishPanel profileId={profile.id} text={text} suggestion={suggestion} defaultRange={latest?.boardRange ?? ">=1.0.0"} blocked={errors > 0 || !deferredEvaluation?.profile} />
         </Panel>
       )}
       <Panel title="Version history" actions={versions.length >= 2 ? <Link className="text-sm text-copper-700 underline" href={`/profiles/${profile.id}/compare`}>Compare versions</Link> : undefined}>
-        <VersionHistory profileId={profile.id} versions={versions} />
+        <MemoVersionHistory profileId={profile.id} versions={versions} />
       </Panel>
     </div>
   );
