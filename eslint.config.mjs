@@ -9,6 +9,7 @@ export default tseslint.config(
       "node_modules/**",
       ".next/**",
       ".next-test/**",
+      ".next-bench/**",
       ".next-*/**",
       ".data/**",
       "drizzle/**",
