@@ -17,7 +17,7 @@ import { Panel } from "@/components/ui/panel";
 import { Badge } from "@/components/ui/badge";
 import { DataTable, type ServerPage } from "@/components/registry/data-table";
 import { FilterBar } from "@/components/registry/filter-bar";
-import { useListParams } from "@/components/registry/use-list-params";
+import { useListParams, serverTableProps } from "@/components/registry/use-list-params";
 
 const columns: ColumnDef<ProfileSummaryView>[] = [
   {
@@ -60,15 +60,7 @@ export function ProfilesList({ canWrite }: { canWrite: boolean }) {
         <DataTable
           caption="Profiles"
           columns={columns}
-          data={q.data}
-          isPending={q.isPending}
-          isError={q.isError}
-          onRetry={() => void q.refetch()}
-          sort={list.sort}
-          dir={list.dir}
-          onSort={(sort, dir) => list.set({ sort, dir, page: "" })}
-          page={list.page}
-          onPage={(p) => list.set({ page: String(p) })}
+          {...serverTableProps(list, q)}
         />
       </Panel>
       {canWrite && <CreateProfileForm coolers={coolers.data?.items ?? []} />}

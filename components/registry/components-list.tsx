@@ -9,7 +9,7 @@ import { Input, Select } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import { DataTable, type ServerPage } from "./data-table";
 import { FilterBar } from "./filter-bar";
-import { useListParams } from "./use-list-params";
+import { useListParams, serverTableProps } from "./use-list-params";
 import { ComponentForm } from "./component-form";
 
 const columns: ColumnDef<ComponentView>[] = [
@@ -49,15 +49,7 @@ export function ComponentsList({ canWrite }: { canWrite: boolean }) {
         <DataTable
           caption="Components"
           columns={columns}
-          data={q.data}
-          isPending={q.isPending}
-          isError={q.isError}
-          onRetry={() => void q.refetch()}
-          sort={list.sort}
-          dir={list.dir}
-          onSort={(sort, dir) => list.set({ sort, dir, page: "" })}
-          page={list.page}
-          onPage={(p) => list.set({ page: String(p) })}
+          {...serverTableProps(list, q)}
         />
       </Panel>
       {canWrite && <ComponentForm />}

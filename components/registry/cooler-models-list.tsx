@@ -11,7 +11,7 @@ import { Input } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import { DataTable, type ServerPage } from "./data-table";
 import { FilterBar } from "./filter-bar";
-import { useListParams } from "./use-list-params";
+import { useListParams, serverTableProps } from "./use-list-params";
 import { CoolerModelForm } from "./cooler-model-form";
 
 const columns: ColumnDef<CoolerModelView>[] = [
@@ -71,15 +71,7 @@ export function CoolerModelsList({ canWrite }: { canWrite: boolean }) {
         <DataTable
           caption="Cooler models"
           columns={shown}
-          data={q.data}
-          isPending={q.isPending}
-          isError={q.isError}
-          onRetry={() => void q.refetch()}
-          sort={list.sort}
-          dir={list.dir}
-          onSort={(sort, dir) => list.set({ sort, dir, page: "" })}
-          page={list.page}
-          onPage={(p) => list.set({ page: String(p) })}
+          {...serverTableProps(list, q)}
         />
       </Panel>
       {canWrite && editing && <CoolerModelForm key={editing.id} editing={editing} onDone={() => setEditing(null)} />}
