@@ -1,11 +1,10 @@
 /** @type {import('next').NextConfig} */
 
 // Only self: scripts, styles, fonts, images and workers all come from this origin.
-// Monaco needs 'unsafe-eval' for its tokenizer and blob: workers; Next needs inline styles.
-const isDev = process.env.NODE_ENV !== "production";
+// Monaco needs 'unsafe-eval' for its tokenizer and blob: workers; Next needs inline scripts and styles.
 const csp = [
   "default-src 'self'",
-  `script-src 'self' 'unsafe-inline'${isDev ? " 'unsafe-eval'" : " 'unsafe-eval'"}`,
+  "script-src 'self' 'unsafe-inline' 'unsafe-eval'",
   "style-src 'self' 'unsafe-inline'",
   "img-src 'self' data: blob:",
   "font-src 'self' data:",
