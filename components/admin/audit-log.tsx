@@ -1,7 +1,7 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
-import { usePathname, useRouter, useSearchParams } from "next/navigation";
+import { useUrlParams } from "@/components/ui/use-url-params";
 import { apiFetch } from "@/lib/api/client";
 import { formText } from "@/components/ui/form-data";
 import type { AuditEventView } from "@/lib/api/operations/admin";
@@ -17,9 +17,7 @@ const FILTERS = [
 ] as const;
 
 export function AuditLog() {
-  const sp = useSearchParams();
-  const router = useRouter();
-  const pathname = usePathname();
+  const { sp, set: setParams } = useUrlParams();
   const page = Math.max(1, Number(sp.get("page") ?? "1") || 1);
   const qs = new URLSearchParams();
   for (const f of FILTERS) {
@@ -32,14 +30,6 @@ export function AuditLog() {
     queryFn: () => apiFetch<{ items: AuditEventView[]; hasMore: boolean }>(`/api/v1/audit?${qs.toString()}`),
   });
 
-  function setParams(next: Record<string, string>) {
-    const p = new URLSearchParams(sp.toString());
-    for (const [k, v] of Object.entries(next)) {
-      if (v) p.set(k, v);
-      else p.delete(k);
-    }
-    router.replace(`${pathname}?${p.toString()}`);
-  }
 
   return (
     <Panel>

@@ -1,12 +1,10 @@
 "use client";
 
-import { usePathname, useRouter, useSearchParams } from "next/navigation";
+import { useUrlParams } from "@/components/ui/use-url-params";
 
 /** List state (filters, sort, page) kept in the URL, so a view can be shared and survives reload. */
 export function useListParams(keys: readonly string[]) {
-  const sp = useSearchParams();
-  const router = useRouter();
-  const pathname = usePathname();
+  const { sp, set: setUrl } = useUrlParams();
   const page = Math.max(1, Number(sp.get("page") ?? "1") || 1);
   const sort = sp.get("sort") ?? "";
   const dir: "asc" | "desc" = sp.get("dir") === "desc" ? "desc" : "asc";
@@ -19,14 +17,7 @@ export function useListParams(keys: readonly string[]) {
   apiQuery.set("dir", dir);
   apiQuery.set("page", String(page));
 
-  function set(next: Record<string, string>) {
-    const p = new URLSearchParams(sp.toString());
-    for (const [k, v] of Object.entries(next)) {
-      if (v) p.set(k, v);
-      else p.delete(k);
-    }
-    router.replace(`${pathname}?${p.toString()}`, { scroll: false });
-  }
+  const set = (next: Record<string, string>) => setUrl(next, { scroll: false });
 
   return { sp, page, sort, dir, apiQuery: apiQuery.toString(), set };
 }

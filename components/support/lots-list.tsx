@@ -1,7 +1,7 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
-import { usePathname, useRouter, useSearchParams } from "next/navigation";
+import { useUrlParams } from "@/components/ui/use-url-params";
 import { apiFetch } from "@/lib/api/client";
 import type { LotOptions, LotView } from "@/lib/api/operations/support";
 import { formText } from "@/components/ui/form-data";
@@ -18,9 +18,7 @@ const SORTS = [
 ] as const;
 
 export function LotsList({ options }: { options: LotOptions | undefined }) {
-  const sp = useSearchParams();
-  const router = useRouter();
-  const pathname = usePathname();
+  const { sp, set: setParams } = useUrlParams();
   const page = Math.max(1, Number(sp.get("page") ?? "1") || 1);
   const qs = new URLSearchParams();
   for (const k of ["board", "build", "code", "sort", "dir"]) {
@@ -31,14 +29,6 @@ export function LotsList({ options }: { options: LotOptions | undefined }) {
   const q = useQuery({ queryKey: ["lots", qs.toString()], queryFn: () => apiFetch<{ items: LotView[]; hasMore: boolean }>(`/api/v1/lots?${qs.toString()}`) });
   const builds = (options?.boardModels ?? []).flatMap((m) => m.builds.map((b) => ({ ...b, model: m.name })));
 
-  function setParams(next: Record<string, string>) {
-    const p = new URLSearchParams(sp.toString());
-    for (const [k, v] of Object.entries(next)) {
-      if (v) p.set(k, v);
-      else p.delete(k);
-    }
-    router.replace(`${pathname}?${p.toString()}`);
-  }
 
   return (
     <Panel title="Lots">
