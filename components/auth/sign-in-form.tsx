@@ -7,8 +7,17 @@ import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 
-export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
-  const [error, setError] = useState<string | null>(null);
+/** One message for every failure: it never tells whether the account exists. */
+export const SIGN_IN_FAILED_MESSAGE =
+  "Sign-in failed. Check the e-mail and password. After repeated failures from this device, each next try has to wait a little longer.";
+
+/**
+ * Posts to the sign-in endpoint even before the page's scripts have loaded (method="post",
+ * so the password never lands in the address bar, the history or a server log); once the
+ * scripts run, the same form signs in without a page load.
+ */
+export function SignInForm({ callbackUrl, csrfToken, initialError }: { callbackUrl: string; csrfToken: string; initialError: string | null }) {
+  const [error, setError] = useState<string | null>(initialError);
   const [busy, setBusy] = useState(false);
 
   async function onSubmit(e: React.FormEvent<HTMLFormElement>) {
@@ -23,15 +32,16 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
     });
     setBusy(false);
     if (!res || res.error) {
-      // One message for every failure: it never tells whether the account exists.
-      setError("Sign-in failed. Check the e-mail and password; after several failures, wait 15 minutes.");
+      setError(SIGN_IN_FAILED_MESSAGE);
       return;
     }
     window.location.assign(callbackUrl);
   }
 
   return (
-    <form onSubmit={(e) => void onSubmit(e)} className="space-y-4" noValidate>
+    <form method="post" action="/api/auth/callback/credentials" onSubmit={(e) => void onSubmit(e)} className="space-y-4" noValidate>
+      <input type="hidden" name="csrfToken" value={csrfToken} />
+      <input type="hidden" name="callbackUrl" value={callbackUrl} />
       {error && (
         <div data-testid="sign-in-error">
           <Notice tone="fault" role="alert">

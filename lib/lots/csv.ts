@@ -1,5 +1,6 @@
 import { LOT_CSV_COLUMNS, lotInput, type LotInput } from "./input";
 import { parseSerial, rangesOverlap } from "../serials/serial";
+import { unsafeTextReason } from "../validation/text";
 
 /** A problem in one cell or row of an uploaded lots CSV; row 1 is the header. */
 export interface CsvRowIssue {
@@ -101,6 +102,13 @@ export function parseLotsCsv(text: string): ParsedLotsCsv {
   for (const rec of records) {
     if (rec.fields.length !== names.length) {
       issues.push({ row: rec.line, column: "", message: `Row has ${rec.fields.length} values; the header has ${names.length}.` });
+      continue;
+    }
+    // The same character rules as every other way in: the dry run and the commit read the file
+    // with this one parser, so a cell the database could not store is refused by both.
+    const unsafe = LOT_CSV_COLUMNS.map(([col]) => ({ col, reason: unsafeTextReason(rec.fields[index.get(col)!] ?? "", { singleLine: true }) })).filter((u) => u.reason);
+    if (unsafe.length) {
+      for (const u of unsafe) issues.push({ row: rec.line, column: u.col, message: u.reason! });
       continue;
     }
     const raw = Object.fromEntries(LOT_CSV_COLUMNS.map(([col, key]) => [key, rec.fields[index.get(col)!] ?? ""]));

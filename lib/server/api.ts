@@ -12,6 +12,8 @@ import { fromDbError } from "./db-errors";
 import { env } from "./env";
 import { logger } from "./log";
 import { readCappedBody } from "./raw-body";
+import { findUnsafeText, jsonNestingDepth, unsafeTextReason } from "@/lib/validation/text";
+import { MAX_DEPTH } from "@/lib/validation/hostile";
 
 const DEFAULT_MAX_BODY = 256 * 1024;
 
@@ -37,10 +39,39 @@ async function readJsonBody(req: NextRequest, maxBytes: number): Promise<unknown
   }
   const text = (await readCappedBody(req, maxBytes, `The body is larger than ${maxBytes} bytes.`)).toString("utf8");
   if (!text.trim()) throw new AppError("bad_request", "The body is empty; send a JSON object.");
+  // Counted before parsing, so hostile nesting never reaches the parser or anything recursive after it.
+  if (jsonNestingDepth(text, MAX_DEPTH) > MAX_DEPTH) {
+    throw new AppError("validation_failed", `The body is nested deeper than ${MAX_DEPTH} levels; no request needs that many.`);
+  }
+  let parsed: unknown;
   try {
-    return JSON.parse(text) as unknown;
+    parsed = JSON.parse(text) as unknown;
   } catch (err) {
     throw new AppError("bad_request", `The body is not valid JSON: ${err instanceof Error ? err.message : "parse error"}.`);
+  }
+  const unsafe = findUnsafeText(parsed);
+  if (unsafe.length) throw new AppError("validation_failed", "Some text in the body has characters that are not allowed.", { issues: unsafe });
+  return parsed;
+}
+
+/** Query strings: one value per name, no control or direction characters. */
+function readQuery(req: NextRequest): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const [key, value] of req.nextUrl.searchParams) {
+    if (Object.hasOwn(out, key)) throw new AppError("bad_request", `The query names "${key.slice(0, 40)}" more than once; send each parameter once.`);
+    const reason = unsafeTextReason(key, { singleLine: true }) ?? unsafeTextReason(value, { singleLine: true });
+    if (reason) throw new AppError("bad_request", `The query parameter "${key.slice(0, 40)}" is not allowed: ${reason}`, { issues: [{ path: `/${key.slice(0, 40)}`, message: reason }] });
+    out[key] = value;
+  }
+  return out;
+}
+
+function checkParams(raw: unknown): void {
+  for (const [key, value] of Object.entries((raw ?? {}) as Record<string, unknown>)) {
+    for (const v of Array.isArray(value) ? value : [value]) {
+      const reason = typeof v === "string" ? unsafeTextReason(v, { singleLine: true }) : undefined;
+      if (reason) throw new AppError("bad_request", `The address part "${key}" is not allowed: ${reason}`);
+    }
   }
 }
 
@@ -114,8 +145,10 @@ export function apiRoute<Q extends z.ZodType, B extends z.ZodType, P extends z.Z
         await enforceRateLimit(actor);
       }
       const rawParams: unknown = (await routeCtx?.params) ?? {};
+      checkParams(rawParams);
+      const rawQuery = readQuery(req);
       const params = op.params ? parseWith(op.params, rawParams, "path") : undefined;
-      const query = op.query ? parseWith(op.query, Object.fromEntries(req.nextUrl.searchParams), "query") : undefined;
+      const query = op.query ? parseWith(op.query, rawQuery, "query") : undefined;
       const body = op.body ? parseWith(op.body, await readJsonBody(req, op.maxBodyBytes ?? DEFAULT_MAX_BODY), "body") : undefined;
       const result = await handler({
         req,

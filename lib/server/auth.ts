@@ -2,22 +2,20 @@ import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { z } from "zod";
-import { getDb } from "@/db/client";
-import { getUserByEmail } from "@/db/users";
-import { clearFailures, recordFailure, secondsLocked } from "@/db/throttle";
-import { burnPasswordCheck, verifyPassword } from "./password";
+import { unsafeTextReason } from "@/lib/validation/text";
+import { safeCallbackPath } from "@/lib/auth/callback-url";
+import { clientAddress } from "./client-address";
 import { env } from "./env";
+import { logger } from "./log";
+import { checkCredentials } from "./sign-in";
 
-const credentialsSchema = z.object({ email: z.string().trim().min(1).max(320), password: z.string().min(1).max(1024) });
+// Refused before anything is looked up: PostgreSQL text cannot hold a NUL, and no address or
+// password needs control or direction characters.
+const plain = (max: number) => z.string().max(max).refine((s) => !unsafeTextReason(s, { singleLine: true }));
+const credentialsSchema = z.object({ email: plain(320).pipe(z.string().trim().min(1)), password: plain(1024).pipe(z.string().min(1)) });
 
 /** The message for every failed sign-in: it never says whether the account exists. */
 export const SIGN_IN_FAILED = "CredentialsSignin";
-
-function clientAddress(headers: Record<string, unknown> | undefined): string {
-  const fwd = headers?.["x-forwarded-for"];
-  if (typeof fwd === "string" && fwd) return fwd.split(",")[0]!.trim();
-  return "local";
-}
 
 export function authOptions(): NextAuthOptions {
   return {
@@ -32,26 +30,24 @@ export function authOptions(): NextAuthOptions {
           const parsed = credentialsSchema.safeParse(raw);
           if (!parsed.success) return null;
           const { email, password } = parsed.data;
-          const db = getDb();
-          const accountKey = `acct:${email.toLowerCase()}`;
-          const addressKey = `addr:${clientAddress(req?.headers)}`;
-          if ((await secondsLocked(db, { keys: [accountKey, addressKey] })) > 0) {
-            await burnPasswordCheck(password);
+          try {
+            const result = await checkCredentials({ email, password, client: clientAddress(req?.headers) });
+            if (!result.ok) return null;
+            const { user } = result;
+            return { id: user.id, email: user.email, name: user.name, role: user.role, epoch: user.sessionEpoch };
+          } catch (err) {
+            // next-auth puts a thrown message into the redirect URL; the cause goes to the log only.
+            logger.error({ err: err instanceof Error ? { message: err.message, stack: err.stack } : String(err) }, "sign-in check failed");
             return null;
           }
-          const user = await getUserByEmail(db, { email });
-          const ok = user ? await verifyPassword(password, user.passwordHash) : await burnPasswordCheck(password);
-          if (!user || !ok || user.disabledAt) {
-            await recordFailure(db, { keys: [accountKey] });
-            await recordFailure(db, { keys: [addressKey], maxFailures: 100 });
-            return null;
-          }
-          await clearFailures(db, { keys: [accountKey] });
-          return { id: user.id, email: user.email, name: user.name, role: user.role, epoch: user.sessionEpoch };
         },
       }),
     ],
     callbacks: {
+      // Same-origin paths only, however the callback address was written.
+      redirect({ url, baseUrl }) {
+        return `${baseUrl}${safeCallbackPath(url, baseUrl)}`;
+      },
       jwt({ token, user }) {
         if (user) {
           const u = user as unknown as { id: string; role: string; epoch: number };

@@ -1,7 +1,38 @@
 import "server-only";
+import { isIP } from "node:net";
 import { z } from "zod";
 
 const pgPort = process.env.LOOPKEEPER_PG_PORT ?? "54329";
+
+export interface TrustedProxy {
+  address: string;
+  prefix: number;
+  family: "ipv4" | "ipv6";
+}
+
+/**
+ * TRUSTED_PROXIES: the reverse proxies whose X-Forwarded-For may name the client, as a
+ * comma-separated list of addresses or CIDR blocks (e.g. "10.0.0.5, 10.1.0.0/16, ::1").
+ * Empty (the default) trusts no forwarding header: the client is the socket's peer.
+ */
+const trustedProxies = z
+  .string()
+  .default("")
+  .transform((raw, ctx): TrustedProxy[] => {
+    const out: TrustedProxy[] = [];
+    for (const part of raw.split(",").map((p) => p.trim()).filter(Boolean)) {
+      const [address = "", bits] = part.split("/");
+      const version = isIP(address);
+      const max = version === 6 ? 128 : 32;
+      const prefix = bits === undefined ? max : /^\d{1,3}$/.test(bits) ? Number(bits) : NaN;
+      if (version === 0 || !(prefix >= 0 && prefix <= max)) {
+        ctx.addIssue({ code: "custom", message: `"${part}" is not an IP address or CIDR block (e.g. 10.0.0.5 or 10.1.0.0/16).` });
+        continue;
+      }
+      out.push({ address, prefix, family: version === 6 ? "ipv6" : "ipv4" });
+    }
+    return out;
+  });
 
 const schema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
@@ -22,6 +53,7 @@ const schema = z.object({
   REQUIRED_APPROVALS: z.coerce.number().int().min(1).max(10).default(2),
   SOUND_TOLERANCE_DB: z.coerce.number().min(0).max(20).default(3),
   API_RATE_LIMIT_PER_MIN: z.coerce.number().int().min(1).default(600),
+  TRUSTED_PROXIES: trustedProxies,
 });
 
 export type Env = z.infer<typeof schema>;
@@ -36,6 +68,11 @@ function parseEnv(): Env {
 }
 
 let cached: Env | undefined;
+/** Forgets the parsed environment so the next env() reads process.env again (tests that change it). */
+export function resetEnvForTests(): void {
+  cached = undefined;
+}
+
 /** The parsed environment; parsed once, on first use, so a build without secrets still works. */
 export function env(): Env {
   cached ??= parseEnv();

@@ -1,6 +1,7 @@
 import "server-only";
 import { forbidden, redirect } from "next/navigation";
 import { can, type Capability } from "@/lib/auth/roles";
+import { safeCallbackPath } from "@/lib/auth/callback-url";
 import { getSessionActor, type Actor } from "./actor";
 
 /**
@@ -9,7 +10,7 @@ import { getSessionActor, type Actor } from "./actor";
  */
 export async function requirePageActor(capability: Capability = "read", callbackPath?: string): Promise<Actor> {
   const actor = await getSessionActor();
-  if (!actor) redirect(callbackPath ? `/sign-in?callbackUrl=${encodeURIComponent(callbackPath)}` : "/sign-in");
+  if (!actor) redirect(callbackPath ? `/sign-in?callbackUrl=${encodeURIComponent(safeCallbackPath(callbackPath, "http://app.invalid"))}` : "/sign-in");
   if (!can(actor.role, capability)) forbidden();
   return actor;
 }

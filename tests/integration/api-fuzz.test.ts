@@ -105,3 +105,91 @@ describe("API fuzz from the operation list (valid, invalid and hostile inputs)",
     }, 120_000);
   }
 });
+
+/**
+ * Database or driver wording that must never reach a client (OWASP ASVS 4.0.3 V7.4.1): query
+ * text, constraint names, key values, PostgreSQL's messages.
+ */
+const DATABASE_TEXT =
+  /duplicate key value|violates (unique|foreign key|check|exclusion|not-null) constraint|invalid byte sequence|syntax error at or near|stack depth limit|\bKey \([^)]*\)=\(|\b(insert into|delete from)\s+"?\w+"?|\bselect\b[^"]{0,200}\bfrom\s+"\w+"|\b[a-z]+(_[a-z]+)+_(key|fkey|fk|pkey|pk)\b|\bparams:/i;
+
+/** What goes into every string field: a NUL, a C0 control, a right-to-left override, or a deeply nested value. */
+const POISONS = ["nul", "c0", "rtl", "deep"] as const;
+type Poison = (typeof POISONS)[number];
+const DEEP_MARK = "\u0001deep\u0001";
+const DEEP_LEVELS = 5000;
+
+function poisonString(s: string, how: Poison): string {
+  const at = Math.floor(s.length / 2);
+  const insert = how === "nul" ? "\u0000" : how === "c0" ? "\u001b" : how === "rtl" ? "\u202e" : DEEP_MARK;
+  return how === "deep" ? DEEP_MARK : s.slice(0, at) + insert + s.slice(at);
+}
+
+/** Every string in a value (and every object key for the control characters) carries the poison. */
+function poisonValue(v: unknown, how: Poison): unknown {
+  if (typeof v === "string") return poisonString(v, how);
+  if (Array.isArray(v)) return v.map((x) => poisonValue(x, how));
+  if (v && typeof v === "object") return Object.fromEntries(Object.entries(v).map(([k, x]) => [k, poisonValue(x, how)]));
+  return v;
+}
+
+/** JSON text with each deep mark replaced by a value nested DEEP_LEVELS levels. */
+function bodyText(v: unknown): string {
+  return JSON.stringify(v).split(JSON.stringify(DEEP_MARK).slice(1, -1)).join(`"${"[".repeat(DEEP_LEVELS)}${"]".repeat(DEEP_LEVELS)}"`.slice(1, -1));
+}
+
+const hostileStats = { cases: 0, poisonedStrings: 0, byPoison: {} as Record<string, number> };
+
+describe("API fuzz with hostile text: NUL, C0 controls, right-to-left overrides and deep nesting in every string field", () => {
+  afterAll(() => {
+    // The run must really have reached string fields in bodies, queries and paths.
+    expect(hostileStats.poisonedStrings).toBeGreaterThan(100);
+    for (const p of POISONS) expect(hostileStats.byPoison[p] ?? 0).toBeGreaterThan(10);
+  });
+
+  for (const op of allOperations.filter((o) => !o.rawBody)) {
+    it(`${op.method} ${op.path}: hostile strings never give a 500 or database text`, async () => {
+      const mod = (await import(routeFile(op))) as Record<string, Handler>;
+      const handler = mod[op.method]!;
+      const paramsSchema = inputSchema(op.params);
+      const querySchema = inputSchema(op.query);
+      const bodySchema = inputSchema(op.body);
+      const role = allowedRoles(op)[0]!;
+      const params = paramsSchema ? arbitraryFromSchema(paramsSchema) : fc.constant({});
+      const query = querySchema ? arbitraryFromSchema(querySchema) : fc.constant({});
+      const body = bodySchema ? arbitraryFromSchema(bodySchema) : fc.constant(undefined);
+      await fc.assert(
+        fc.asyncProperty(fc.constantFrom(...POISONS), params, query, body, fc.constantFrom("body", "query", "params"), async (how, p, q, b, where) => {
+          const count = (v: unknown): number => (typeof v === "string" ? 1 : v && typeof v === "object" ? Object.values(v).reduce<number>((n, x) => n + count(x), 0) : 0);
+          const target = where === "body" ? b : where === "query" ? q : p;
+          const poisoned = count(target);
+          hostileStats.poisonedStrings += poisoned;
+          if (poisoned > 0) hostileStats.byPoison[how] = (hostileStats.byPoison[how] ?? 0) + 1;
+          // Deep values cannot travel in a query or path; a long nested-looking string does.
+          const flat = (v: unknown) => (how === "deep" ? JSON.parse(JSON.stringify(poisonValue(v, how)).split(JSON.stringify(DEEP_MARK).slice(1, -1)).join("[".repeat(200) + "]".repeat(200))) as unknown : poisonValue(v, how));
+          const pp = (where === "params" ? flat(p) : p) as Record<string, unknown>;
+          const qq = (where === "query" ? flat(q) : q) as Record<string, unknown>;
+          const url = new URL(`http://127.0.0.1:3000${op.path.replace(/\{(\w+)\}/g, (_, k: string) => encodeURIComponent(String(pp[k] ?? "x")))}`);
+          for (const [k, v] of Object.entries(qq ?? {})) if (v !== undefined) url.searchParams.set(k, typeof v === "string" ? v : JSON.stringify(v));
+          const hasBody = op.method !== "GET" && op.method !== "DELETE";
+          const res = await callRoute(handler, {
+            url: url.pathname + url.search,
+            method: op.method,
+            headers: { authorization: `Bearer ${tokens[role]}`, ...(hasBody ? { "content-type": "application/json" } : {}) },
+            body: hasBody ? (where === "body" ? bodyText(poisonValue(b ?? {}, how)) : JSON.stringify(b ?? {})) : undefined,
+            params: Object.fromEntries(Object.entries(pp ?? {}).map(([k, v]) => [k, String(v)])),
+          });
+          hostileStats.cases++;
+          expect(res.status, `${op.method} ${url.pathname} with ${how} in ${where} answered ${res.status}`).toBeLessThan(500);
+          const text = await res.text();
+          expect(text, `${op.method} ${url.pathname} with ${how} in ${where}`).not.toMatch(DATABASE_TEXT);
+          // A poisoned string that was accepted must not come back poisoned either (nothing half-stored).
+          if (poisoned > 0 && where === "body" && how !== "deep" && res.status < 300) {
+            expect(text).not.toMatch(/\\u0000|\\u001b|\u202e/);
+          }
+        }),
+        { numRuns: Math.max(20, Math.round(RUNS_PER_OPERATION / 3)), endOnFailure: true },
+      );
+    }, 120_000);
+  }
+});

@@ -3,7 +3,6 @@ import { sql } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "./support/db";
 import { createToken, findActiveToken, revokeToken } from "@/db/tokens";
 import { updateUser } from "@/db/users";
-import { recordFailure, secondsLocked, clearFailures } from "@/db/throttle";
 import { auditEvents, users } from "@/db/schema";
 import { eq } from "drizzle-orm";
 
@@ -26,17 +25,6 @@ describe("foundation data rules", () => {
     const refused = { cause: expect.objectContaining({ message: expect.stringMatching(/immutable/) }) };
     await expect(db.execute(sql`update audit_events set action = 'tampered'`)).rejects.toMatchObject(refused);
     await expect(db.execute(sql`delete from audit_events`)).rejects.toMatchObject(refused);
-  });
-
-  it("locks an account after five failed sign-ins and clears on success", async () => {
-    const db = getDb();
-    const key = `acct:throttle-${Date.now()}@tarnwell.example`;
-    for (let i = 0; i < 4; i++) await recordFailure(db, { keys: [key] });
-    expect(await secondsLocked(db, { keys: [key] })).toBe(0);
-    await recordFailure(db, { keys: [key] });
-    expect(await secondsLocked(db, { keys: [key] })).toBeGreaterThan(800);
-    await clearFailures(db, { keys: [key] });
-    expect(await secondsLocked(db, { keys: [key] })).toBe(0);
   });
 
   it("ends sessions of a disabled user by bumping the session epoch", async () => {

@@ -1,6 +1,8 @@
 import { z } from "zod";
 import { isValidVersion } from "@/lib/versioning/semver-helpers";
 import { boardRangeSchema } from "./registry-schemas";
+import { MAX_DEPTH } from "@/lib/validation/hostile";
+import { jsonNestingDepth } from "@/lib/validation/text";
 
 /** Largest profile document accepted anywhere (draft, import, publish), bytes. */
 export const MAX_PROFILE_BYTES = 256 * 1024;
@@ -13,7 +15,13 @@ export const createProfileBody = z.strictObject({
 export type CreateProfileBody = z.infer<typeof createProfileBody>;
 
 export const saveDraftBody = z.strictObject({
-  text: z.string().max(MAX_PROFILE_BYTES, "The draft is larger than 256 KiB."),
+  // A draft may be unfinished JSON, but it meets the same size and depth limits as an
+  // imported file; depth is counted in one pass over the characters, never by parsing.
+  text: z
+    .string()
+    .max(MAX_PROFILE_BYTES, "The draft is larger than 256 KiB.")
+    .refine((t) => new TextEncoder().encode(t).byteLength <= MAX_PROFILE_BYTES, "The draft is larger than 256 KiB.")
+    .refine((t) => jsonNestingDepth(t, MAX_DEPTH) <= MAX_DEPTH, `The draft is nested deeper than ${MAX_DEPTH} levels; a profile needs only a few.`),
 });
 export type SaveDraftBody = z.infer<typeof saveDraftBody>;
 
