@@ -18,7 +18,7 @@ const handle = app.getRequestHandler();
 let stopping = false;
 const server = http.createServer((req, res) => {
   if (stopping) res.setHeader("connection", "close");
-  // The socket's peer address, for the sign-in throttle (lib/server/client-address.ts). Set
+  // The socket's peer address, for the sign-in throttle (lib/platform/http/client-address.ts). Set
   // here, overwriting anything a client sent under this name, so it cannot be forged.
   req.headers["x-loopkeeper-peer"] = req.socket.remoteAddress ?? "";
   void handle(req, res);

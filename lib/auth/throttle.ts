@@ -9,7 +9,7 @@
  *   password while a guessing client gets nothing;
  * - the client address: past `ADDRESS_CAP` failures across accounts (credential stuffing),
  *   that address waits out the window. The address comes from the socket (see
- *   lib/server/client-address.ts), so one client cannot share its bucket with everybody.
+ *   lib/platform/http/client-address.ts), so one client cannot share its bucket with everybody.
  * Changing the password runs through the same throttle.
  */
 

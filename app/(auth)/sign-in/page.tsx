@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import Image from "next/image";
 import { cookies } from "next/headers";
 import { redirect } from "next/navigation";
-import { getSessionActor } from "@/lib/server/actor";
-import { env } from "@/lib/server/env";
+import { getSessionActor } from "@/lib/platform/auth/actor";
+import { env } from "@/lib/platform/env";
 import { safeCallbackPath } from "@/lib/auth/callback-url";
 import { SignInForm, SIGN_IN_FAILED_MESSAGE } from "@/components/auth/sign-in-form";
 

@@ -4,11 +4,11 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { sql } from "drizzle-orm";
 import { closeDb, getDb } from "../support/db";
-import { authOptions } from "@/lib/server/auth";
-import { clientAddress, PEER_HEADER } from "@/lib/server/client-address";
-import { resetEnvForTests } from "@/lib/server/env";
+import { authOptions } from "@/lib/platform/auth/options";
+import { clientAddress, PEER_HEADER } from "@/lib/platform/http/client-address";
+import { resetEnvForTests } from "@/lib/platform/env";
 import { ACCOUNT_CAP, ADDRESS_CAP } from "@/lib/auth/throttle";
-import { hashPassword } from "@/lib/server/password";
+import { hashPassword } from "@/lib/platform/auth/password";
 import { users } from "@/db/schema";
 import { recordSignInFailure } from "@/db/throttle";
 

@@ -1,6 +1,6 @@
 import "server-only";
 import { BlockList, isIP } from "node:net";
-import { env, type TrustedProxy } from "./env";
+import { env, type TrustedProxy } from "@/lib/platform/env";
 
 /**
  * The header scripts/serve.mjs sets from the TCP socket's peer address, overwriting whatever

@@ -4,10 +4,10 @@ import CredentialsProvider from "next-auth/providers/credentials";
 import { z } from "zod";
 import { unsafeTextReason } from "@/lib/validation/text";
 import { safeCallbackPath } from "@/lib/auth/callback-url";
-import { clientAddress } from "./client-address";
-import { env } from "./env";
-import { logger } from "./log";
-import { checkCredentials } from "./sign-in";
+import { clientAddress } from "@/lib/platform/http/client-address";
+import { env } from "@/lib/platform/env";
+import { logger } from "@/lib/platform/log";
+import { checkCredentials } from "@/lib/platform/auth/sign-in";
 
 // Refused before anything is looked up: PostgreSQL text cannot hold a NUL, and no address or
 // password needs control or direction characters.

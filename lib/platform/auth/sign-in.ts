@@ -4,7 +4,7 @@ import { getUserByEmail } from "@/db/users";
 import type { User } from "@/db/schema";
 import { readThrottle, recordSignInFailure, recordSignInSuccess } from "@/db/throttle";
 import { decideAttempt } from "@/lib/auth/throttle";
-import { burnPasswordCheck, verifyPassword } from "./password";
+import { burnPasswordCheck, verifyPassword } from "@/lib/platform/auth/password";
 
 export type CredentialCheck = { ok: true; user: User } | { ok: false; retryAfterSec?: number };
 
