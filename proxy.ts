@@ -18,13 +18,19 @@ export async function proxy(req: NextRequest) {
   if (!db.ok) {
     return new NextResponse(UNAVAILABLE_HTML, { status: 503, headers: { "content-type": "text/html; charset=utf-8", "retry-after": "5", "cache-control": "no-store" } });
   }
-  if (req.nextUrl.pathname === "/sign-in") return NextResponse.next();
+  if (req.nextUrl.pathname === "/sign-in") return withTransport(NextResponse.next());
   const token = await getToken({ req, secret: process.env.NEXTAUTH_SECRET });
-  if (token) return NextResponse.next();
+  if (token) return withTransport(NextResponse.next());
   const url = req.nextUrl.clone();
   url.pathname = "/sign-in";
   url.search = `?callbackUrl=${encodeURIComponent(req.nextUrl.pathname + req.nextUrl.search)}`;
-  return NextResponse.redirect(url);
+  return withTransport(NextResponse.redirect(url));
+}
+
+/** HSTS on every screen once the app is served over https (read at run time, not build time). */
+function withTransport(res: NextResponse): NextResponse {
+  if (process.env.NEXTAUTH_URL?.startsWith("https:")) res.headers.set("strict-transport-security", "max-age=31536000; includeSubDomains");
+  return res;
 }
 
 export const config = {

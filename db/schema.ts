@@ -66,6 +66,24 @@ export const apiTokens = pgTable(
   (t) => [uniqueIndex("api_tokens_hash_key").on(t.tokenHash), index("api_tokens_user_idx").on(t.userId)],
 );
 
+/**
+ * Browser sessions as the server knows them: the session cookie names one row, and a session
+ * whose row is revoked (sign-out, password change) or expired is refused at its next request.
+ */
+export const userSessions = pgTable(
+  "user_sessions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("user_sessions_user_idx").on(t.userId)],
+);
+
 /** Failed sign-ins per account key and per client address; kept in PostgreSQL so any instance sees them. */
 export const signInAttempts = pgTable("sign_in_attempts", {
   key: text("key").primaryKey(),

@@ -11,17 +11,56 @@ function toPublic({ tokenHash: _h, ...rest }: ApiToken): PublicToken {
   return rest;
 }
 
+export type TokenWithOwner = PublicToken & { userEmail: string; userName: string };
+
+/** Every user's tokens, newest first, with whose they are (the admin view). */
+export async function listAllTokens(db: Executor, { liveOnly = false }: { liveOnly?: boolean } = {}): Promise<TokenWithOwner[]> {
+  const rows = await db
+    .select({ token: apiTokens, userEmail: users.email, userName: users.name })
+    .from(apiTokens)
+    .innerJoin(users, eq(users.id, apiTokens.userId))
+    .where(liveOnly ? and(isNull(apiTokens.revokedAt), gt(apiTokens.expiresAt, sql`now()`)) : undefined)
+    .orderBy(desc(apiTokens.createdAt))
+    .limit(500);
+  return rows.map((r) => ({ ...toPublic(r.token), userEmail: r.userEmail, userName: r.userName }));
+}
+
+/** Revokes every live token of a user in the caller's transaction (disable, password change); returns how many. */
+export async function revokeAllTokens(tx: Executor, { userId }: { userId: string }): Promise<number> {
+  const rows = await tx
+    .update(apiTokens)
+    .set({ revokedAt: sql`now()` })
+    .where(and(eq(apiTokens.userId, userId), isNull(apiTokens.revokedAt)))
+    .returning({ id: apiTokens.id });
+  return rows.length;
+}
+
 export async function listTokens(db: Executor, { userId }: { userId: string }): Promise<PublicToken[]> {
   const rows = await db.select().from(apiTokens).where(eq(apiTokens.userId, userId)).orderBy(desc(apiTokens.createdAt));
   return rows.map(toPublic);
+}
+
+/** Refuses a new token when the user already holds `maxLive` live ones (the policy cap). */
+async function assertBelowCap(tx: Executor, userId: string, maxLive: number): Promise<void> {
+  // The user row is locked so two requests at once cannot both pass the cap.
+  await tx.select({ id: users.id }).from(users).where(eq(users.id, userId)).for("update");
+  const [live] = await tx
+    .select({ n: sql<number>`count(*)::int` })
+    .from(apiTokens)
+    .where(and(eq(apiTokens.userId, userId), isNull(apiTokens.revokedAt), gt(apiTokens.expiresAt, sql`now()`)));
+  if (Number(live?.n ?? 0) >= maxLive) {
+    throw new AppError("conflict", `You already hold ${maxLive} live API tokens, the most allowed; revoke one you no longer use, then create the new one.`);
+  }
 }
 
 export async function createToken(
   db: Database,
   actor: AuditActor,
   input: { userId: string; name: string; tokenHash: string; tokenPrefix: string; expiresAt: Date },
+  { maxLive }: { maxLive?: number } = {},
 ): Promise<PublicToken> {
   return db.transaction(async (tx) => {
+    if (maxLive !== undefined) await assertBelowCap(tx, input.userId, maxLive);
     const [row] = await tx.insert(apiTokens).values(input).returning();
     if (!row) throw new AppError("internal", "Token was not created.");
     await recordAudit(tx, actor, { action: "token.create", entityType: "api_token", entityId: row.id, after: toPublic(row) });
@@ -29,11 +68,12 @@ export async function createToken(
   });
 }
 
-export async function revokeToken(db: Database, actor: AuditActor, { id, userId }: { id: string; userId: string }): Promise<PublicToken> {
+/** Revokes a token; `userId` null means an admin acting on anyone's token. */
+export async function revokeToken(db: Database, actor: AuditActor, { id, userId }: { id: string; userId: string | null }): Promise<PublicToken> {
   return db.transaction(async (tx) => {
     const [current] = await tx.select().from(apiTokens).where(eq(apiTokens.id, id)).for("update");
-    if (!current) throw new AppError("not_found", "No such token.");
-    if (current.userId !== userId) throw new AppError("forbidden", "That token belongs to someone else.");
+    // Someone else's token gets the same answer as an unknown id: the id tells nothing.
+    if (!current || (userId !== null && current.userId !== userId)) throw new AppError("not_found", "You have no token with this id.");
     if (current.revokedAt) return toPublic(current);
     const [row] = await tx.update(apiTokens).set({ revokedAt: new Date() }).where(eq(apiTokens.id, id)).returning();
     if (!row) throw new AppError("internal", "Token was not revoked.");

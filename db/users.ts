@@ -3,6 +3,8 @@ import { asc, eq, sql } from "drizzle-orm";
 import { users, type Role, type User } from "./schema";
 import type { Database, Executor } from "./client";
 import { recordAudit, type AuditActor } from "./audit";
+import { revokeAllTokens } from "./tokens";
+import { endOtherSessions } from "./sessions";
 import { AppError } from "@/lib/api/errors";
 
 /** What the app may show of a user: never the password hash. */
@@ -61,23 +63,37 @@ export async function updateUser(
     }
     const patch: Partial<User> = { updatedAt: new Date() };
     if (role) patch.role = role;
+    let tokensRevoked = 0;
     if (disabled === true && !current.disabledAt) {
       patch.disabledAt = new Date();
       // Sessions signed before this moment stop working at their next request.
       patch.sessionEpoch = current.sessionEpoch + 1;
+      // Tokens are revoked, not merely blocked while disabled, so re-enabling does not revive them.
+      tokensRevoked = await revokeAllTokens(tx, { userId: id });
     }
     if (disabled === false) patch.disabledAt = null;
     const [row] = await tx.update(users).set(patch).where(eq(users.id, id)).returning();
     if (!row) throw new AppError("internal", "User was not updated.");
-    await recordAudit(tx, actor, { action: "user.update", entityType: "user", entityId: id, before: toPublic(current), after: toPublic(row) });
+    await recordAudit(tx, actor, { action: "user.update", entityType: "user", entityId: id, before: toPublic(current), after: { ...toPublic(row), ...(tokensRevoked ? { tokensRevoked } : {}) } });
     return toPublic(row);
   });
 }
 
-export async function setPasswordHash(db: Database, actor: AuditActor, { id, passwordHash }: { id: string; passwordHash: string }) {
-  await db.transaction(async (tx) => {
+/**
+ * A new password ends every other session of the user (the one making the change stays) and,
+ * when asked, revokes all their API tokens; one transaction with its audit event.
+ */
+export async function changePasswordEndingSessions(
+  db: Database,
+  actor: AuditActor,
+  { id, passwordHash, keepSessionId, revokeTokens }: { id: string; passwordHash: string; keepSessionId?: string; revokeTokens: boolean },
+): Promise<{ otherSessionsEnded: number; tokensRevoked: number }> {
+  return db.transaction(async (tx) => {
     const res = await tx.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, id)).returning({ id: users.id });
     if (res.length === 0) throw new AppError("not_found", "No such user.");
-    await recordAudit(tx, actor, { action: "user.password_change", entityType: "user", entityId: id });
+    const otherSessionsEnded = await endOtherSessions(tx, { userId: id, keepSessionId });
+    const tokensRevoked = revokeTokens ? await revokeAllTokens(tx, { userId: id }) : 0;
+    await recordAudit(tx, actor, { action: "user.password_change", entityType: "user", entityId: id, after: { otherSessionsEnded, tokensRevoked } });
+    return { otherSessionsEnded, tokensRevoked };
   });
 }

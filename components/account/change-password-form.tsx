@@ -2,42 +2,69 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm } from "react-hook-form";
-import { useState } from "react";
+import { useMemo, useState } from "react";
+import type { z } from "zod";
 import { apiFetch } from "@/lib/api/client";
 import { AppError } from "@/lib/api/errors";
-import { changePasswordBody, type ChangePasswordBody } from "@/lib/api/operations/account";
+import { changePasswordBody } from "@/lib/api/operations/account";
+import { MAX_PASSWORD_BYTES, MIN_PASSWORD_CHARS } from "@/lib/auth/password-policy";
 import { Button } from "@/components/ui/button";
 import { Field, Input, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { PasswordStrength } from "./password-strength";
 
-export function ChangePasswordForm() {
-  const [done, setDone] = useState(false);
-  const { register, handleSubmit, setError, reset, formState } = useForm<ChangePasswordBody>({ resolver: zodResolver(changePasswordBody) });
+type Result = { otherSessionsEnded: number; tokensRevoked: number };
+
+export function ChangePasswordForm({ email, name }: { email: string; name: string }) {
+  const [done, setDone] = useState<Result | null>(null);
+  const { register, handleSubmit, setError, reset, formState, watch } = useForm<z.input<typeof changePasswordBody>, unknown, z.output<typeof changePasswordBody>>({
+    resolver: zodResolver(changePasswordBody),
+    defaultValues: { currentPassword: "", newPassword: "", revokeTokens: false },
+  });
   const { errors, isSubmitting } = formState;
+  const newPassword = watch("newPassword") ?? "";
+  const userInputs = useMemo(() => [email, name, "loopkeeper", "tarnwell"], [email, name]);
 
   const onSubmit = handleSubmit(async (values) => {
-    setDone(false);
+    setDone(null);
     try {
-      await apiFetch("/api/v1/me/password", { method: "POST", json: values });
+      setDone(await apiFetch<Result>("/api/v1/me/password", { method: "POST", json: values }));
       reset();
-      setDone(true);
     } catch (err) {
       const e = err instanceof AppError ? err : new AppError("internal", "Could not change the password.");
-      if (e.issues?.some((i) => i.path === "/currentPassword")) setError("currentPassword", { message: "Not your current password." });
+      const fieldIssue = (path: string) => e.issues?.find((i) => i.path === path);
+      if (fieldIssue("/currentPassword")) setError("currentPassword", { message: e.message });
+      else if (fieldIssue("/newPassword")) setError("newPassword", { message: fieldIssue("/newPassword")!.message });
       else setError("root", { message: e.message });
     }
   });
 
   return (
     <form onSubmit={(e) => void onSubmit(e)} className="max-w-sm space-y-3" noValidate>
-      {done && <Notice tone="ok" role="status">Password changed.</Notice>}
+      {done && (
+        <Notice tone="ok" role="status">
+          Password changed. {done.otherSessionsEnded === 1 ? "1 other session was" : `${done.otherSessionsEnded} other sessions were`} signed out
+          {done.tokensRevoked ? `, and ${done.tokensRevoked} API token${done.tokensRevoked === 1 ? " was" : "s were"} revoked` : ""}.
+        </Notice>
+      )}
       {errors.root?.message && <Notice tone="fault" role="alert">{errors.root.message}</Notice>}
       <Field id="currentPassword" label="Current password" error={errors.currentPassword?.message}>
         <Input type="password" autoComplete="current-password" {...describedBy("currentPassword", errors.currentPassword?.message)} {...register("currentPassword")} />
       </Field>
-      <Field id="newPassword" label="New password" hint="At least 12 characters." error={errors.newPassword?.message}>
+      <Field
+        id="newPassword"
+        label="New password"
+        hint={`At least ${MIN_PASSWORD_CHARS} characters and at most ${MAX_PASSWORD_BYTES} bytes; a few unrelated words work well. Common and breached passwords are refused.`}
+        error={errors.newPassword?.message}
+      >
         <Input type="password" autoComplete="new-password" {...describedBy("newPassword", errors.newPassword?.message)} {...register("newPassword")} />
       </Field>
+      <PasswordStrength password={newPassword} userInputs={userInputs} />
+      <label className="flex items-start gap-2 text-sm">
+        <input type="checkbox" className="mt-1" {...register("revokeTokens")} />
+        <span>Also revoke all my API tokens (do this if the old password may have leaked; scripts using them will need new ones).</span>
+      </label>
+      <p className="text-xs text-ink-600">Changing the password signs out your other sessions on every device; this one stays signed in.</p>
       <Button type="submit" disabled={isSubmitting}>
         Change password
       </Button>

@@ -7,7 +7,7 @@ import { useState } from "react";
 import type { z } from "zod";
 import { apiFetch } from "@/lib/api/client";
 import { AppError } from "@/lib/api/errors";
-import { createTokenBody, type TokenView } from "@/lib/api/operations/account";
+import { createTokenBody, MAX_TOKEN_DAYS, MAX_LIVE_TOKENS, type TokenView } from "@/lib/api/operations/account";
 import { Button } from "@/components/ui/button";
 import { Field, Input, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -59,6 +59,9 @@ export function TokenManager() {
           </code>
         </Notice>
       )}
+      <p className="text-sm text-ink-600">
+        A token lives at most {MAX_TOKEN_DAYS} days, and you can hold at most {MAX_LIVE_TOKENS} live tokens; revoke one you no longer use to make room.
+      </p>
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="flex flex-wrap items-end gap-3" noValidate>
         <div className="min-w-48 flex-1">
           <Field id="token-name" label="Name" error={errors.name?.message}>
@@ -67,7 +70,7 @@ export function TokenManager() {
         </div>
         <div className="w-28">
           <Field id="token-days" label="Valid for (days)" error={errors.expiresInDays?.message}>
-            <Input type="number" min={1} max={366} {...describedBy("token-days", errors.expiresInDays?.message)} {...form.register("expiresInDays")} />
+            <Input type="number" min={1} max={MAX_TOKEN_DAYS} {...describedBy("token-days", errors.expiresInDays?.message)} {...form.register("expiresInDays", { valueAsNumber: true })} />
           </Field>
         </div>
         <Button type="submit" disabled={create.isPending}>

@@ -169,7 +169,7 @@ describe("API fuzz with hostile text: NUL, C0 controls, right-to-left overrides 
           const flat = (v: unknown) => (how === "deep" ? JSON.parse(JSON.stringify(poisonValue(v, how)).split(JSON.stringify(DEEP_MARK).slice(1, -1)).join("[".repeat(200) + "]".repeat(200))) as unknown : poisonValue(v, how));
           const pp = (where === "params" ? flat(p) : p) as Record<string, unknown>;
           const qq = (where === "query" ? flat(q) : q) as Record<string, unknown>;
-          const url = new URL(`http://127.0.0.1:3000${op.path.replace(/\{(\w+)\}/g, (_, k: string) => encodeURIComponent(String(pp[k] ?? "x")))}`);
+          const url = new URL(`http://127.0.0.1:3000${op.path.replace(/\{(\w+)\}/g, (_, k: string) => encodeURIComponent(typeof pp[k] === "string" ? pp[k] : JSON.stringify(pp[k] ?? "x")))}`);
           for (const [k, v] of Object.entries(qq ?? {})) if (v !== undefined) url.searchParams.set(k, typeof v === "string" ? v : JSON.stringify(v));
           const hasBody = op.method !== "GET" && op.method !== "DELETE";
           const res = await callRoute(handler, {

@@ -14,7 +14,7 @@ export default async function AccountPage() {
       <PageHeader title="Your account" subtitle={`${actor.email} · ${ROLE_LABELS[actor.role]}`} />
       <div className="grid gap-5 xl:grid-cols-2">
         <Panel title="Change password">
-          <ChangePasswordForm />
+          <ChangePasswordForm email={actor.email} name={actor.name} />
         </Panel>
         <Panel title="API tokens">
           <TokenManager />

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { defineOperation } from "../operation";
 import { ROLES } from "@/lib/auth/roles";
+import { newPasswordSchema } from "@/lib/auth/password-policy";
 
 export const idParams = z.strictObject({ id: z.uuid("Not a valid id.") });
 
@@ -24,22 +25,21 @@ export const getMe = defineOperation({
 
 export const changePasswordBody = z.strictObject({
   currentPassword: z.string().min(1, "Enter your current password.").max(1024),
-  newPassword: z
-    .string()
-    .min(12, "Use at least 12 characters.")
-    .max(256, "Use at most 256 characters."),
+  newPassword: newPasswordSchema,
+  /** Also revoke every API token of the account (e.g. when the password may have leaked). */
+  revokeTokens: z.boolean().default(false),
 });
-export type ChangePasswordBody = z.infer<typeof changePasswordBody>;
+export type ChangePasswordBody = z.input<typeof changePasswordBody>;
 
 export const changePassword = defineOperation({
   id: "changePassword",
   method: "POST",
   path: "/api/v1/me/password",
-  summary: "Change your own password",
+  summary: "Change your own password (signed-in session only; ends your other sessions)",
   tag: "Account",
   access: "signed_in",
   body: changePasswordBody,
-  successStatus: 204,
+  response: z.object({ otherSessionsEnded: z.number(), tokensRevoked: z.number() }),
 });
 
 export const tokenSchema = z.object({
@@ -63,9 +63,19 @@ export const listTokens = defineOperation({
   response: z.object({ items: z.array(tokenSchema) }),
 });
 
+/** Token policy: a token lives at most this many days, then a new one is made. */
+export const MAX_TOKEN_DAYS = 90;
+/** Token policy: at most this many live (not revoked, not expired) tokens per user. */
+export const MAX_LIVE_TOKENS = 10;
+
 export const createTokenBody = z.strictObject({
   name: z.string().trim().min(1, "Name the token, e.g. the station or pipeline that uses it.").max(80),
-  expiresInDays: z.coerce.number().int().min(1, "At least 1 day.").max(366, "At most 366 days."),
+  // A JSON number only: "30", true or [30] are refused rather than coerced.
+  expiresInDays: z
+    .number("Give the lifetime as a number of days.")
+    .int("Whole days only.")
+    .min(1, "At least 1 day.")
+    .max(MAX_TOKEN_DAYS, `At most ${MAX_TOKEN_DAYS} days; make a new token when this one runs out.`),
 });
 export type CreateTokenBody = z.infer<typeof createTokenBody>;
 
@@ -85,7 +95,7 @@ export const revokeToken = defineOperation({
   id: "revokeToken",
   method: "DELETE",
   path: "/api/v1/tokens/{id}",
-  summary: "Revoke one of your API tokens",
+  summary: "Revoke one of your API tokens (an unknown id and someone else's token get the same 404)",
   tag: "Account",
   access: "signed_in",
   params: idParams,

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { newPasswordSchema } from "@/lib/auth/password-policy";
 import { defineOperation } from "../operation";
 import { ROLES } from "@/lib/auth/roles";
 import { idParams } from "./account";
@@ -27,7 +28,7 @@ export const createUserBody = z.strictObject({
   email: z.email("Enter a valid e-mail address.").max(320),
   name: z.string().trim().min(1, "Enter a name.").max(120),
   role: z.enum(ROLES, "Pick one of the five roles."),
-  password: z.string().min(12, "Use at least 12 characters.").max(256),
+  password: newPasswordSchema,
 });
 export type CreateUserBody = z.infer<typeof createUserBody>;
 

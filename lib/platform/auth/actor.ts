@@ -3,7 +3,7 @@ import { createHash } from "node:crypto";
 import { getServerSession } from "next-auth";
 import { connection } from "next/server";
 import { getDb } from "@/db/client";
-import { getUserById } from "@/db/users";
+import { getSessionUser } from "@/db/sessions";
 import { findActiveTokenCounting, touchToken } from "@/db/tokens";
 import type { AuditActor } from "@/db/audit";
 import type { Role } from "@/lib/auth/roles";
@@ -17,6 +17,8 @@ export interface Actor {
   role: Role;
   via: "session" | "token";
   tokenId?: string;
+  /** For browser sessions: the server-side session record (ended by sign-out or a password change). */
+  sessionId?: string;
   /** For tokens: this request already counted against the rate limit (same round trip as the lookup). */
   rate?: { count: number; retryAfterSec: number };
 }
@@ -30,12 +32,13 @@ export async function getSessionActor(): Promise<Actor | null> {
   // Per-request by nature: never prerendered at build time.
   await connection();
   const session = await getServerSession(authOptions());
-  const user = session?.user as { id?: string; epoch?: number } | undefined;
-  if (!user?.id) return null;
-  const row = await getUserById(getDb(), { id: user.id });
+  const user = session?.user as { id?: string; epoch?: number; sid?: string } | undefined;
+  if (!user?.id || !user.sid) return null;
+  // The session must still be live on the server: signed-out and superseded sessions are refused.
+  const row = await getSessionUser(getDb(), { sessionId: user.sid, userId: user.id });
   // A session signed before the user was disabled stays dead even after re-enabling.
   if (!row || row.disabledAt || row.sessionEpoch !== (user.epoch ?? 0)) return null;
-  return { userId: row.id, email: row.email, name: row.name, role: row.role, via: "session" };
+  return { userId: row.id, email: row.email, name: row.name, role: row.role, via: "session", sessionId: user.sid };
 }
 
 /** A bearer token's user, or null when the token is unknown, revoked, expired or its user disabled. */

@@ -8,11 +8,16 @@ import { clientAddress } from "@/lib/platform/http/client-address";
 import { env } from "@/lib/platform/env";
 import { logger } from "@/lib/platform/log";
 import { checkCredentials } from "@/lib/platform/auth/sign-in";
+import { getDb } from "@/db/client";
+import { endSession, startSession } from "@/db/sessions";
 
 // Refused before anything is looked up: PostgreSQL text cannot hold a NUL, and no address or
 // password needs control or direction characters.
 const plain = (max: number) => z.string().max(max).refine((s) => !unsafeTextReason(s, { singleLine: true }));
 const credentialsSchema = z.object({ email: plain(320).pipe(z.string().trim().min(1)), password: plain(1024).pipe(z.string().min(1)) });
+
+/** A browser session lasts a working day at most. */
+export const SESSION_MAX_AGE_SEC = 8 * 60 * 60;
 
 /** The message for every failed sign-in: it never says whether the account exists. */
 export const SIGN_IN_FAILED = "CredentialsSignin";
@@ -20,7 +25,9 @@ export const SIGN_IN_FAILED = "CredentialsSignin";
 export function authOptions(): NextAuthOptions {
   return {
     secret: env().NEXTAUTH_SECRET,
-    session: { strategy: "jwt", maxAge: 8 * 60 * 60 },
+    // Secure (and __Host-/__Secure- prefixed) cookies whenever the app is served over https.
+    useSecureCookies: env().NEXTAUTH_URL.startsWith("https:"),
+    session: { strategy: "jwt", maxAge: SESSION_MAX_AGE_SEC },
     pages: { signIn: "/sign-in", error: "/sign-in" },
     providers: [
       CredentialsProvider({
@@ -48,17 +55,26 @@ export function authOptions(): NextAuthOptions {
       redirect({ url, baseUrl }) {
         return `${baseUrl}${safeCallbackPath(url, baseUrl)}`;
       },
-      jwt({ token, user }) {
+      async jwt({ token, user }) {
         if (user) {
           const u = user as unknown as { id: string; role: string; epoch: number };
           token.uid = u.id;
           token.role = u.role;
           token.epoch = u.epoch;
+          // Each sign-in is recorded on the server, so it can be ended there (sign-out, password change).
+          token.sid = await startSession(getDb(), { userId: u.id, maxAgeSec: SESSION_MAX_AGE_SEC });
         }
         return token;
       },
       session({ session, token }) {
-        return { ...session, user: { ...session.user, id: token.uid, role: token.role, epoch: token.epoch } };
+        return { ...session, user: { ...session.user, id: token.uid, role: token.role, epoch: token.epoch, sid: token.sid } };
+      },
+    },
+    events: {
+      // Signing out ends the session on the server too: a copied cookie is refused afterwards.
+      async signOut({ token }) {
+        const sid = (token as { sid?: unknown } | null)?.sid;
+        if (typeof sid === "string") await endSession(getDb(), { sessionId: sid });
       },
     },
   };

@@ -129,7 +129,7 @@ export function apiRoute<Q extends z.ZodType, B extends z.ZodType, P extends z.Z
   op: Operation<Q, B, P>,
   handler: (ctx: HandlerContext<Infer<Q>, Infer<B>, Infer<P>>) => Promise<unknown>,
 ) {
-  return async (req: NextRequest, routeCtx: { params: Promise<Record<string, string | string[]>> }): Promise<Response> => {
+  const run = async (req: NextRequest, routeCtx: { params: Promise<Record<string, string | string[]>> }): Promise<Response> => {
     const requestId = req.headers.get("x-request-id")?.slice(0, 64) || randomUUID();
     const started = performance.now();
     let status = 500;
@@ -174,4 +174,17 @@ export function apiRoute<Q extends z.ZodType, B extends z.ZodType, P extends z.Z
       logger.info({ requestId, method: req.method, path: req.nextUrl.pathname, status, ms: Math.round(performance.now() - started) }, "request");
     }
   };
+  return async (req: NextRequest, routeCtx: { params: Promise<Record<string, string | string[]>> }): Promise<Response> => {
+    const res = await run(req, routeCtx);
+    // Anything behind sign-in (users, tokens, audit, mailbox, uploads, CSV exports) is never
+    // kept by a browser or shared cache; public documents may set their own caching.
+    if (op.access !== "public") res.headers.set("cache-control", "no-store");
+    for (const [k, v] of Object.entries(transportHeaders())) res.headers.set(k, v);
+    return res;
+  };
+}
+
+/** HSTS once the app is served over https (NEXTAUTH_URL), so browsers never fall back to http. */
+export function transportHeaders(): Record<string, string> {
+  return env().NEXTAUTH_URL.startsWith("https:") ? { "strict-transport-security": "max-age=31536000; includeSubDomains" } : {};
 }

@@ -1,6 +1,6 @@
 import { randomBytes } from "node:crypto";
 import { apiRoute } from "@/lib/platform/http/api-route";
-import { createToken, listTokens } from "@/lib/api/operations/account";
+import { createToken, listTokens, MAX_LIVE_TOKENS } from "@/lib/api/operations/account";
 import { getDb } from "@/db/client";
 import * as tokens from "@/db/tokens";
 import { auditActor, hashToken } from "@/lib/platform/auth/actor";
@@ -15,6 +15,6 @@ export const POST = apiRoute(createToken, async ({ actor, body, requestId }) => 
     tokenHash: hashToken(secret),
     tokenPrefix: secret.slice(0, 10),
     expiresAt: new Date(Date.now() + body.expiresInDays * 86_400_000),
-  });
+  }, { maxLive: MAX_LIVE_TOKENS });
   return { token, secret };
 });

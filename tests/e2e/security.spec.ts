@@ -1,0 +1,58 @@
+// Sign-in in a real browser, against OWASP ASVS 4.0.3:
+// V5.1.5 (redirects only to allowed destinations), V8.3.1 (sensitive data only in the body,
+// never in the query string) and V7.4.1 (no database text in any page, redirect or body).
+import { expect, test } from "@playwright/test";
+import { ACCOUNTS, DEMO_PASSWORD } from "./support/accounts";
+
+const DATABASE_TEXT = /select|insert|where|constraint|postgres|invalid byte sequence|0x00|params|query/i;
+
+test.describe("ASVS 5.1.5 — sign-in never forwards to another site", () => {
+  for (const callbackUrl of ["/\\evil.example/x", "/%09/evil.example", "//evil.example/", "https://evil.example/"]) {
+    test(`callbackUrl=${callbackUrl} stays on this origin`, async ({ page, baseURL }) => {
+      // The raw value goes into the query as an attacker would write the link.
+      await page.goto(`/sign-in?callbackUrl=${callbackUrl.startsWith("/%") ? callbackUrl : encodeURIComponent(callbackUrl)}`);
+      await page.getByLabel("E-mail").fill(ACCOUNTS.viewer);
+      await page.getByLabel("Password").fill(DEMO_PASSWORD);
+      await page.getByRole("button", { name: "Sign in" }).click();
+      await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
+      expect(new URL(page.url()).origin).toBe(new URL(baseURL!).origin);
+    });
+  }
+});
+
+test.describe("ASVS 8.3.1 — the sign-in form never puts the password in a URL", () => {
+  test.use({ javaScriptEnabled: false });
+
+  test("pressed before scripts run, the form posts (never a GET with the password) and signs in", async ({ page }) => {
+    const password = DEMO_PASSWORD;
+    const urls: { method: string; url: string }[] = [];
+    page.on("request", (r) => urls.push({ method: r.method(), url: r.url() }));
+    await page.goto("/sign-in?callbackUrl=%2Faccount");
+    for (let attempt = 0; attempt < 2 && new URL(page.url()).pathname.startsWith("/sign-in"); attempt++) {
+      // The first post may only pick up the form's anti-forgery cookie; the second then signs in.
+      await page.getByLabel("E-mail").fill(ACCOUNTS.viewer);
+      await page.getByLabel("Password").fill(password);
+      await page.getByRole("button", { name: "Sign in" }).click();
+      await page.waitForLoadState("load");
+    }
+    expect(new URL(page.url()).pathname).toBe("/account");
+    const credentialPosts = urls.filter((u) => u.url.includes("/api/auth/callback/credentials"));
+    expect(credentialPosts.length).toBeGreaterThan(0);
+    expect(credentialPosts.every((u) => u.method === "POST")).toBe(true);
+    for (const u of urls) expect(decodeURIComponent(u.url)).not.toContain(password);
+  });
+});
+
+test.describe("ASVS 7.4.1 — a NUL in the sign-in e-mail gives the generic failure, no database text", () => {
+  test("the redirect after a hostile sign-in names no query, parameter or PostgreSQL detail", async ({ request }) => {
+    const csrf = (await (await request.get("/api/auth/csrf")).json()) as { csrfToken: string };
+    const res = await request.post("/api/auth/callback/credentials", {
+      form: { csrfToken: csrf.csrfToken, email: "admin\u0000@tarnwell.example", password: "x", json: "true" },
+      maxRedirects: 0,
+    });
+    const body = await res.text();
+    expect(res.status()).toBeLessThan(500);
+    expect(decodeURIComponent(body)).not.toMatch(DATABASE_TEXT);
+    expect(body).toMatch(/error=CredentialsSignin/);
+  });
+});
