@@ -54,7 +54,8 @@ function ensureInstalled() {
 function runPg(bin, tool, args, opts = {}) {
   const exe = path.join(bin, tool);
   const [cmd, argv] = isRoot() ? ["runuser", ["-u", "postgres", "--", exe, ...args]] : [exe, args];
-  return spawnSync(cmd, argv, { encoding: "utf8", ...opts });
+  // From "/", so postgres does not warn about a working directory it cannot enter.
+  return spawnSync(cmd, argv, { encoding: "utf8", ...(isRoot() ? { cwd: "/" } : {}), ...opts });
 }
 
 const inTree = { pgData: path.join(dataRoot, "postgres"), runDir: path.join(dataRoot, "pg-run"), outside: false };
