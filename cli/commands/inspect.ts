@@ -1,8 +1,6 @@
 import { decodeBank, identifySlots, readIntelHex, type HexStartRecord, type KnownProfileVersion, type SlotIdentity } from "../../lib/engine";
-import { parseArgs, UsageError } from "../args";
+import { defineCommand, UsageError } from "../args";
 import { readBytes, readText, type CommandResult } from "../io";
-
-export const INSPECT_USAGE = "inspect <dump.bin|dump.hex> [--known known.json] [--json]";
 
 function loadKnown(file: string): KnownProfileVersion[] {
   let parsed: unknown;
@@ -23,11 +21,18 @@ const describeStartRecord = (r: HexStartRecord): string =>
 const looksLikeHex = (file: string, bytes: Uint8Array): boolean => /\.(hex|ihx)$/i.test(file) || bytes[0] === 0x3a;
 
 /** `inspect`: decode a bank image or memory dump (.bin or Intel HEX), check its CRC, list and identify slots. */
-export function inspectCommand(argv: readonly string[]): CommandResult {
-  const args = parseArgs(argv, ["known"], ["json"]);
-  if (args.positionals.length !== 1) throw new UsageError(`Give one dump file: ${INSPECT_USAGE}`);
-  const file = args.positionals[0]!;
-  const known = args.options.get("known");
+export const inspectCommand = defineCommand({
+  name: "inspect",
+  summary: "decode a bank image or memory dump (.bin or Intel HEX), check its CRC and list its slots, identified against known versions.",
+  positionals: { name: "<dump.bin|dump.hex>", description: "bank image or memory dump; Intel HEX when named .hex/.ihx or starting with ':'", min: 1, max: 1 },
+  options: {
+    known: { kind: "text", value: "known.json", description: 'known profile versions to identify slots by: [{ "profileVersionId", "contentHashPrefix", "version" }, …]' },
+  },
+  examples: ["inspect bank.hex --known known.json"],
+  run: (args) => inspect(args.positionals[0]!, args.text("known")),
+});
+
+function inspect(file: string, known: string | undefined): CommandResult {
   const knownList = known ? loadKnown(known) : undefined;
   let bytes = readBytes(file);
   let startAddress: number | undefined;

@@ -21,7 +21,7 @@ export function unsafeTextReason(text: string, { singleLine = false }: { singleL
   const control = (singleLine ? LINE_CONTROL_RE : CONTROL_RE).exec(text);
   if (control) {
     const code = control[0].charCodeAt(0);
-    const name = code === 0 ? "a NUL byte (U+0000)" : `the control character U+${code.toString(16).toUpperCase().padStart(4, "0")}`;
+    const name = code === 0 ? "a NUL character (U+0000)" : `the control character U+${code.toString(16).toUpperCase().padStart(4, "0")}`;
     return `The text contains ${name} at position ${control.index + 1}; remove it${singleLine ? " (this value is one line without tabs)" : ""}.`;
   }
   const bidi = BIDI_RE.exec(text);

@@ -21,6 +21,8 @@ export const saveDraftBody = z.strictObject({
     .string()
     .max(MAX_PROFILE_BYTES, "The draft is larger than 256 KiB.")
     .refine((t) => new TextEncoder().encode(t).byteLength <= MAX_PROFILE_BYTES, "The draft is larger than 256 KiB.")
+    // The draft is stored as typed, and PostgreSQL text cannot hold U+0000.
+    .refine((t) => !t.includes("\u0000"), "The draft contains a NUL character (U+0000); remove it (in JSON write it as \\u0000 if you mean it).")
     .refine((t) => jsonNestingDepth(t, MAX_DEPTH) <= MAX_DEPTH, `The draft is nested deeper than ${MAX_DEPTH} levels; a profile needs only a few.`),
 });
 export type SaveDraftBody = z.infer<typeof saveDraftBody>;

@@ -64,7 +64,7 @@ describe("ASVS 5.1.3 — NUL and other control characters are refused where they
     const res = await call();
     expect([400, 422]).toContain(res.status);
     const body = (await res.json()) as { error: { message: string; issues?: { message: string }[] } };
-    expect(JSON.stringify(body)).toMatch(/NUL byte|control character/);
+    expect(JSON.stringify(body)).toMatch(/NUL character|control character/);
     expect(JSON.stringify(body)).not.toMatch(DATABASE_TEXT);
   });
 
@@ -73,7 +73,7 @@ describe("ASVS 5.1.3 — NUL and other control characters are refused where they
     const { profile } = (await created.json()) as { profile: { id: string } };
     const res = await callRoute(draftRoute.PUT, { url: `/api/v1/profiles/${profile.id}/draft`, method: "PUT", token: engineer, params: { id: profile.id }, ...json({ text: '{"name":"a\u0000b"}' }) });
     expect(res.status).toBe(422);
-    expect(await text(res)).toMatch(/NUL byte \(U\+0000\) at position 11/);
+    expect(await text(res)).toMatch(/NUL character \(U\+0000\) at position 11/);
   });
 
   it("a lot import with a NUL is refused alike by the dry run and the commit", async () => {
@@ -88,7 +88,7 @@ describe("ASVS 5.1.3 — NUL and other control characters are refused where they
     const commitBody = (await commit.json()) as { committed: number; issues: { row: number; column: string; message: string }[] };
     expect(commitBody.committed).toBe(0);
     expect(dryBody.issues).toEqual(commitBody.issues);
-    expect(commitBody.issues).toContainEqual(expect.objectContaining({ row: 2, column: "line", message: expect.stringMatching(/NUL byte/) }));
+    expect(commitBody.issues).toContainEqual(expect.objectContaining({ row: 2, column: "line", message: expect.stringMatching(/NUL character/) }));
   });
 });
 
