@@ -2,7 +2,7 @@
 // V5.1.5 (redirects only to allowed destinations), V8.3.1 (sensitive data only in the body,
 // never in the query string) and V7.4.1 (no database text in any page, redirect or body).
 import { expect, test } from "@playwright/test";
-import { ACCOUNTS, DEMO_PASSWORD } from "./support/accounts";
+import { ACCOUNTS, DEMO_PASSWORD, signInRequest } from "./support/accounts";
 
 const DATABASE_TEXT = /select|insert|where|constraint|postgres|invalid byte sequence|0x00|params|query/i;
 
@@ -54,5 +54,42 @@ test.describe("ASVS 7.4.1 — a NUL in the sign-in e-mail gives the generic fail
     expect(res.status()).toBeLessThan(500);
     expect(decodeURIComponent(body)).not.toMatch(DATABASE_TEXT);
     expect(body).toMatch(/error=CredentialsSignin/);
+  });
+});
+
+test.describe("ASVS 3.3.1 / 3.3.3 — sessions end on the server", () => {
+  test("after sign-out, a copy of the session cookie is refused", async ({ page, browser }) => {
+    await page.goto("/sign-in");
+    await page.getByLabel("E-mail").fill(ACCOUNTS.viewer);
+    await page.getByLabel("Password").fill(DEMO_PASSWORD);
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
+    const copied = await page.context().cookies();
+    await page.goto("/account");
+    await page.getByRole("button", { name: "Sign out" }).click();
+    await page.waitForURL(/\/sign-in/);
+    // Someone who kept the cookie (another tab, a stolen copy) is refused by the server.
+    const other = await browser.newContext();
+    await other.addCookies(copied);
+    expect((await other.request.get("/api/v1/me")).status()).toBe(401);
+    await other.close();
+  });
+
+  test("a password change signs out the user's other sessions and keeps this one", async ({ playwright, baseURL }) => {
+    const admin = await playwright.request.newContext({ baseURL });
+    await signInRequest(admin, ACCOUNTS.admin);
+    const email = `sessions-${Date.now()}@tarnwell.example`;
+    const first = "quartz-ledger-kettle-58";
+    expect((await admin.post("/api/v1/users", { data: { email, name: "Session Holder", role: "viewer", password: first } })).status()).toBe(201);
+    const here = await playwright.request.newContext({ baseURL });
+    const elsewhere = await playwright.request.newContext({ baseURL });
+    await signInRequest(here, email, first);
+    await signInRequest(elsewhere, email, first);
+    const res = await here.post("/api/v1/me/password", { data: { currentPassword: first, newPassword: "moraine-teapot-lantern-93" } });
+    expect(res.status()).toBe(200);
+    expect(((await res.json()) as { otherSessionsEnded: number }).otherSessionsEnded).toBeGreaterThanOrEqual(1);
+    expect((await elsewhere.get("/api/v1/me")).status()).toBe(401);
+    expect((await here.get("/api/v1/me")).status()).toBe(200);
+    for (const c of [admin, here, elsewhere]) await c.dispose();
   });
 });

@@ -3,7 +3,7 @@ import { NextRequest } from "next/server";
 import { getDb } from "@/db/client";
 import { createToken } from "@/db/tokens";
 import { hashToken } from "@/lib/platform/auth/actor";
-import { demoActor } from "./db";
+import { demoActor, tokensToRevoke } from "./db";
 
 type RouteHandler = (req: NextRequest, ctx: { params: Promise<Record<string, string | string[]>> }) => Promise<Response>;
 
@@ -11,7 +11,8 @@ type RouteHandler = (req: NextRequest, ctx: { params: Promise<Record<string, str
 export async function tokenFor(email: string): Promise<string> {
   const actor = await demoActor(email);
   const secret = `lk_${randomBytes(32).toString("base64url")}`;
-  await createToken(getDb(), actor, { userId: actor.userId, name: "integration", tokenHash: hashToken(secret), tokenPrefix: secret.slice(0, 10), expiresAt: new Date(Date.now() + 3_600_000) });
+  const token = await createToken(getDb(), actor, { userId: actor.userId, name: "integration", tokenHash: hashToken(secret), tokenPrefix: secret.slice(0, 10), expiresAt: new Date(Date.now() + 3_600_000) });
+  tokensToRevoke.push(token.id);
   return secret;
 }
 
