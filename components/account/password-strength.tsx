@@ -10,23 +10,22 @@ const LABELS = ["very weak", "weak", "fair", "strong", "very strong"] as const;
  * lists never weigh on other screens. The server's rules decide; this only guides.
  */
 export function PasswordStrength({ password, userInputs }: { password: string; userInputs: string[] }) {
-  const [result, setResult] = useState<{ score: number; warning: string } | null>(null);
+  const [estimate, setEstimate] = useState<{ password: string; score: number; warning: string } | null>(null);
   useEffect(() => {
     let live = true;
-    if (!password) {
-      setResult(null);
-      return;
-    }
+    if (!password) return;
     void (async () => {
       const [{ zxcvbn, zxcvbnOptions }, common] = await Promise.all([import("@zxcvbn-ts/core"), import("@zxcvbn-ts/language-common")]);
       zxcvbnOptions.setOptions({ dictionary: common.dictionary, graphs: common.adjacencyGraphs });
       const r = zxcvbn(password, userInputs);
-      if (live) setResult({ score: r.score, warning: r.feedback.warning ?? "" });
+      if (live) setEstimate({ password, score: r.score, warning: r.feedback.warning ?? "" });
     })();
     return () => {
       live = false;
     };
   }, [password, userInputs]);
+  // An estimate for an earlier value is not shown while the new one is computed.
+  const result = estimate && estimate.password === password ? estimate : null;
   if (!result) return null;
   const pct = ((result.score + 1) / 5) * 100;
   return (
