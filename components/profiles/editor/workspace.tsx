@@ -7,7 +7,7 @@ import { memo, useCallback, useDeferredValue, useEffect, useMemo, useRef, useSta
 import { apiFetch } from "@/lib/api/client";
 import type { AppError } from "@/lib/api/errors";
 import type { ProfileDetailView, VersionWithDocumentView } from "@/lib/api/operations/profile-schemas";
-import { suggestNextVersion, type CoolingProfile } from "@/lib/engine";
+import { operatingPoint, suggestNextVersion, type CoolingProfile } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { evaluateEditorText } from "@/lib/registry/editor-evaluation";
 import { Select } from "@/components/ui/field";
@@ -17,15 +17,18 @@ import { Panel } from "@/components/ui/panel";
 import type { EditorHandle } from "./json-editor";
 import { ImportButton } from "./import-button";
 import { MemoryGauge } from "./memory-gauge";
-import { OperatingPanel } from "./operating-panel";
+import { OperatingPanel, parseOperatingInputs, type OperatingInputs } from "./operating-panel";
+import PointsTable from "./points-table";
+import { useCurveEditing } from "./use-curve-editing";
+import LiveCurvePlot, { type OperatingMark } from "../charts/live-curve-plot";
 import { ProblemsList } from "./problems-list";
 import { PublishPanel } from "./publish-panel";
 import { useAutosave } from "./use-autosave";
 import { VersionHistory } from "./version-history";
 
-// Monaco and recharts are heavy: they load on this route only, in the browser only.
-const JsonEditor = dynamic(() => import("./json-editor"), { ssr: false, loading: () => <div className="h-[520px] animate-pulse rounded bg-ink-100" aria-label="Loading the editor" /> });
-const CurveChart = dynamic(() => import("../charts/curve-chart"), { ssr: false, loading: () => <div className="h-80 animate-pulse rounded bg-ink-100" /> });
+// Monaco is heavy: it loads on this route only, in the browser only. The live plot is our own
+// small SVG (no chart library on the keystroke path), so it ships with the page.
+const JsonEditor = dynamic(() => import("./json-editor"), { ssr: false, loading: () => <div className="h-full animate-pulse rounded bg-ink-100" aria-label="Loading the editor" /> });
 
 // Panels outside the keystroke path re-render only when their (deferred) inputs change.
 const MemoOperatingPanel = memo(OperatingPanel);
@@ -72,6 +75,21 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
   const deferredEvaluation = useDeferredValue(evaluation);
   const deferredHw = useDeferredValue(hw);
   const save = useAutosave(profile.id, text, canWrite);
+  const editing = useCurveEditing(editor, evaluation?.profile, hw, canWrite);
+  const [operatingInputs, setOperatingInputs] = useState<OperatingInputs>({ heatLoadW: "200", ambientC: "25" });
+  // The operating point follows every drag step (one bisection, well under a millisecond).
+  const operating = useMemo(() => {
+    const profileNow = evaluation?.profile;
+    const { load, ambient, loadError, ambientError } = parseOperatingInputs(operatingInputs);
+    if (!profileNow || !hw || loadError || ambientError) return null;
+    try {
+      const p = operatingPoint(profileNow, hw, { heatLoadW: load, ambientC: ambient });
+      return { liquidTempC: p.liquidTempC, fanRpm: p.fans.rpm, soundDbA: p.noise.totalDbA1m, heatLoadW: load, ambientC: ambient };
+    } catch {
+      return null;
+    }
+  }, [evaluation?.profile, hw, operatingInputs]);
+  const operatingMark = useMemo<OperatingMark | null>(() => (operating ? { liquidTempC: operating.liquidTempC, fanRpm: operating.fanRpm } : null), [operating]);
 
   const latest = versions[0];
   const latestDoc = useQuery({
@@ -91,6 +109,11 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
     if (performance.getEntriesByName("lk-edit", "mark").length > 0) {
       performance.measure("lk-edit-to-update", "lk-edit");
       performance.clearMarks("lk-edit");
+    }
+    // A drag or key step on the plot → text, markers and plots committed.
+    if (performance.getEntriesByName("lk-drag", "mark").length > 0) {
+      performance.measure("lk-drag-to-update", "lk-drag");
+      performance.clearMarks("lk-drag");
     }
   }, [evaluation]);
 
@@ -152,7 +175,8 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
 
       <div className="grid gap-5 xl:grid-cols-2">
         <div className="space-y-3">
-          <div className="overflow-hidden rounded-md bg-white shadow-panel">
+          {/* The editor takes the window's height (less the header rows above it), never under 28rem. */}
+          <div className="h-[calc(100vh-13rem)] min-h-[28rem] overflow-hidden rounded-md bg-white shadow-panel">
             <JsonEditor
               value={text}
               readOnly={!canWrite}
@@ -166,17 +190,31 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
         </div>
         <div className="space-y-5">
           <Panel title={`Speeds and sound against liquid temperature · ${chosen.cooler.name}`}>
-            {evaluation && evaluation.rows.length > 0 ? (
-              <CurveChart rows={evaluation.rows} limits={limits} criticalTempC={evaluation.profile?.criticalTempC} />
+            {evaluation && evaluation.rows.length > 0 && hw ? (
+              <LiveCurvePlot rows={evaluation.rows} limits={limits} profile={evaluation.profile} flashed={evaluation.flashed} hw={hw} operating={operatingMark} editing={editing} />
             ) : (
               <p className="text-sm text-ink-600">The plots appear once the document passes the schema.</p>
             )}
-            <p className="mt-2 text-xs text-ink-600">Solid: as authored. Dashed: as the board runs it after storing in 0.5 °C / 0.5 % steps.</p>
+            <p className="mt-2 text-xs text-ink-600">
+              Solid: as authored. Dashed: as the board runs it after storing in 0.5 °C / 0.5 % steps; a dashed ring marks where a point is stored when that differs.
+              {editing && " Drag a point or use the arrow keys (Shift: 5 steps); Delete removes it; double-click the plot to add one. Every change is written into the JSON and undone with Ctrl+Z in the editor."}
+            </p>
+            <p role="status" className="mt-1 text-sm" data-testid="operating-readout">
+              {operating && `At ${operating.heatLoadW} W and ${operating.ambientC} °C ambient the liquid settles at ${operating.liquidTempC.toFixed(1)} °C; about ${operating.soundDbA.toFixed(1)} dB(A) at 1 m (estimate).`}
+            </p>
+            <p role="status" className="mt-1 text-sm font-medium text-signal-fault" data-testid="edit-notice">
+              {editing?.notice?.text}
+            </p>
           </Panel>
+          {evaluation?.profile && hw && (
+            <Panel title="Points">
+              <PointsTable profile={evaluation.profile} hw={hw} editing={editing} />
+            </Panel>
+          )}
           {deferredEvaluation?.profile && deferredHw && (
             <>
               <Panel title={`Operating point · ${deferredHw.name}`}>
-                <MemoOperatingPanel profile={deferredEvaluation.profile} hw={deferredHw} />
+                <MemoOperatingPanel profile={deferredEvaluation.profile} hw={deferredHw} inputs={operatingInputs} onInputs={setOperatingInputs} />
               </Panel>
               <Panel title="Memory">
                 <MemoMemoryGauge profile={deferredEvaluation.profile} revisions={revisions} boardRange={latest?.boardRange ?? null} />
