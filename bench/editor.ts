@@ -170,6 +170,8 @@ async function main() {
       if (ms !== null && i >= WARMUP) keySamples.push(ms);
     }
     const keys = summary(keySamples);
+    // BENCH_SCREENSHOT=file.png keeps a picture of the editor after the cases, to look at the plot.
+    if (process.env.BENCH_SCREENSHOT) await page.screenshot({ path: process.env.BENCH_SCREENSHOT, fullPage: true });
     // Leave the demo draft as it was.
     await page.evaluate(`window.__loopkeeperEditor.setText(${JSON.stringify(detail.profile.draftText)})`);
     await page.waitForTimeout(1500);
