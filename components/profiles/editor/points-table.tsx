@@ -39,7 +39,7 @@ function NumberCell({ value, label, disabled, onCommit }: { value: number; label
 function PointsTable({ profile, hw, editing }: { profile: CoolingProfile; hw: HardwareContext; editing: CurveEditing | null }) {
   const tables = useMemo(() => (["pump", "fans"] as const).map((kind) => ({ kind, rows: pointRows(profile, hw, kind) })), [profile, hw]);
   return (
-    <div className="grid gap-4 lg:grid-cols-2" data-testid="points-table">
+    <div className="space-y-4" data-testid="points-table">
       {tables.map(({ kind, rows }) => (
         <div key={kind}>
           <table className="w-full text-sm">
