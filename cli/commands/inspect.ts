@@ -1,8 +1,6 @@
 import { decodeBank, looksLikeIntelHex, readIntelHex, reportDump, type DumpReport, type RegistryBuild, type RegistryVersion } from "../../lib/engine";
-import { parseArgs, UsageError } from "../args";
+import { defineCommand, UsageError } from "../args";
 import { readBytes, readText, type CommandResult } from "../io";
-
-export const INSPECT_USAGE = "inspect <dump.bin|dump.hex> [--known registry.json] [--json]";
 
 const KNOWN_SHAPE = `{ "profileVersions": [{ "profileVersionId", "version", "contentHash", "document" }, …], "builds": [{ "buildId", "version", "stage", "bankSha256" }, …] }`;
 
@@ -56,11 +54,19 @@ function describe(file: string, r: DumpReport, withKnown: boolean): string[] {
  * `inspect`: decode a bank image or memory dump (.bin or Intel HEX), check it, and with
  * `--known` identify every slot by content, as the support page and the API do.
  */
-export function inspectCommand(argv: readonly string[]): CommandResult {
-  const args = parseArgs(argv, ["known"], ["json"]);
-  if (args.positionals.length !== 1) throw new UsageError(`Give one dump file: ${INSPECT_USAGE}`);
-  const file = args.positionals[0]!;
-  const knownFile = args.options.get("known");
+export const inspectCommand = defineCommand({
+  name: "inspect",
+  summary: "decode a bank image or memory dump (.bin or Intel HEX), check it strictly, run the safety rules on every slot and, with --known, identify each slot by content.",
+  positionals: { name: "<dump.bin|dump.hex>", description: "bank image or memory dump; Intel HEX when named .hex/.ihx or starting with ':'", min: 1, max: 1 },
+  options: {
+    known: { kind: "text", value: "registry.json", description: `the registry's versions and builds to identify by: ${KNOWN_SHAPE}` },
+  },
+  examples: ["inspect bank.hex", "inspect returned-board.bin --known registry.json --json"],
+  notes: ["A slot is exact only when its bytes equal the registry's encoding of the version it names; otherwise altered (with the differing fields), unknown or undecodable. Exit 1 when the image is damaged, a slot is altered or undecodable, or a slot breaks a safety rule."],
+  run: (args) => inspect(args.positionals[0]!, args.text("known")),
+});
+
+function inspect(file: string, knownFile: string | undefined): CommandResult {
   const registry = knownFile ? loadKnown(knownFile) : { known: [], builds: [] };
   const bytes = readBytes(file);
   const asHex = /\.(hex|ihx)$/i.test(file) || looksLikeIntelHex(bytes);
