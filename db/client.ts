@@ -3,13 +3,14 @@ import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
 import { Pool } from "pg";
 import * as schema from "./schema";
 import { env } from "@/lib/server/env";
+import { noteRequestStat } from "./request-stats";
 
 export type Database = NodePgDatabase<typeof schema>;
 export type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 /** Either the database or an open transaction: query functions accept both. */
 export type Executor = Database | Tx;
 
-const globalForDb = globalThis as unknown as { loopkeeperPool?: Pool; loopkeeperDb?: Database };
+const globalForDb = globalThis as unknown as { loopkeeperPool?: Pool; loopkeeperDb?: Database; loopkeeperCloseHooks?: Set<() => Promise<void>> };
 
 function makePool(): Pool {
   const pool = new Pool({
@@ -28,12 +29,27 @@ function makePool(): Pool {
 export function getDb(): Database {
   if (!globalForDb.loopkeeperDb) {
     globalForDb.loopkeeperPool = makePool();
-    globalForDb.loopkeeperDb = drizzle(globalForDb.loopkeeperPool, { schema });
+    globalForDb.loopkeeperDb = drizzle(globalForDb.loopkeeperPool, {
+      schema,
+      // Counts statements per request when a counter is open (tests, LOOPKEEPER_REQUEST_STATS).
+      logger: { logQuery: () => noteRequestStat("queries") },
+    });
   }
   return globalForDb.loopkeeperDb;
 }
 
+/**
+ * Work to finish before the pool closes: counts still to be sent, a LISTEN connection to end.
+ * Kept on globalThis so scripts/serve.mjs runs the same hooks on shutdown.
+ */
+export function beforeCloseDb(hook: () => Promise<void>): void {
+  (globalForDb.loopkeeperCloseHooks ??= new Set()).add(hook);
+}
+
 export async function closeDb(): Promise<void> {
+  const hooks = [...(globalForDb.loopkeeperCloseHooks ?? [])];
+  globalForDb.loopkeeperCloseHooks?.clear();
+  for (const hook of hooks) await hook().catch(() => undefined);
   const pool = globalForDb.loopkeeperPool;
   globalForDb.loopkeeperPool = undefined;
   globalForDb.loopkeeperDb = undefined;

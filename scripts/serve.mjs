@@ -36,6 +36,8 @@ async function shutdown(signal) {
   force.unref();
   server.close(async () => {
     // The app keeps its pool on globalThis (db/client.ts); close it so PostgreSQL sees a clean exit.
+    // Hooks first: unsent rate-limit counts, the LISTEN connection (db/client.ts beforeCloseDb).
+    for (const hook of globalThis.loopkeeperCloseHooks ?? []) await hook().catch(() => undefined);
     await globalThis.loopkeeperPool?.end().catch(() => undefined);
     console.log(JSON.stringify({ level: 30, msg: "stopped" }));
     process.exit(0);
