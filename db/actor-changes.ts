@@ -1,6 +1,6 @@
 import "server-only";
 import { Client } from "pg";
-import { env } from "@/lib/server/env";
+import { env } from "@/lib/platform/env";
 
 /** The channel the users and api_tokens triggers announce access changes on (payload: the user id). */
 export const ACTOR_CHANGED_CHANNEL = "loopkeeper_actor_changed";

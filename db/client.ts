@@ -2,7 +2,7 @@ import "server-only";
 import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
 import { Pool } from "pg";
 import * as schema from "./schema";
-import { env } from "@/lib/server/env";
+import { env } from "@/lib/platform/env";
 import { noteRequestStat } from "./request-stats";
 
 export type Database = NodePgDatabase<typeof schema>;
@@ -10,11 +10,17 @@ export type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 /** Either the database or an open transaction: query functions accept both. */
 export type Executor = Database | Tx;
 
-const globalForDb = globalThis as unknown as { loopkeeperPool?: Pool; loopkeeperDb?: Database; loopkeeperCloseHooks?: Set<() => Promise<void>> };
+const globalForDb = globalThis as unknown as {
+  loopkeeperPool?: Pool;
+  loopkeeperDb?: Database;
+  loopkeeperReadPool?: Pool;
+  loopkeeperReadDb?: Database;
+  loopkeeperCloseHooks?: Set<() => Promise<void>>;
+};
 
-function makePool(): Pool {
+function makePool(connectionString: string): Pool {
   const pool = new Pool({
-    connectionString: env().DATABASE_URL,
+    connectionString,
     max: env().DB_POOL_MAX,
     connectionTimeoutMillis: 3000,
     idleTimeoutMillis: 30_000,
@@ -25,17 +31,35 @@ function makePool(): Pool {
   return pool;
 }
 
+function makeDb(pool: Pool): Database {
+  return drizzle(pool, {
+    schema,
+    // Counts statements per request when a counter is open (tests, LOOPKEEPER_REQUEST_STATS).
+    logger: { logQuery: () => noteRequestStat("queries") },
+  });
+}
+
 /** The shared Drizzle database. One pool per process; the dev server's reloads reuse it. */
 export function getDb(): Database {
   if (!globalForDb.loopkeeperDb) {
-    globalForDb.loopkeeperPool = makePool();
-    globalForDb.loopkeeperDb = drizzle(globalForDb.loopkeeperPool, {
-      schema,
-      // Counts statements per request when a counter is open (tests, LOOPKEEPER_REQUEST_STATS).
-      logger: { logQuery: () => noteRequestStat("queries") },
-    });
+    globalForDb.loopkeeperPool = makePool(env().DATABASE_URL);
+    globalForDb.loopkeeperDb = makeDb(globalForDb.loopkeeperPool);
   }
   return globalForDb.loopkeeperDb;
+}
+
+/**
+ * For reads of published, immutable data that may lag the primary by a moment (the serial
+ * lookup): a streaming replica when DATABASE_READ_URL is set, otherwise the primary.
+ */
+export function getReadDb(): Database {
+  const url = env().DATABASE_READ_URL;
+  if (!url) return getDb();
+  if (!globalForDb.loopkeeperReadDb) {
+    globalForDb.loopkeeperReadPool = makePool(url);
+    globalForDb.loopkeeperReadDb = makeDb(globalForDb.loopkeeperReadPool);
+  }
+  return globalForDb.loopkeeperReadDb;
 }
 
 /**
@@ -50,8 +74,8 @@ export async function closeDb(): Promise<void> {
   const hooks = [...(globalForDb.loopkeeperCloseHooks ?? [])];
   globalForDb.loopkeeperCloseHooks?.clear();
   for (const hook of hooks) await hook().catch(() => undefined);
-  const pool = globalForDb.loopkeeperPool;
-  globalForDb.loopkeeperPool = undefined;
-  globalForDb.loopkeeperDb = undefined;
-  await pool?.end();
+  const pools = [globalForDb.loopkeeperPool, globalForDb.loopkeeperReadPool];
+  globalForDb.loopkeeperPool = globalForDb.loopkeeperReadPool = undefined;
+  globalForDb.loopkeeperDb = globalForDb.loopkeeperReadDb = undefined;
+  for (const pool of pools) await pool?.end();
 }

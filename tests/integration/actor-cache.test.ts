@@ -5,7 +5,7 @@ import { callRoute, tokenFor } from "./support/http";
 import { withRequestStats } from "@/db/request-stats";
 import { listTokens, revokeToken } from "@/db/tokens";
 import { createUser, updateUser } from "@/db/users";
-import { actorCaches } from "@/lib/server/actor-cache";
+import { actorCaches } from "@/lib/platform/auth/actor-cache";
 import { GET as getMe } from "@/app/api/v1/me/route";
 
 afterAll(closeDb);

@@ -2,7 +2,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { closeDb } from "./support/db";
 import { callRoute, tokenFor } from "./support/http";
 import { withRequestStats } from "@/db/request-stats";
-import { actorCaches } from "@/lib/server/actor-cache";
+import { actorCaches } from "@/lib/platform/auth/actor-cache";
 import { GET as lookup } from "@/app/api/v1/lookup/route";
 
 afterAll(closeDb);

@@ -14,7 +14,7 @@ vi.mock("@/lib/api/openapi", async (importOriginal) => {
 });
 
 const { GET } = await import("@/app/api/v1/openapi.json/route");
-const { ifNoneMatchHits } = await import("@/lib/server/etag");
+const { ifNoneMatchHits } = await import("@/lib/platform/http/etag");
 
 const get = (headers: Record<string, string> = {}) => GET(new Request("http://127.0.0.1/api/v1/openapi.json", { headers }));
 

@@ -1,6 +1,6 @@
 import { allOperations } from "@/lib/api/operations";
 import { buildOpenApi } from "@/lib/api/openapi";
-import { etagOf, ifNoneMatchHits } from "@/lib/server/etag";
+import { etagOf, ifNoneMatchHits } from "@/lib/platform/http/etag";
 import pkg from "@/package.json";
 
 interface BuiltDocument {

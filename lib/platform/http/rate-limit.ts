@@ -3,9 +3,9 @@ import { beforeCloseDb, getDb } from "@/db/client";
 import { addRateLimitCounts, pruneRateLimits } from "@/db/rate-limit";
 import { AppError } from "@/lib/api/errors";
 import { RequestBudget } from "@/lib/rate-limit/request-budget";
-import type { Actor } from "./actor";
-import { env } from "./env";
-import { logger } from "./log";
+import type { Actor } from "@/lib/platform/auth/actor";
+import { env } from "@/lib/platform/env";
+import { logger } from "@/lib/platform/log";
 
 const WINDOW_MS = 60_000;
 /** How often unsent counts go to PostgreSQL, so other instances see them. */

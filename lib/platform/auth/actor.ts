@@ -10,7 +10,7 @@ import { findTokenActor, touchToken } from "@/db/tokens";
 import type { AuditActor } from "@/db/audit";
 import type { Role } from "@/lib/auth/roles";
 import { actorCaches, type CachedUser } from "./actor-cache";
-import { authOptions } from "./auth";
+import { authOptions } from "@/lib/platform/auth/options";
 
 /** Who is making this request, as the server established it. */
 export interface Actor {
