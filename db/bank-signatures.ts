@@ -12,6 +12,16 @@ import { bankSigner } from "@/lib/platform/signing-key";
  */
 export async function signBuildBank(tx: Tx, build: Pick<Build, "id" | "boardModelId" | "bankImage">): Promise<void> {
   if (!build.bankImage) return;
+  const fields = await bankSignatureFields(tx, { boardModelId: build.boardModelId, bankImage: build.bankImage });
+  await tx.update(builds).set(fields).where(eq(builds.id, build.id));
+}
+
+/**
+ * The signature columns for a bank about to be stored, registering the signing key as the
+ * board model's current one. Used where a build row is written already past pilot (the demo
+ * seed), since the database refuses changes to a withdrawn build after its insert.
+ */
+export async function bankSignatureFields(tx: Tx, build: { boardModelId: string; bankImage: Uint8Array }): Promise<Pick<Build, "bankSignature" | "bankSignatureKeyId">> {
   const signer = bankSigner();
   const now = new Date();
   const [known] = await tx.select().from(bankSigningKeys).where(and(eq(bankSigningKeys.boardModelId, build.boardModelId), eq(bankSigningKeys.keyId, signer.keyId)));
@@ -19,8 +29,7 @@ export async function signBuildBank(tx: Tx, build: Pick<Build, "id" | "boardMode
     await tx.update(bankSigningKeys).set({ validUntil: now }).where(and(eq(bankSigningKeys.boardModelId, build.boardModelId), isNull(bankSigningKeys.validUntil), ne(bankSigningKeys.keyId, signer.keyId)));
     await tx.insert(bankSigningKeys).values({ boardModelId: build.boardModelId, keyId: signer.keyId, publicKeyPem: signer.publicKeyPem, validFrom: now });
   }
-  const signature = signer.sign(new Uint8Array(build.bankImage));
-  await tx.update(builds).set({ bankSignature: Buffer.from(signature), bankSignatureKeyId: signer.keyId }).where(eq(builds.id, build.id));
+  return { bankSignature: Buffer.from(signer.sign(new Uint8Array(build.bankImage))), bankSignatureKeyId: signer.keyId };
 }
 
 /** A board model's bank signing public keys with their validity, oldest first. */
