@@ -97,8 +97,9 @@ async function main() {
     const doc = JSON.parse(detail.profile.draftText) as Doc;
     if (doc.fans.points.length !== 16) throw new Error(`expected a 16-point draft, found ${doc.fans.points.length}`);
     await page.goto(`/profiles/${surge.id}`);
-    await page.waitForFunction(() => Boolean(window.__loopkeeperEditor));
-    await page.getByTestId("curve-chart").waitFor();
+    // Monaco loads on demand; on a busy shared machine that can take well over the default 30 s.
+    await page.waitForFunction(() => Boolean(window.__loopkeeperEditor), undefined, { timeout: 180_000 });
+    await page.getByTestId("curve-chart").waitFor({ timeout: 180_000 });
 
     const samples: number[] = [];
     for (let i = 0; i < WARMUP + EDITS; i++) {
