@@ -195,7 +195,10 @@ export const profiles = pgTable(
     ownerUserId: uuid("owner_user_id").notNull().references(() => users.id),
     /** The working copy the editor autosaves, exactly as typed (key order, spacing, even broken JSON); published versions are separate and immutable. */
     draftText: text("draft_text"),
-    /** Earlier drafts were kept as parsed JSON, which reorders keys; read only when draftText is empty. */
+    /**
+     * The last draft that passed the schema, as parsed JSON (key order not kept): the editor
+     * plots it while the draft text is broken. Rows from before draftText hold the draft here.
+     */
     draftDocument: jsonb("draft_document"),
     draftUpdatedAt: timestamp("draft_updated_at", { withTimezone: true }),
     ...timestamps,

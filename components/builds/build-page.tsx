@@ -12,7 +12,7 @@ import { BuildReviews } from "./build-reviews";
 import { StageBadge } from "./stage-badge";
 import { useBuild } from "./use-build";
 
-const hex32 = (n: number) => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
+import { hex32 } from "@/lib/hex/address";
 
 export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string; role: Role } }) {
   const q = useBuild(id);
@@ -61,7 +61,7 @@ export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string
                 {build.bankSignatureKeyId && <a href={`/api/v1/builds/${build.id}/bank?format=sig`} download>Download .sig</a>}
                 {hexRevisions.map((r) => (
                   <a key={r.revision} href={`/api/v1/builds/${build.id}/bank?format=hex&revision=${encodeURIComponent(r.revision)}`} download>
-                    Download .hex at 0x{r.baseAddress.toString(16).toUpperCase()} (revision {r.revision})
+                    Download .hex at {hex32(r.baseAddress)} (revision {r.revision})
                   </a>
                 ))}
               </div>

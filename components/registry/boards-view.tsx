@@ -1,6 +1,7 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
+import { hex32 } from "@/lib/hex/address";
 import Link from "next/link";
 import { useState } from "react";
 import { apiFetch } from "@/lib/api/client";
@@ -11,7 +12,6 @@ import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { BoardModelForm, BoardRevisionForm } from "./board-forms";
 import { BoardSigningKeys } from "./board-signing-keys";
 
-const hex = (n: number) => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
 
 export function BoardsView({ canWrite }: { canWrite: boolean }) {
   const q = useQuery({ queryKey: ["board-models"], queryFn: () => apiFetch<{ items: BoardModelView[] }>("/api/v1/board-models") });
@@ -67,7 +67,7 @@ export function BoardsView({ canWrite }: { canWrite: boolean }) {
                     </Link>
                   </Td>
                   <Td className="tabular-nums">{r.memoryBytes} B</Td>
-                  <Td className="font-mono text-xs">{hex(r.baseAddress)}</Td>
+                  <Td className="font-mono text-xs">{hex32(r.baseAddress)}</Td>
                   <Td className="tabular-nums">{r.slotCount}</Td>
                   <Td className="tabular-nums">{r.maxPointsPerCurve}</Td>
                   <Td className="tabular-nums">{r.pwmFrequencyHz / 1000} kHz · {r.tachPulsesPerRev} p/rev</Td>

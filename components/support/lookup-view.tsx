@@ -69,7 +69,7 @@ export function LookupView() {
         </Notice>
       )}
       {q.data && <LookupResultView result={q.data} />}
-      <TachConverter key={q.data?.serial ?? "none"} pulsesPerRev={q.data?.pump.pulsesPerRev} pumpName={q.data?.pump.name} />
+      <TachConverter key={q.data?.serial ?? "none"} pulsesPerRev={q.data?.pump.pulsesPerRev} pumpName={q.data?.pump.name} pumpRange={q.data?.slots[0]?.pump} />
       <DumpIdentify />
     </div>
   );

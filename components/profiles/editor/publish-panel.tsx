@@ -1,6 +1,7 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
+import { hex32 } from "@/lib/hex/address";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
 import { useForm } from "react-hook-form";
@@ -76,7 +77,7 @@ export function PublishPanel({
           )}
         </Notice>
       )}
-      {publish.isSuccess && <Notice tone="ok" role="status">Published {publish.data.version.version} ({publish.data.version.encodedBytes} B, CRC-32 0x{publish.data.version.crc32.toString(16).toUpperCase().padStart(8, "0")}).</Notice>}
+      {publish.isSuccess && <Notice tone="ok" role="status">Published {publish.data.version.version} ({publish.data.version.encodedBytes} B, CRC-32 {hex32(publish.data.version.crc32)}).</Notice>}
       {blocked && <p className="text-sm text-signal-fault">Fix the errors in the problems list before publishing.</p>}
       <Button type="submit" disabled={publish.isPending || blocked}>Publish version</Button>
     </form>

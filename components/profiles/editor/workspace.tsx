@@ -24,6 +24,7 @@ import LiveCurvePlot, { type OperatingMark } from "../charts/live-curve-plot";
 import { ProblemsList } from "./problems-list";
 import { PublishPanel } from "./publish-panel";
 import { useAutosave } from "./use-autosave";
+import { useLastPlotted } from "./use-last-plotted";
 import { VersionHistory } from "./version-history";
 
 // Monaco is heavy: it loads on this route only, in the browser only. The live plot is our own
@@ -72,6 +73,7 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
   // Everything slower (operating point and load sweep, memory, version suggestion)
   // renders in a background pass React may interrupt, so typing stays within a frame. The publish
   // form takes the live text: what is sent is what is on screen (the server checks it again).
+  const plotted = useLastPlotted(evaluation, hw, profile.lastPlottableDraftText);
   const deferredEvaluation = useDeferredValue(evaluation);
   const deferredHw = useDeferredValue(hw);
   const save = useAutosave(profile.id, text, canWrite);
@@ -190,8 +192,26 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
         </div>
         <div className="space-y-5">
           <Panel title={`Speeds and sound against liquid temperature · ${chosen.cooler.name}`}>
-            {evaluation && evaluation.rows.length > 0 && hw ? (
-              <LiveCurvePlot rows={evaluation.rows} limits={limits} profile={evaluation.profile} flashed={evaluation.flashed} hw={hw} operating={operatingMark} editing={editing} />
+            {plotted.stale && (
+              <p role="status" className="mb-2 rounded bg-ink-100 px-3 py-2 text-sm text-ink-800" data-testid="stale-plots">
+                {plotted.problem?.range
+                  ? `The JSON has a problem at line ${plotted.problem.range.start.line}, column ${plotted.problem.range.start.column} (see Problems)`
+                  : "The document does not pass the schema (see Problems)"}
+                : these greyed plots are from the last version of the draft that did, not from the text on the left.
+              </p>
+            )}
+            {plotted.evaluation && hw ? (
+              <div className={plotted.stale ? "pointer-events-none opacity-40 grayscale" : undefined} aria-hidden={plotted.stale || undefined}>
+                <LiveCurvePlot
+                  rows={plotted.evaluation.rows}
+                  limits={limits}
+                  profile={plotted.evaluation.profile}
+                  flashed={plotted.evaluation.flashed}
+                  hw={hw}
+                  operating={plotted.stale ? null : operatingMark}
+                  editing={plotted.stale ? null : editing}
+                />
+              </div>
             ) : (
               <p className="text-sm text-ink-600">The plots appear once the document passes the schema.</p>
             )}

@@ -83,6 +83,8 @@ export const profileDetailView = z.object({
     description: z.string(),
     ownerName: z.string(),
     draftText: z.string().nullable(),
+    /** Set only while draftText does not pass the schema: the last draft that did, for greyed plots. */
+    lastPlottableDraftText: z.string().nullable(),
     draftUpdatedAt: z.string().nullable(),
   }),
   cooler: z.object({ id: z.string(), name: z.string(), fanCount: z.number(), radiatorKPerWAtMinFan: z.number(), radiatorKPerWAtMaxFan: z.number(), boardModelName: z.string() }),
