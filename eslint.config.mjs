@@ -58,4 +58,12 @@ export default tseslint.config(
       "no-restricted-imports": ["error", { patterns: [{ group: ["@/db", "@/db/*", "pg", "drizzle-orm", "drizzle-orm/*"], message: "Only db/, lib/platform and lib/use-cases reach PostgreSQL." }] }],
     },
   },
+  {
+    // Screens talk to the API through the typed client only, and its errors are already AppError.
+    files: ["components/**/*.{ts,tsx}", "app/**/*.tsx"],
+    rules: {
+      "no-restricted-globals": ["error", { name: "fetch", message: "Call the API with apiCall/apiQuery from @/lib/api/client." }],
+      "no-restricted-syntax": ["error", { selector: "TSAsExpression > TSTypeReference[typeName.name='AppError']", message: "Query and mutation errors are typed AppError already; do not cast." }],
+    },
+  },
 );

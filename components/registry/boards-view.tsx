@@ -3,8 +3,8 @@
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { BoardModelView } from "@/lib/api/operations/registry-schemas";
+import { apiQuery } from "@/lib/api/client";
+import { listBoardModels } from "@/lib/api/operations/registry";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
@@ -13,7 +13,7 @@ import { BoardModelForm, BoardRevisionForm } from "./board-forms";
 const hex = (n: number) => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
 
 export function BoardsView({ canWrite }: { canWrite: boolean }) {
-  const q = useQuery({ queryKey: ["board-models"], queryFn: () => apiFetch<{ items: BoardModelView[] }>("/api/v1/board-models") });
+  const q = useQuery(apiQuery(listBoardModels, {}));
   const [editingId, setEditingId] = useState<string | null>(null);
   return (
     <div className="space-y-5">

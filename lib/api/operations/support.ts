@@ -1,14 +1,14 @@
 import { z } from "zod";
-import { defineOperation } from "../operation";
+import { defineOperation, fileResponse } from "../operation";
 import { lotInput } from "@/lib/lots/input";
+import { STAGE_ORDER } from "@/lib/release/stages";
 import { idParams } from "./account";
-import type { ComponentFields, CoolerFields, RevisionFields } from "@/lib/registry/hardware-context";
-import type { ProfileChange } from "@/lib/support/curve-diff";
-import type { CoolingProfile } from "@/lib/engine";
+import { coolingProfileDocument, profileChangeView } from "./profile-schemas";
+import { componentFieldsView, coolerFieldsView, revisionFieldsView } from "./registry-schemas";
 
 export const lotBody = lotInput;
 
-const stage = z.enum(["draft", "review", "validation", "pilot", "production", "withdrawn"]);
+const stage = z.enum(STAGE_ORDER);
 
 export const lotView = z.object({
   id: z.string(),
@@ -108,28 +108,30 @@ export const importLots = defineOperation({
 
 export const lookupQuery = z.strictObject({ serial: z.string().max(64, "A serial is at most 17 characters.") });
 
-export interface LookupSlot {
-  slotIndex: number;
-  profileVersionId: string;
-  profileId: string;
-  profileName: string;
-  version: string;
-  document: CoolingProfile;
-  cooler: CoolerFields;
-  fan: ComponentFields;
-  pump: ComponentFields;
-}
+export const lookupSlotView = z.object({
+  slotIndex: z.number(),
+  profileVersionId: z.string(),
+  profileId: z.string(),
+  profileName: z.string(),
+  version: z.string(),
+  document: coolingProfileDocument,
+  cooler: coolerFieldsView,
+  fan: componentFieldsView,
+  pump: componentFieldsView,
+});
+export type LookupSlot = z.infer<typeof lookupSlotView>;
 
-export interface LookupResult {
-  serial: string;
-  lot: { id: string; lotCode: string; serialFrom: string; serialTo: string; producedOn: string; line: string };
-  boardModel: { id: string; serialPrefix: string };
-  boardRevision: RevisionFields & { id: string };
-  build: { id: string; version: string; stage: z.infer<typeof stage>; revisionRange: string; withdrawnReason: string | null };
-  slots: LookupSlot[];
-  pump: { name: string | null; pulsesPerRev: number; source: "registry" | "default" };
-  newerBuilds: { id: string; version: string; changes: ProfileChange[] }[];
-}
+export const lookupResultView = z.object({
+  serial: z.string(),
+  lot: z.object({ id: z.string(), lotCode: z.string(), serialFrom: z.string(), serialTo: z.string(), producedOn: z.string(), line: z.string() }),
+  boardModel: z.object({ id: z.string(), serialPrefix: z.string() }),
+  boardRevision: revisionFieldsView.extend({ id: z.string() }),
+  build: z.object({ id: z.string(), version: z.string(), stage, revisionRange: z.string(), withdrawnReason: z.string().nullable() }),
+  slots: z.array(lookupSlotView),
+  pump: z.object({ name: z.string().nullable(), pulsesPerRev: z.number(), source: z.enum(["registry", "default"]) }),
+  newerBuilds: z.array(z.object({ id: z.string(), version: z.string(), changes: z.array(profileChangeView) })),
+});
+export type LookupResult = z.infer<typeof lookupResultView>;
 
 export const lookupSerial = defineOperation({
   id: "lookupSerial",
@@ -139,6 +141,7 @@ export const lookupSerial = defineOperation({
   tag: "Support",
   access: "support",
   query: lookupQuery,
+  response: lookupResultView,
 });
 
 export const recentLookupsView = z.object({ items: z.array(z.object({ serial: z.string(), found: z.boolean(), createdAt: z.string() })) });
@@ -155,28 +158,30 @@ export const listRecentLookups = defineOperation({
 
 export const MAX_DUMP_BYTES = 256 * 1024;
 
-export interface DumpSlotView {
-  slotIndex: number;
-  version: string;
-  contentHashPrefix: string;
-  match: "exact" | "hash_only" | "unknown";
-  profileVersionId?: string;
-  profileName?: string;
-  coolerName?: string;
-  knownVersion?: string;
-}
+export const dumpSlotView = z.object({
+  slotIndex: z.number(),
+  version: z.string(),
+  contentHashPrefix: z.string(),
+  match: z.enum(["exact", "hash_only", "unknown"]),
+  profileVersionId: z.string().optional(),
+  profileName: z.string().optional(),
+  coolerName: z.string().optional(),
+  knownVersion: z.string().optional(),
+});
+export type DumpSlotView = z.infer<typeof dumpSlotView>;
 
-export interface DumpIdentifyResult {
-  fileName: string | null;
-  format: "bin" | "hex";
-  sizeBytes: number;
-  hex?: { ok: boolean; startAddress?: number; recordCount: number; errors: { line: number; message: string }[] };
-  status: "ok" | "corrupt" | "unreadable";
-  crc?: { stored: string; computed: string; ok: boolean };
-  slotCount?: number;
-  slots: DumpSlotView[];
-  errors: { code: string; message: string }[];
-}
+export const dumpIdentifyView = z.object({
+  fileName: z.string().nullable(),
+  format: z.enum(["bin", "hex"]),
+  sizeBytes: z.number(),
+  hex: z.object({ ok: z.boolean(), startAddress: z.number().optional(), recordCount: z.number(), errors: z.array(z.object({ line: z.number(), message: z.string() })) }).optional(),
+  status: z.enum(["ok", "corrupt", "unreadable"]),
+  crc: z.object({ stored: z.string(), computed: z.string(), ok: z.boolean() }).optional(),
+  slotCount: z.number().optional(),
+  slots: z.array(dumpSlotView),
+  errors: z.array(z.object({ code: z.string(), message: z.string() })),
+});
+export type DumpIdentifyResult = z.infer<typeof dumpIdentifyView>;
 
 export const identifyDump = defineOperation({
   id: "identifyDump",
@@ -186,6 +191,7 @@ export const identifyDump = defineOperation({
   tag: "Support",
   access: "support",
   rawBody: { contentTypes: ["application/octet-stream", "text/plain", "multipart/form-data"], maxBytes: MAX_DUMP_BYTES },
+  response: dumpIdentifyView,
 });
 
 export const withdrawnBuildView = z.object({
@@ -234,4 +240,5 @@ export const exportShippedCsv = defineOperation({
   tag: "Support",
   access: "support",
   params: idParams,
+  response: fileResponse(["text/csv"], "One row per lot that shipped with the build"),
 });
