@@ -16,6 +16,7 @@ export default tseslint.config(
       "test-results/**",
       "playwright-report/**",
       "next-env.d.ts",
+      "tests/integration/generated/**",
     ],
   },
   js.configs.recommended,

@@ -134,7 +134,9 @@ export function apiRoute<Q extends z.ZodType | undefined, B extends z.ZodType | 
       }
       status = op.successStatus ?? 200;
       if (status === 204) return new NextResponse(null, { status, headers: { "x-request-id": requestId } });
-      return NextResponse.json(result, { status, headers: { "x-request-id": requestId } });
+      // The declared schema shapes the body: Dates become ISO strings and columns the
+      // operation does not declare are left out, so the answer is what the contract says.
+      return NextResponse.json(op.response.parse(result), { status, headers: { "x-request-id": requestId } });
     } catch (err) {
       const res = errorResponse(err, requestId);
       status = res.status;
