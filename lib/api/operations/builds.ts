@@ -29,6 +29,8 @@ export const buildSummaryView = z.object({
   bankBytes: z.number().nullable(),
   bankSha256: z.string().nullable(),
   bankCrc32: z.number().nullable(),
+  /** Key id of the Ed25519 bank signature made at pilot; null while unsigned. */
+  bankSignatureKeyId: z.string().nullable(),
   releaseNotes: z.string().nullable(),
   waiverReason: z.string().nullable(),
   withdrawnReason: z.string().nullable(),
@@ -262,13 +264,13 @@ export const uploadEvidence = defineOperation({
   response: z.object({ upload: uploadView }),
 });
 
-export const bankQuery = z.strictObject({ format: z.enum(["bin", "hex"]).default("bin"), revision: z.string().max(40).optional() });
+export const bankQuery = z.strictObject({ format: z.enum(["bin", "hex", "sig"]).default("bin"), revision: z.string().max(40).optional() });
 
 export const downloadBank = defineOperation({
   id: "downloadBank",
   method: "GET",
   path: "/api/v1/builds/{id}/bank",
-  summary: "The build's bank image as .bin, or Intel HEX at a revision's base address",
+  summary: "The build's bank image as .bin, Intel HEX at a revision's base address, or its Ed25519 signature block (.sig, from pilot on)",
   tag: "Builds",
   access: "read",
   params: idParams,

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { defineOperation, fileResponse } from "../operation";
 import { lotInput } from "@/lib/lots/input";
 import { STAGE_ORDER } from "@/lib/release/stages";
+import type { DumpReport } from "@/lib/engine";
 import { idParams } from "./account";
 import { coolingProfileDocument, profileChangeView } from "./profile-schemas";
 import { componentFieldsView, coolerFieldsView, revisionFieldsView } from "./registry-schemas";
@@ -158,36 +159,17 @@ export const listRecentLookups = defineOperation({
 
 export const MAX_DUMP_BYTES = 256 * 1024;
 
-export const dumpSlotView = z.object({
-  slotIndex: z.number(),
-  version: z.string(),
-  contentHashPrefix: z.string(),
-  match: z.enum(["exact", "hash_only", "unknown"]),
-  profileVersionId: z.string().optional(),
-  profileName: z.string().optional(),
-  coolerName: z.string().optional(),
-  knownVersion: z.string().optional(),
-});
-export type DumpSlotView = z.infer<typeof dumpSlotView>;
+/** The dump report (lib/bank/dump-report.ts): the command line and this operation give the same one. */
+export type { DumpReport as DumpIdentifyResult, SlotReport as DumpSlotView } from "@/lib/engine";
 
-export const dumpIdentifyView = z.object({
-  fileName: z.string().nullable(),
-  format: z.enum(["bin", "hex"]),
-  sizeBytes: z.number(),
-  hex: z.object({ ok: z.boolean(), startAddress: z.number().optional(), recordCount: z.number(), errors: z.array(z.object({ line: z.number(), message: z.string() })) }).optional(),
-  status: z.enum(["ok", "corrupt", "unreadable"]),
-  crc: z.object({ stored: z.string(), computed: z.string(), ok: z.boolean() }).optional(),
-  slotCount: z.number().optional(),
-  slots: z.array(dumpSlotView),
-  errors: z.array(z.object({ code: z.string(), message: z.string() })),
-});
-export type DumpIdentifyResult = z.infer<typeof dumpIdentifyView>;
+/** The dump report as the engine builds it; described loosely in OpenAPI until it has its own schema. */
+export const dumpIdentifyView = z.custom<DumpReport>((v) => typeof v === "object" && v !== null).meta({ type: "object", description: "The dump report: file, CRC, slots matched against the registry, findings." });
 
 export const identifyDump = defineOperation({
   id: "identifyDump",
   method: "POST",
   path: "/api/v1/dumps/identify",
-  summary: "Identify a memory dump (.bin or Intel .hex) read back from a board: CRC, slots, matching profile versions",
+  summary: "Identify a memory dump (.bin or Intel .hex) read back from a board by content: CRC, each slot exact/altered (with the differing fields)/unknown/undecodable, safety findings, and the build whose bank it is",
   tag: "Support",
   access: "support",
   rawBody: { contentTypes: ["application/octet-stream", "text/plain", "multipart/form-data"], maxBytes: MAX_DUMP_BYTES },
