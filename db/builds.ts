@@ -1,7 +1,7 @@
 import "server-only";
 import { alias } from "drizzle-orm/pg-core";
 import { asc, desc, eq, inArray } from "drizzle-orm";
-import { boardModels, boardRevisions, buildReviews, builds, buildSlots, buildTransitions, components, coolerModels, profiles, profileVersions, uploads, users, type BuildStage } from "./schema";
+import { boardModels, buildReviews, builds, buildSlots, buildTransitions, components, coolerModels, profiles, profileVersions, uploads, users, type BuildStage } from "./schema";
 import type { Database, Executor } from "./client";
 import { recordAudit, type AuditActor } from "./audit";
 import { AppError } from "@/lib/api/errors";
@@ -59,14 +59,6 @@ export async function getBuild(db: Executor, { id }: { id: string }) {
 export async function getBuildImage(db: Executor, { id }: { id: string }) {
   const [row] = await db.select({ bankImage: builds.bankImage, bankSignature: builds.bankSignature, bankSignatureKeyId: builds.bankSignatureKeyId, version: builds.version, boardModelId: builds.boardModelId, revisionRange: builds.revisionRange }).from(builds).where(eq(builds.id, id)).limit(1);
   return row;
-}
-
-export async function listBoardModels(db: Executor) {
-  return db.select({ id: boardModels.id, name: boardModels.name }).from(boardModels).orderBy(asc(boardModels.name));
-}
-
-export async function listRevisions(db: Executor, { boardModelId }: { boardModelId: string }) {
-  return db.select().from(boardRevisions).where(eq(boardRevisions.boardModelId, boardModelId)).orderBy(asc(boardRevisions.revision));
 }
 
 export async function listBuildSlots(db: Executor, { buildId }: { buildId: string }) {

@@ -3,9 +3,9 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm } from "react-hook-form";
 import { useState } from "react";
-import { apiFetch } from "@/lib/api/client";
+import { apiCall } from "@/lib/api/client";
 import { AppError } from "@/lib/api/errors";
-import { changePasswordBody, type ChangePasswordBody } from "@/lib/api/operations/account";
+import { changePassword, changePasswordBody, type ChangePasswordBody } from "@/lib/api/operations/account";
 import { Button } from "@/components/ui/button";
 import { Field, Input, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -18,7 +18,7 @@ export function ChangePasswordForm() {
   const onSubmit = handleSubmit(async (values) => {
     setDone(false);
     try {
-      await apiFetch("/api/v1/me/password", { method: "POST", json: values });
+      await apiCall(changePassword, { body: values });
       reset();
       setDone(true);
     } catch (err) {

@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { BuildDetail, UploadView, WaiverBody } from "@/lib/api/operations/builds";
+import { apiCall } from "@/lib/api/client";
+import { recordWaiver, uploadEvidence, type BuildDetail, type UploadView, type WaiverBody } from "@/lib/api/operations/builds";
 import { can, type Role } from "@/lib/auth/roles";
 import { UPLOAD_LABELS } from "@/lib/release/upload-check";
 import { Button } from "@/components/ui/button";
@@ -40,9 +40,9 @@ export function BuildEvidence({ detail, role }: { detail: BuildDetail; role: Rol
   const { build, uploads, comparison } = detail;
   const [waiver, setWaiver] = useState("");
   const upload = useBuildMutation(build.id, ({ kind, file }: { kind: "lab_report" | "measurements"; file: File }) =>
-    apiFetch(`/api/v1/builds/${build.id}/evidence?kind=${kind}&name=${encodeURIComponent(file.name)}`, { method: "POST", body: file, headers: { "content-type": "application/octet-stream" } }),
+    apiCall(uploadEvidence, { params: { id: build.id }, query: { kind, name: file.name }, raw: { data: file, contentType: "application/octet-stream" } }),
   );
-  const waive = useBuildMutation(build.id, (body: WaiverBody) => apiFetch(`/api/v1/builds/${build.id}/waiver`, { method: "POST", json: body }));
+  const waive = useBuildMutation(build.id, (body: WaiverBody) => apiCall(recordWaiver, { params: { id: build.id }, body }));
   const mayAttach = can(role, "build:promote") && EVIDENCE_STAGES.includes(build.stage);
   const outside = comparison.state === "ok" ? comparison.rows.filter((r) => !r.withinTolerance).length : 0;
 

@@ -1,7 +1,7 @@
 "use client";
 
 import type { Role } from "@/lib/auth/roles";
-import { STAGE_LABELS, type Stage } from "@/lib/release/stages";
+import { STAGE_LABELS } from "@/lib/release/stages";
 import { Button } from "@/components/ui/button";
 import { EstimateCaution, Notice } from "@/components/ui/notice";
 import { PageHeader, Panel } from "@/components/ui/panel";
@@ -104,7 +104,7 @@ export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string
                 </li>
                 {detail.transitions.map((t) => (
                   <li key={t.id}>
-                    <span className="font-medium">{STAGE_LABELS[t.toStage as Stage]}</span> · {t.actorName}{" "}
+                    <span className="font-medium">{STAGE_LABELS[t.toStage]}</span> · {t.actorName}{" "}
                     <span className="text-xs text-ink-500">{t.createdAt.slice(0, 16).replace("T", " ")}</span>
                     {t.reason && <p className="text-xs text-ink-700">{t.reason}</p>}
                   </li>

@@ -4,9 +4,8 @@ import { useQueries, useQuery } from "@tanstack/react-query";
 import dynamic from "next/dynamic";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
-import type { ProfileDetailView, VersionWithDocumentView } from "@/lib/api/operations/profile-schemas";
+import { apiQuery } from "@/lib/api/client";
+import { getProfile, getVersion } from "@/lib/api/operations/profiles";
 import { evaluateCurves, type CoolingProfile } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { coolingBranchRpm } from "@/lib/registry/editor-evaluation";
@@ -23,14 +22,13 @@ export function CompareView({ id }: { id: string }) {
   const sp = useSearchParams();
   const router = useRouter();
   const pathname = usePathname();
-  const detail = useQuery({ queryKey: ["profile", id], queryFn: () => apiFetch<ProfileDetailView>(`/api/v1/profiles/${id}`) });
+  const detail = useQuery(apiQuery(getProfile, { params: { id } }));
   const versions = detail.data?.versions ?? [];
   const a = sp.get("a") ?? versions[1]?.id ?? "";
   const b = sp.get("b") ?? versions[0]?.id ?? "";
   const docs = useQueries({
     queries: [a, b].map((vid) => ({
-      queryKey: ["profile-version", vid],
-      queryFn: () => apiFetch<{ version: VersionWithDocumentView }>(`/api/v1/profile-versions/${vid}`),
+      ...apiQuery(getVersion, { params: { id: vid } }),
       enabled: Boolean(vid),
     })),
   });
@@ -68,7 +66,7 @@ export function CompareView({ id }: { id: string }) {
   if (detail.isError)
     return (
       <Notice tone="fault" role="alert" title="Could not load the profile">
-        {(detail.error as AppError).message} <button className="underline" onClick={() => void detail.refetch()}>Retry</button>
+        {detail.error.message} <button className="underline" onClick={() => void detail.refetch()}>Retry</button>
       </Notice>
     );
   if (versions.length < 2) return <Notice title="Nothing to compare">This profile has fewer than two published versions.</Notice>;

@@ -3,9 +3,8 @@
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
-import type { BoardRevisionDetail } from "@/lib/api/operations/registry";
+import { apiQuery } from "@/lib/api/client";
+import { getBoardRevision } from "@/lib/api/operations/registry";
 import { Notice } from "@/components/ui/notice";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
@@ -15,13 +14,13 @@ import { CompatibilityMatrix } from "./compatibility-matrix";
 import { hex32 } from "@/lib/hex/address";
 
 export function BoardRevisionView({ id, canWrite }: { id: string; canWrite: boolean }) {
-  const q = useQuery({ queryKey: ["board-revision", id], queryFn: () => apiFetch<BoardRevisionDetail>(`/api/v1/board-revisions/${id}`) });
+  const q = useQuery(apiQuery(getBoardRevision, { params: { id } }));
   const [editing, setEditing] = useState(false);
   if (q.isPending) return <Panel title="Board revision"><Table caption="Loading"><tbody><SkeletonRows cols={4} rows={4} /></tbody></Table></Panel>;
   if (q.isError)
     return (
       <Notice tone="fault" role="alert" title="Could not load the board revision">
-        {(q.error as AppError).message} <button className="underline" onClick={() => void q.refetch()}>Retry</button>
+        {q.error.message} <button className="underline" onClick={() => void q.refetch()}>Retry</button>
       </Notice>
     );
   const { revision: r, boardModelName, compatibility } = q.data;

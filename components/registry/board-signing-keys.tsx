@@ -1,18 +1,12 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
-import { apiFetch } from "@/lib/api/client";
-
-interface SigningKey {
-  keyId: string;
-  publicKeyPem: string;
-  validFrom: string;
-  validUntil: string | null;
-}
+import { apiQuery } from "@/lib/api/client";
+import { listBoardSigningKeys } from "@/lib/api/operations/registry";
 
 /** The board model's bank-signing public keys, so the factory and support can verify images offline. */
 export function BoardSigningKeys({ boardModelId, boardName }: { boardModelId: string; boardName: string }) {
-  const q = useQuery({ queryKey: ["board-signing-keys", boardModelId], queryFn: () => apiFetch<{ keys: SigningKey[] }>(`/api/v1/board-models/${boardModelId}/signing-keys`) });
+  const q = useQuery(apiQuery(listBoardSigningKeys, { params: { id: boardModelId } }));
   if (!q.data) return null;
   return (
     <div className="mt-3 text-sm" data-testid="signing-keys">

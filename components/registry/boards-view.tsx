@@ -4,8 +4,8 @@ import { useQuery } from "@tanstack/react-query";
 import { hex32 } from "@/lib/hex/address";
 import Link from "next/link";
 import { useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { BoardModelView } from "@/lib/api/operations/registry-schemas";
+import { apiQuery } from "@/lib/api/client";
+import { listBoardModels } from "@/lib/api/operations/registry";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
@@ -14,7 +14,7 @@ import { BoardSigningKeys } from "./board-signing-keys";
 
 
 export function BoardsView({ canWrite }: { canWrite: boolean }) {
-  const q = useQuery({ queryKey: ["board-models"], queryFn: () => apiFetch<{ items: BoardModelView[] }>("/api/v1/board-models") });
+  const q = useQuery(apiQuery(listBoardModels, {}));
   const [editingId, setEditingId] = useState<string | null>(null);
   return (
     <div className="space-y-5">

@@ -2,9 +2,8 @@
 
 import { useMutation } from "@tanstack/react-query";
 import { useId, useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
-import type { DumpIdentifyResult } from "@/lib/api/operations/support";
+import { apiCall } from "@/lib/api/client";
+import { identifyDump } from "@/lib/api/operations/support";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
@@ -21,7 +20,7 @@ export function DumpIdentify() {
     mutationFn: (f: File) => {
       const fd = new FormData();
       fd.set("file", f);
-      return apiFetch<DumpIdentifyResult>("/api/v1/dumps/identify", { method: "POST", body: fd });
+      return apiCall(identifyDump, { raw: { data: fd } });
     },
   });
   const r = identify.data;
@@ -48,7 +47,7 @@ export function DumpIdentify() {
         </div>
         <Button type="submit" disabled={!file || identify.isPending}>{identify.isPending ? "Reading…" : "Identify"}</Button>
       </form>
-      {identify.error && <div className="mt-3"><Notice tone="fault" role="alert">{(identify.error as AppError).message}</Notice></div>}
+      {identify.error && <div className="mt-3"><Notice tone="fault" role="alert">{identify.error.message}</Notice></div>}
       {r && (
         <div className="mt-4 space-y-3" data-testid="dump-result">
           {r.status === "ok" && r.faults.length === 0 && <Notice tone="ok" role="status" title="Dump is intact">CRC-32 {r.crc?.stored} matches; {r.slots.length} slot(s) read, every one checked by content.</Notice>}

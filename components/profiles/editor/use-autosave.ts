@@ -1,8 +1,9 @@
 "use client";
 
 import { useEffect, useRef, useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
+import { apiCall } from "@/lib/api/client";
+import { AppError } from "@/lib/api/errors";
+import { saveDraft } from "@/lib/api/operations/profiles";
 
 export type SaveState = { kind: "idle" } | { kind: "saving" } | { kind: "saved"; at: string } | { kind: "error"; message: string };
 
@@ -20,12 +21,12 @@ export function useAutosave(profileId: string, text: string | null, enabled: boo
     if (text === lastSaved.current) return;
     const timer = setTimeout(() => {
       setState({ kind: "saving" });
-      apiFetch<{ draftUpdatedAt: string }>(`/api/v1/profiles/${profileId}/draft`, { method: "PUT", json: { text } })
+      apiCall(saveDraft, { params: { id: profileId }, body: { text } })
         .then((r) => {
           lastSaved.current = text;
           setState({ kind: "saved", at: r.draftUpdatedAt });
         })
-        .catch((e: unknown) => setState({ kind: "error", message: (e as AppError).message }));
+        .catch((e: unknown) => setState({ kind: "error", message: e instanceof AppError ? e.message : "Could not save the draft." }));
     }, delayMs);
     return () => clearTimeout(timer);
   }, [profileId, text, enabled, delayMs]);

@@ -4,9 +4,9 @@ import { useQuery } from "@tanstack/react-query";
 import dynamic from "next/dynamic";
 import Link from "next/link";
 import { memo, useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
-import type { ProfileDetailView, VersionWithDocumentView } from "@/lib/api/operations/profile-schemas";
+import { apiQuery } from "@/lib/api/client";
+import { getProfile, getVersion } from "@/lib/api/operations/profiles";
+import type { ProfileDetailView } from "@/lib/api/operations/profile-schemas";
 import { operatingPoint, suggestNextVersion, type CoolingProfile } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { evaluateEditorText } from "@/lib/registry/editor-evaluation";
@@ -46,12 +46,12 @@ declare global {
 const NO_ISSUES: never[] = [];
 
 export function ProfileWorkspace({ id, canWrite }: { id: string; canWrite: boolean }) {
-  const q = useQuery({ queryKey: ["profile", id], queryFn: () => apiFetch<ProfileDetailView>(`/api/v1/profiles/${id}`) });
+  const q = useQuery(apiQuery(getProfile, { params: { id } }));
   if (q.isPending) return <div className="h-96 animate-pulse rounded-md bg-white shadow-panel" aria-label="Loading the profile" />;
   if (q.isError)
     return (
       <Notice tone="fault" role="alert" title="Could not load the profile">
-        {(q.error as AppError).message} <button className="underline" onClick={() => void q.refetch()}>Retry</button>
+        {q.error.message} <button className="underline" onClick={() => void q.refetch()}>Retry</button>
       </Notice>
     );
   return <Workspace detail={q.data} canWrite={canWrite} />;
@@ -95,8 +95,7 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
 
   const latest = versions[0];
   const latestDoc = useQuery({
-    queryKey: ["profile-version", latest?.id],
-    queryFn: () => apiFetch<{ version: VersionWithDocumentView }>(`/api/v1/profile-versions/${latest!.id}`),
+    ...apiQuery(getVersion, { params: { id: latest?.id ?? "" } }),
     enabled: Boolean(latest),
   });
   const current = deferredEvaluation?.profile;

@@ -1,6 +1,8 @@
 import { z } from "zod";
 import { isValidVersion } from "@/lib/versioning/semver-helpers";
-import { boardRangeSchema } from "./registry-schemas";
+import { boardRangeSchema, componentFieldsView } from "./registry-schemas";
+import type { CoolingProfile } from "@/lib/engine";
+import type { ProfileChange } from "@/lib/support/curve-diff";
 
 /** Largest profile document accepted anywhere (draft, import, publish), bytes. */
 export const MAX_PROFILE_BYTES = 256 * 1024;
@@ -62,18 +64,21 @@ export type VersionView = z.infer<typeof versionView>;
 export const versionWithDocumentView = versionView.extend({ document: z.unknown() });
 export type VersionWithDocumentView = z.infer<typeof versionWithDocumentView>;
 
-const componentFields = z.object({
-  name: z.string(),
-  kind: z.enum(["fan", "pump"]),
-  minDutyPct: z.number(),
-  rpmAtMinDuty: z.number(),
-  maxRpm: z.number(),
-  tachPulsesPerRev: z.number(),
-  refSoundDbA: z.number(),
-  refRpm: z.number(),
-  soundExponent: z.number(),
-  flowAtMaxRpmLpm: z.number().nullable(),
-});
+const componentFields = componentFieldsView;
+
+/** A cooling profile document; its full shape is schemas/cooling-profile.schema.json, checked on publish. */
+export const coolingProfileDocument = z
+  .custom<CoolingProfile>((v) => typeof v === "object" && v !== null && !Array.isArray(v))
+  .meta({ description: "A cooling profile document as published; its shape is the cooling-profile JSON Schema (schemas/cooling-profile.schema.json).", type: "object" });
+
+export const profileChangeView = z.object({
+  profileId: z.string(),
+  profileName: z.string(),
+  fromVersion: z.string().nullable(),
+  toVersion: z.string().nullable(),
+  kind: z.enum(["changed", "unchanged", "added", "removed"]),
+  changes: z.array(z.string()),
+}) satisfies z.ZodType<ProfileChange>;
 
 /** Everything the editor needs in one answer: the profile, its cooler's parts, the board's revisions, the versions. */
 export const profileDetailView = z.object({

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { defineOperation } from "../operation";
+import { defineOperation, fileResponse } from "../operation";
 import { idParams } from "./account";
 import { listQuery, pageOf } from "./registry-schemas";
 import {
@@ -120,4 +120,5 @@ export const downloadVersion = defineOperation({
   tag: "Profiles",
   access: "read",
   params: idParams,
+  response: fileResponse(["application/json"], "The version's profile document as a .json file"),
 });

@@ -3,7 +3,7 @@ import { randomUUID } from "node:crypto";
 import { NextResponse, type NextRequest } from "next/server";
 import { z } from "zod";
 import { AppError, type FieldIssue } from "@/lib/api/errors";
-import type { Operation } from "@/lib/api/operation";
+import { isJsonResponse, type HandlerResult, type InputOf, type Operation, type ResponseSpec } from "@/lib/api/operation";
 import { can } from "@/lib/auth/roles";
 import { getSessionActor, getTokenActor, type Actor } from "@/lib/platform/auth/actor";
 import { fromDbError } from "@/lib/platform/http/db-errors";
@@ -22,8 +22,6 @@ export interface HandlerContext<Q, B, P> {
   params: P;
   requestId: string;
 }
-
-type Infer<T> = T extends z.ZodType ? z.infer<T> : undefined;
 
 export function zodIssues(error: z.ZodError): FieldIssue[] {
   return error.issues.map((i) => ({ path: i.path.length ? "/" + i.path.map(String).join("/") : "", message: i.message }));
@@ -82,9 +80,9 @@ export function errorResponse(err: unknown, requestId: string): NextResponse {
  * token; 401), which role (403), inputs parsed with the operation's zod schemas (400/413/415/422),
  * typed errors mapped to statuses, unknown errors logged and answered without detail.
  */
-export function apiRoute<Q extends z.ZodType, B extends z.ZodType, P extends z.ZodType>(
-  op: Operation<Q, B, P>,
-  handler: (ctx: HandlerContext<Infer<Q>, Infer<B>, Infer<P>>) => Promise<unknown>,
+export function apiRoute<Q extends z.ZodType | undefined, B extends z.ZodType | undefined, P extends z.ZodType | undefined, R extends ResponseSpec>(
+  op: Operation<Q, B, P, R>,
+  handler: (ctx: HandlerContext<InputOf<Q>, InputOf<B>, InputOf<P>>) => Promise<HandlerResult<R>>,
 ) {
   return async (req: NextRequest, routeCtx: { params: Promise<Record<string, string | string[]>> }): Promise<Response> => {
     const requestId = req.headers.get("x-request-id")?.slice(0, 64) || randomUUID();
@@ -108,19 +106,25 @@ export function apiRoute<Q extends z.ZodType, B extends z.ZodType, P extends z.Z
       const result = await handler({
         req,
         actor: actor as Actor,
-        query: query as Infer<Q>,
-        body: body as Infer<B>,
-        params: params as Infer<P>,
+        query: query as InputOf<Q>,
+        body: body as InputOf<B>,
+        params: params as InputOf<P>,
         requestId,
       });
-      if (result instanceof Response) {
-        status = result.status;
-        result.headers.set("x-request-id", requestId);
-        return result;
+      if (!isJsonResponse(op.response)) {
+        if (result instanceof Response) {
+          status = result.status;
+          result.headers.set("x-request-id", requestId);
+          return result;
+        }
+        status = 204;
+        return new NextResponse(null, { status, headers: { "x-request-id": requestId } });
       }
       status = op.successStatus ?? 200;
       if (status === 204) return new NextResponse(null, { status, headers: { "x-request-id": requestId } });
-      return NextResponse.json(result, { status, headers: { "x-request-id": requestId } });
+      // The declared schema shapes the body: Dates become ISO strings and columns the
+      // operation does not declare are left out, so the answer is what the contract says.
+      return NextResponse.json(op.response.parse(result), { status, headers: { "x-request-id": requestId } });
     } catch (err) {
       const res = errorResponse(err, requestId);
       status = res.status;

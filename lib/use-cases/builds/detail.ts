@@ -1,6 +1,7 @@
 import "server-only";
 import type { Executor } from "@/db/client";
-import { getBuild, listBuildSlots, listRevisions, listReviews, listTransitions } from "@/db/builds";
+import { listRevisionsOfModel } from "@/db/boards";
+import { getBuild, listBuildSlots, listReviews, listTransitions } from "@/db/builds";
 import { getUploads } from "@/db/uploads";
 import { AppError } from "@/lib/api/errors";
 import { countingApprovers, openChangeRequests } from "@/lib/release/approvals";
@@ -16,7 +17,7 @@ export async function buildDetail(db: Executor, { id }: { id: string }) {
     listBuildSlots(db, { buildId: id }),
     listReviews(db, { buildId: id }),
     listTransitions(db, { buildId: id }),
-    listRevisions(db, { boardModelId: build.boardModelId }),
+    listRevisionsOfModel(db, { boardModelId: build.boardModelId }),
     getUploads(db, { ids: [build.firmwareUploadId, build.labReportUploadId, build.measurementsUploadId].filter((x): x is string => !!x) }),
   ]);
   const byId = new Map(uploads.map((u) => [u.id, u]));

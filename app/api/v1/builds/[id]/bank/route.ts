@@ -1,7 +1,8 @@
 import { apiRoute } from "@/lib/platform/http/api-route";
 import { downloadBank } from "@/lib/api/operations/builds";
 import { getDb } from "@/db/client";
-import { getBuildImage, listRevisions } from "@/db/builds";
+import { listRevisionsOfModel } from "@/db/boards";
+import { getBuildImage } from "@/db/builds";
 import { AppError } from "@/lib/api/errors";
 import { satisfiesRange, sha256, toHex, writeIntelHex } from "@/lib/engine";
 import { formatSignatureBlock } from "@/lib/signing/signature-block";
@@ -21,7 +22,7 @@ export const GET = apiRoute(downloadBank, async ({ params, query }) => {
       headers: { "content-type": "application/octet-stream", "content-disposition": `attachment; filename="${base}.bin"`, "x-content-sha256": toHex(sha256(build.bankImage)) },
     });
   }
-  const revisions = (await listRevisions(db, { boardModelId: build.boardModelId })).filter((r) => satisfiesRange(r.revision, build.revisionRange));
+  const revisions = (await listRevisionsOfModel(db, { boardModelId: build.boardModelId })).filter((r) => satisfiesRange(r.revision, build.revisionRange));
   const revision = query.revision ? revisions.find((r) => r.revision === query.revision) : revisions[0];
   if (!revision) throw new AppError("not_found", query.revision ? `Revision ${query.revision} is not in this build's range.` : "No board revision is in this build's range.");
   const text = writeIntelHex(build.bankImage, revision.baseAddress);
