@@ -151,7 +151,20 @@ export async function loadSlotFacts(db: Executor, { ids, boardModelId }: { ids: 
 
 export async function listReviews(db: Executor, { buildId }: { buildId: string }) {
   return db
-    .select({ id: buildReviews.id, reviewerUserId: buildReviews.reviewerUserId, reviewerName: users.name, reviewerEmail: users.email, verdict: buildReviews.verdict, comment: buildReviews.comment, resolvedAt: buildReviews.resolvedAt, createdAt: buildReviews.createdAt })
+    .select({
+      id: buildReviews.id,
+      reviewerUserId: buildReviews.reviewerUserId,
+      reviewerName: users.name,
+      reviewerEmail: users.email,
+      // The reviewer's account as it is now: the gate counts only active reviewers who still may review.
+      reviewerRole: users.role,
+      reviewerDisabledAt: users.disabledAt,
+      verdict: buildReviews.verdict,
+      comment: buildReviews.comment,
+      resolvedAt: buildReviews.resolvedAt,
+      createdAt: buildReviews.createdAt,
+      updatedAt: buildReviews.updatedAt,
+    })
     .from(buildReviews)
     .innerJoin(users, eq(users.id, buildReviews.reviewerUserId))
     .where(eq(buildReviews.buildId, buildId))

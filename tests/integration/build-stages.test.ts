@@ -113,7 +113,7 @@ describe("build stages", () => {
     const b = await inReviewWithApprovals(2);
     await moveBuild(release, { id: b.id, from: "review", to: "validation" });
     let err = await refusal(moveBuild(release, { id: b.id, from: "validation", to: "pilot" }));
-    expect(err.issues?.map((i) => i.message)).toEqual(["Attach the lab report (PDF).", "Attach the measurement CSV."]);
+    expect(err.issues?.map((i) => i.message)).toEqual(["Attach the lab report (PDF).", "Attach the measurement CSV.", "No measurements to compare with the estimate yet."]);
 
     await uploadEvidence(b.id, "lab_report", tinyPdf("lab"), "report.pdf");
     // 5 dB above the estimate is outside the default 3 dB tolerance.

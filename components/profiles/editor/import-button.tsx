@@ -7,7 +7,7 @@ import { Notice } from "@/components/ui/notice";
 import { buttonClass } from "@/components/ui/button";
 
 /** Uploads a .json profile; the server validates it and replaces the draft, then the editor shows it. */
-export function ImportButton({ profileId, onImported }: { profileId: string; onImported: (text: string) => void }) {
+export function ImportButton({ profileId, onImported }: { profileId: string; onImported: (text: string, draftRevision: number) => void }) {
   const input = useRef<HTMLInputElement>(null);
   const [error, setError] = useState<AppError | null>(null);
   const [busy, setBusy] = useState(false);
@@ -21,12 +21,12 @@ export function ImportButton({ profileId, onImported }: { profileId: string; onI
     try {
       const text = await file.text();
       const res = await fetch(`/api/v1/profiles/${profileId}/import`, { method: "POST", headers: { "content-type": "application/json" }, body: text });
-      const body = (await res.json().catch(() => null)) as { error?: { message: string; issues?: { path: string; message: string }[] } } | null;
+      const body = (await res.json().catch(() => null)) as { draftRevision?: number; error?: { message: string; issues?: { path: string; message: string }[] } } | null;
       if (!res.ok) {
         setError({ message: body?.error?.message ?? `The server answered ${res.status}.`, issues: body?.error?.issues } as AppError);
         return;
       }
-      onImported(`${JSON.stringify(JSON.parse(text), null, 2)}\n`);
+      onImported(`${JSON.stringify(JSON.parse(text), null, 2)}\n`, body?.draftRevision ?? 0);
     } catch {
       setError({ message: "Could not read or send the file." } as AppError);
     } finally {

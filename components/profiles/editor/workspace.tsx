@@ -21,6 +21,7 @@ import { OperatingPanel } from "./operating-panel";
 import { ProblemsList } from "./problems-list";
 import { PublishPanel } from "./publish-panel";
 import { useAutosave } from "./use-autosave";
+import { DraftConflict } from "./draft-conflict";
 import { VersionHistory } from "./version-history";
 
 // Monaco and recharts are heavy: they load on this route only, in the browser only.
@@ -71,7 +72,8 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
   // form takes the live text: what is sent is what is on screen (the server checks it again).
   const deferredEvaluation = useDeferredValue(evaluation);
   const deferredHw = useDeferredValue(hw);
-  const save = useAutosave(profile.id, text, canWrite);
+  const { state: save, adopt, keepMine } = useAutosave(profile.id, text, canWrite, profile.draftRevision);
+  const replaceText = (t: string) => (editor.current ? editor.current.setText(t) : setText(t));
 
   const latest = versions[0];
   const latestDoc = useQuery({
@@ -133,13 +135,30 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
                 {save.kind === "saved" && "Draft saved"}
                 {save.kind === "error" && <span className="text-signal-fault">Draft not saved: {save.message}</span>}
               </span>
-              <ImportButton profileId={profile.id} onImported={(t) => (editor.current ? editor.current.setText(t) : setText(t))} />
+              <ImportButton
+                profileId={profile.id}
+                onImported={(t, draftRevision) => {
+                  adopt(t, draftRevision);
+                  replaceText(t);
+                }}
+              />
             </>
           ) : (
             <span className="text-ink-600">Read only: your role may not edit profiles.</span>
           )}
         </div>
       </div>
+      {save.kind === "conflict" && (
+        <DraftConflict
+          conflict={save}
+          mine={text}
+          onTakeTheirs={(theirs, draftRevision) => {
+            adopt(theirs, draftRevision);
+            replaceText(theirs);
+          }}
+          onKeepMine={keepMine}
+        />
+      )}
       {!chosen.own && (
         <Notice tone="info" role="status">
           <span data-testid="evaluating-other-cooler">

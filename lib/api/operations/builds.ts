@@ -47,7 +47,18 @@ export interface BuildDetail {
   slots: { slotIndex: number; profileVersionId: string; profileName: string; coolerModel: string; version: string; boardRange: string; encodedBytes: number; contentHash: string }[];
   revisions: { revision: string; memoryBytes: number; slotCount: number; baseAddress: number }[];
   uploads: { firmware: UploadView | null; labReport: UploadView | null; measurements: UploadView | null };
-  reviews: { id: string; reviewerUserId: string; reviewerName: string; verdict: "approve" | "request_changes"; comment: string; resolvedAt: string | null; createdAt: string }[];
+  reviews: {
+    id: string;
+    reviewerUserId: string;
+    reviewerName: string;
+    verdict: "approve" | "request_changes";
+    comment: string;
+    resolvedAt: string | null;
+    createdAt: string;
+    updatedAt: string;
+    /** Whether this review counts toward the approvals now and, if not, why. */
+    standing: { counts: boolean; reason: string | null };
+  }[];
   approvals: { counting: number; required: number; openChangeRequests: number };
   transitions: { id: string; fromStage: string; toStage: string; actorName: string; reason: string | null; createdAt: string }[];
   comparison: { state: "none" } | { state: "invalid"; errors: string[] } | { state: "ok"; coolerModel: string; toleranceDb: number; rows: MeasurementComparison[] };
@@ -161,6 +172,17 @@ export const reviewBuild = defineOperation({
   params: idParams,
   body: reviewBody,
   successStatus: 201,
+});
+
+export const changeReview = defineOperation({
+  id: "changeReview",
+  method: "PATCH",
+  path: "/api/v1/builds/{id}/reviews/{reviewId}",
+  summary: "The reviewer changes their own verdict on a build in review (one review per reviewer)",
+  tag: "Builds",
+  access: "build:review",
+  params: z.strictObject({ id: z.uuid("Not a valid id."), reviewId: z.uuid("Not a valid id.") }),
+  body: reviewBody,
 });
 
 export const resolveReview = defineOperation({

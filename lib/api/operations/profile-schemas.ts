@@ -14,6 +14,8 @@ export type CreateProfileBody = z.infer<typeof createProfileBody>;
 
 export const saveDraftBody = z.strictObject({
   text: z.string().max(MAX_PROFILE_BYTES, "The draft is larger than 256 KiB."),
+  /** The draft revision this text was based on (from the profile or the last save); a stale one gets 409. */
+  baseRevision: z.number("Send the draft revision your text is based on.").int().min(0),
 });
 export type SaveDraftBody = z.infer<typeof saveDraftBody>;
 
@@ -80,6 +82,8 @@ export const profileDetailView = z.object({
     ownerName: z.string(),
     draftText: z.string().nullable(),
     draftUpdatedAt: z.string().nullable(),
+    /** Send it back as baseRevision when saving the draft. */
+    draftRevision: z.number(),
   }),
   cooler: z.object({ id: z.string(), name: z.string(), fanCount: z.number(), radiatorKPerWAtMinFan: z.number(), radiatorKPerWAtMaxFan: z.number(), boardModelName: z.string() }),
   fan: componentFields,

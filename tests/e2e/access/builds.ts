@@ -16,6 +16,7 @@ export const buildRows: AccessRow[] = [
   { file: "app/api/v1/builds/[id]/route.ts", kind: "api", method: "GET", url: `/api/v1/builds/${ANY_UUID}`, allowed: "all", ok: 404 },
   { file: "app/api/v1/builds/[id]/transitions/route.ts", kind: "api", method: "POST", url: `/api/v1/builds/${ANY_UUID}/transitions`, body: { from: "nowhere" }, allowed: CREATE, ok: 422 },
   { file: "app/api/v1/builds/[id]/reviews/route.ts", kind: "api", method: "POST", url: `/api/v1/builds/${ANY_UUID}/reviews`, body: { verdict: "maybe" }, allowed: REVIEW, ok: 422 },
+  { file: "app/api/v1/builds/[id]/reviews/[reviewId]/route.ts", kind: "api", method: "PATCH", url: `/api/v1/builds/${ANY_UUID}/reviews/${ANY_UUID}`, body: { verdict: "maybe" }, allowed: REVIEW, ok: 422 },
   { file: "app/api/v1/builds/[id]/reviews/[reviewId]/resolve/route.ts", kind: "api", method: "POST", url: `/api/v1/builds/${ANY_UUID}/reviews/${ANY_UUID}/resolve`, allowed: CREATE, ok: 404 },
   { file: "app/api/v1/builds/[id]/waiver/route.ts", kind: "api", method: "POST", url: `/api/v1/builds/${ANY_UUID}/waiver`, body: { reason: "" }, allowed: PROMOTE, ok: 422 },
   { file: "app/api/v1/builds/[id]/evidence/route.ts", kind: "api", method: "POST", url: `/api/v1/builds/${ANY_UUID}/evidence`, allowed: PROMOTE, ok: 400 },

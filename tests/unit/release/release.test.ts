@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { checkBuild, type BuildSlotFacts } from "@/lib/release/build-check";
 import { compareMeasurements, parseMeasurementsCsv, soundGateIssues, MEASUREMENT_HEADER } from "@/lib/release/measurements";
-import { approvalGateIssues } from "@/lib/release/approvals";
+import { reviewStanding, type ReviewFacts } from "@/lib/release/approvals";
+import { approvalGateIssues, validationGate } from "@/lib/release/gates";
 import { capabilityFor, nextStage, transitionShapeError } from "@/lib/release/transitions";
 import { checkUploadContent, uploadNameProblem } from "@/lib/release/upload-check";
 import { messageBodyText } from "@/lib/mail/raw-message";
@@ -118,18 +119,34 @@ describe("stages and approvals", () => {
   });
 
   it("counts one approval per reviewer, none from authors, and blocks on open change requests", () => {
+    const active = { reviewerRole: "engineer" as const, reviewerDisabledAt: null };
     const reviews = [
-      { reviewerUserId: "a", verdict: "approve" as const, resolvedAt: null },
-      { reviewerUserId: "a", verdict: "approve" as const, resolvedAt: null },
-      { reviewerUserId: "author", verdict: "approve" as const, resolvedAt: null },
-      { reviewerUserId: "b", verdict: "request_changes" as const, resolvedAt: null },
+      { reviewerUserId: "a", verdict: "approve" as const, resolvedAt: null, ...active },
+      { reviewerUserId: "a", verdict: "approve" as const, resolvedAt: null, ...active },
+      { reviewerUserId: "author", verdict: "approve" as const, resolvedAt: null, ...active },
+      { reviewerUserId: "b", verdict: "request_changes" as const, resolvedAt: null, ...active },
     ];
-    expect(approvalGateIssues(reviews, new Set(["author"]), 2)).toEqual([
-      "The build has 1 of 2 required approvals from people who wrote neither the build nor its profile versions.",
+    const authorship = { buildAuthorUserId: "author", profileAuthorUserIds: new Set<string>() };
+    expect(approvalGateIssues(reviews, authorship, 2)).toEqual([
+      "The build has 1 of 2 required approvals from active reviewers who wrote neither the build nor its profile versions.",
       "1 change request is still open; the author must resolve it first.",
     ]);
     const resolved = reviews.map((r) => (r.verdict === "request_changes" ? { ...r, resolvedAt: "2026-01-01" } : r));
-    expect(approvalGateIssues([...resolved, { reviewerUserId: "c", verdict: "approve", resolvedAt: null }], new Set(["author"]), 2)).toEqual([]);
+    expect(approvalGateIssues([...resolved, { reviewerUserId: "c", verdict: "approve", resolvedAt: null, ...active }], authorship, 2)).toEqual([]);
+  });
+
+  it("says why a review does not count: profile author, build author, disabled, role no longer allowed", () => {
+    const authorship = { buildAuthorUserId: "builder", profileAuthorUserIds: new Set(["writer"]) };
+    const approval = (reviewerUserId: string, extra: Partial<ReviewFacts> = {}): ReviewFacts => ({ reviewerUserId, verdict: "approve", resolvedAt: null, reviewerRole: "engineer", reviewerDisabledAt: null, ...extra });
+    expect(reviewStanding(approval("ok"), authorship)).toEqual({ counts: true, reason: null });
+    expect(reviewStanding(approval("writer"), authorship).reason).toMatch(/wrote a profile version in this build/);
+    expect(reviewStanding(approval("builder"), authorship).reason).toMatch(/created this build/);
+    expect(reviewStanding(approval("gone", { reviewerDisabledAt: "2026-01-02T00:00:00Z" }), authorship).reason).toMatch(/disabled/);
+    expect(reviewStanding(approval("demoted", { reviewerRole: "viewer" }), authorship).reason).toMatch(/role is now Viewer, which may not review/);
+    expect(reviewStanding(approval("asks", { verdict: "request_changes" }), authorship).counts).toBe(false);
+    // A disabled reviewer and a demoted one leave one counting approval of two: the gate stays shut.
+    const gate = validationGate([approval("ok"), approval("gone", { reviewerDisabledAt: new Date() }), approval("demoted", { reviewerRole: "support" })], authorship, 2);
+    expect(gate.find((r) => r.key === "approvals")).toMatchObject({ state: "unmet", label: "Approvals 1 of 2" });
   });
 });
 

@@ -20,6 +20,6 @@ export const POST = apiRoute(importDraft, async ({ actor, params, req, requestId
       issues: issues.map((i) => ({ path: i.range ? `${i.path} (line ${i.range.start.line})` : i.path, message: i.message })),
     });
   }
-  const saved = await profiles.saveDraft(db, auditActor(actor, requestId), { id: params.id, text: documentText(result.value) });
+  const saved = await profiles.saveDraft(db, { ...auditActor(actor, requestId), userId: actor.userId }, { id: params.id, text: documentText(result.value) });
   return { ...saved, warnings: result.issues.length };
 });

@@ -1,0 +1,59 @@
+import "server-only";
+import type { Executor } from "@/db/client";
+import { listBuildSlots, listReviews } from "@/db/builds";
+import type { Build } from "@/db/schema";
+import type { Role } from "@/lib/auth/roles";
+import type { BuildAuthorship } from "@/lib/release/approvals";
+import { pilotGate, productionGate, reviewGate, roleRequirement, validationGate, type GateRequirement, type SoundVerdict } from "@/lib/release/gates";
+import { soundGateIssues } from "@/lib/release/measurements";
+import type { Stage } from "@/lib/release/stages";
+import { capabilityFor, nextStage } from "@/lib/release/transitions";
+import { env } from "../env";
+import { checkStoredBuild } from "./check";
+import { measurementComparison } from "./measurements";
+
+/** Who wrote the build and its profile versions: they may not count as its reviewers. */
+export async function buildAuthorship(db: Executor, build: Pick<Build, "id" | "authorUserId">): Promise<BuildAuthorship> {
+  const slots = await listBuildSlots(db, { buildId: build.id });
+  return { buildAuthorUserId: build.authorUserId, profileAuthorUserIds: new Set(slots.map((s) => s.authorUserId)) };
+}
+
+async function soundVerdict(db: Executor, build: Build): Promise<SoundVerdict> {
+  const comparison = await measurementComparison(db, build);
+  if (comparison.state !== "ok") return comparison;
+  const issues = soundGateIssues(comparison.rows, comparison.toleranceDb);
+  return { state: "ok", issues, summary: `All ${comparison.rows.length} measured points are within ${comparison.toleranceDb} dB of the estimate.` };
+}
+
+/**
+ * The requirements of the gate into `to`, each with its state, for `mover`. The same
+ * function judges a promotion (inside its transaction, build row locked) and feeds the
+ * checklist the build page shows, so the two cannot disagree.
+ * `releaseNotes` is undefined when previewing: they are then written with the promotion.
+ */
+export async function gateRequirements(db: Executor, build: Build, to: Stage, mover: { role: Role }, input: { releaseNotes?: string | null } = {}): Promise<GateRequirement[]> {
+  const role = roleRequirement(mover.role, capabilityFor(to), to);
+  switch (to) {
+    case "review":
+      return [role, ...reviewGate((await checkStoredBuild(db, build)).check)];
+    case "validation":
+      return [role, ...validationGate(await listReviews(db, { buildId: build.id }), await buildAuthorship(db, build), env().REQUIRED_APPROVALS)];
+    case "pilot":
+      return [
+        role,
+        ...pilotGate({ labReport: !!build.labReportUploadId, measurements: !!build.measurementsUploadId, sound: await soundVerdict(db, build), waiverReason: build.waiverReason }),
+      ];
+    case "production":
+      // The release-manager line stands in for the role line: the same roles, said in the trade's words.
+      return productionGate({ moverRole: mover.role, releaseNotes: input.releaseNotes });
+    default:
+      return [role];
+  }
+}
+
+/** The checklist of the next stage on the promotion path, or null at the end of it. */
+export async function nextGate(db: Executor, build: Build, viewer: { role: Role }) {
+  const to = nextStage(build.stage);
+  if (!to) return null;
+  return { to, requirements: await gateRequirements(db, build, to, viewer) };
+}
