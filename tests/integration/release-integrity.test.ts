@@ -9,8 +9,8 @@ import { freshDraftBuild, mover } from "./support/builds";
 import { auditEvents, buildReviews, builds, coolerModels, uploads } from "@/db/schema";
 import { createUser, updateUser } from "@/db/users";
 import { createProfile, getProfileDetail } from "@/db/profiles";
-import { moveBuild } from "@/lib/server/builds/stages";
-import { buildDetail } from "@/lib/server/builds/detail";
+import { moveBuild } from "@/lib/use-cases/builds/stages";
+import { buildDetail } from "@/lib/use-cases/builds/detail";
 import { POST as postReview } from "@/app/api/v1/builds/[id]/reviews/route";
 import { PATCH as patchReview } from "@/app/api/v1/builds/[id]/reviews/[reviewId]/route";
 import { POST as postTransition } from "@/app/api/v1/builds/[id]/transitions/route";
@@ -34,7 +34,7 @@ const headers = { "content-type": "application/json" };
 async function freshReviewer(label: string) {
   const admin = await demoActor("admin@tarnwell.example");
   const email = `${label}-${randomUUID().slice(0, 8)}@tarnwell.example`;
-  const { hashPassword } = await import("@/lib/server/password");
+  const { hashPassword } = await import("@/lib/platform/auth/password");
   const user = await createUser(getDb(), admin, { email, name: `Reviewer ${label}`, role: "engineer", passwordHash: await hashPassword("loopkeeper-demo") });
   return { user, email, token: await tokenFor(email) };
 }

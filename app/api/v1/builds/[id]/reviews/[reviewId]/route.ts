@@ -1,7 +1,7 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { changeReview } from "@/lib/api/operations/builds";
-import { auditActor } from "@/lib/server/actor";
-import { changeVerdict } from "@/lib/server/builds/stages";
+import { auditActor } from "@/lib/platform/auth/actor";
+import { changeVerdict } from "@/lib/use-cases/builds/stages";
 
 export const PATCH = apiRoute(changeReview, async ({ actor, params, body, requestId }) => ({
   review: await changeVerdict(

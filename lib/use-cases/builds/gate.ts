@@ -8,7 +8,7 @@ import { pilotGate, productionGate, reviewGate, roleRequirement, validationGate,
 import { soundGateIssues } from "@/lib/release/measurements";
 import type { Stage } from "@/lib/release/stages";
 import { capabilityFor, nextStage } from "@/lib/release/transitions";
-import { env } from "../env";
+import { env } from "@/lib/platform/env";
 import { checkStoredBuild } from "./check";
 import { measurementComparison } from "./measurements";
 

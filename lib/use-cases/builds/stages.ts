@@ -11,8 +11,8 @@ import { reviewerEligibility } from "@/lib/release/approvals";
 import { gateIssues } from "@/lib/release/gates";
 import { releaseMail, reviewRequestedMail, verdictMail, type BuildMailFacts } from "@/lib/release/mail";
 import { capabilityFor } from "@/lib/release/transitions";
-import { env } from "../env";
-import { kickMailSender } from "../mail/sender";
+import { env } from "@/lib/platform/env";
+import { kickMailSender } from "@/lib/platform/mail/sender";
 import { buildAuthorship, gateRequirements } from "./gate";
 
 type Mover = AuditActor & { userId: string; role: Role; name: string };
