@@ -55,6 +55,12 @@ export async function getBuild(db: Executor, { id }: { id: string }) {
   return row;
 }
 
+/** The build's own row (without joins), as gates judge it. */
+export async function getBuildRow(db: Executor, { id }: { id: string }) {
+  const [row] = await db.select().from(builds).where(eq(builds.id, id)).limit(1);
+  return row;
+}
+
 export async function getBuildImage(db: Executor, { id }: { id: string }) {
   const [row] = await db.select({ bankImage: builds.bankImage, version: builds.version, boardModelId: builds.boardModelId, revisionRange: builds.revisionRange }).from(builds).where(eq(builds.id, id)).limit(1);
   return row;

@@ -55,7 +55,7 @@ export function checkUploadContent(kind: UploadKind, name: string, bytes: Uint8A
   if (kind === "measurements") {
     const text = asText(bytes);
     if (text === null || !hasMeasurementHeader(text)) {
-      return { ok: false, message: "The measurements must be a CSV text file whose first line is liquid_temp_c,pump_rpm,fan_rpm,sound_dba." };
+      return { ok: false, message: "The measurements must be a CSV text file whose first line is liquid_temp_c,pump_rpm,fan_rpm,sound_dba (optionally followed by ,background_dba)." };
     }
     return { ok: true, contentType: "text/csv" };
   }

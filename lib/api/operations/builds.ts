@@ -134,6 +134,35 @@ export const getBuild = defineOperation({
   params: idParams,
 });
 
+export const gateRequirementView = z.object({
+  key: z.string(),
+  label: z.string(),
+  /** "on_promotion": supplied with the promotion itself (release notes), so it does not hold the button back. */
+  state: z.enum(["met", "unmet", "on_promotion"]),
+  detail: z.string(),
+});
+
+export const buildGateView = z.object({
+  stage: stageSchema,
+  /** The next stage on the promotion path with each requirement of its gate; null at the end. */
+  next: z.object({ to: stageSchema, requirements: z.array(gateRequirementView), ready: z.boolean() }).nullable(),
+  /** Whether the signed-in user may review this build now, and why not. */
+  review: z.object({ mayReview: z.boolean(), reason: z.string().nullable(), ownReviewId: z.string().nullable(), ownVerdict: z.enum(["approve", "request_changes"]).nullable() }),
+  mayWithdraw: z.boolean(),
+});
+export type BuildGateView = z.infer<typeof buildGateView>;
+
+export const getBuildGate = defineOperation({
+  id: "getBuildGate",
+  method: "GET",
+  path: "/api/v1/builds/{id}/gate",
+  summary: "The next stage's checklist for the signed-in user, computed by the code that judges the promotion",
+  tag: "Builds",
+  access: "read",
+  params: idParams,
+  response: buildGateView,
+});
+
 export const transitionBody = z.strictObject({
   from: stageSchema,
   to: stageSchema,

@@ -1,13 +1,14 @@
 import "server-only";
 import type { Executor } from "@/db/client";
-import { listBuildSlots, listReviews } from "@/db/builds";
+import { getBuildRow, listBuildSlots, listReviews } from "@/db/builds";
 import type { Build } from "@/db/schema";
-import type { Role } from "@/lib/auth/roles";
-import type { BuildAuthorship } from "@/lib/release/approvals";
-import { pilotGate, productionGate, reviewGate, roleRequirement, validationGate, type GateRequirement, type SoundVerdict } from "@/lib/release/gates";
-import { soundGateIssues } from "@/lib/release/measurements";
-import type { Stage } from "@/lib/release/stages";
-import { capabilityFor, nextStage } from "@/lib/release/transitions";
+import { AppError } from "@/lib/api/errors";
+import { can, type Role } from "@/lib/auth/roles";
+import { reviewerEligibility, type BuildAuthorship } from "@/lib/release/approvals";
+import { gateOpen, pilotGate, productionGate, reviewGate, roleRequirement, validationGate, type GateRequirement, type SoundVerdict } from "@/lib/release/gates";
+import { soundGateIssues, soundGateSummary } from "@/lib/release/measurements";
+import { STAGE_LABELS, type Stage } from "@/lib/release/stages";
+import { capabilityFor, nextStage, transitionShapeError } from "@/lib/release/transitions";
 import { env } from "@/lib/platform/env";
 import { checkStoredBuild } from "./check";
 import { measurementComparison } from "./measurements";
@@ -22,7 +23,7 @@ async function soundVerdict(db: Executor, build: Build): Promise<SoundVerdict> {
   const comparison = await measurementComparison(db, build);
   if (comparison.state !== "ok") return comparison;
   const issues = soundGateIssues(comparison.rows, comparison.toleranceDb);
-  return { state: "ok", issues, summary: `All ${comparison.rows.length} measured points are within ${comparison.toleranceDb} dB of the estimate.` };
+  return { state: "ok", issues, summary: soundGateSummary(comparison.rows, comparison.toleranceDb) };
 }
 
 /**
@@ -56,4 +57,30 @@ export async function nextGate(db: Executor, build: Build, viewer: { role: Role 
   const to = nextStage(build.stage);
   if (!to) return null;
   return { to, requirements: await gateRequirements(db, build, to, viewer) };
+}
+
+/**
+ * The build page's checklist for `viewer`: the next stage's requirements with their states
+ * (from `gateRequirements`, the function promotions are judged by), whether all hold, and
+ * whether the viewer may review the build now (so only eligible reviewers see Approve).
+ */
+export async function buildGate(db: Executor, { id }: { id: string }, viewer: { userId: string; role: Role }) {
+  const build = await getBuildRow(db, { id });
+  if (!build) throw new AppError("not_found", "No build with that id.");
+  const next = await nextGate(db, build, viewer);
+  const [authorship, reviews] = await Promise.all([buildAuthorship(db, build), listReviews(db, { buildId: id })]);
+  const own = reviews.find((r) => r.reviewerUserId === viewer.userId) ?? null;
+  const eligibility = reviewerEligibility({ userId: viewer.userId, role: viewer.role, disabledAt: null }, authorship);
+  const reviewReason =
+    build.stage !== "review"
+      ? `Reviews are taken while the build is in review; it is in ${STAGE_LABELS[build.stage].toLowerCase()}.`
+      : !eligibility.counts
+        ? (eligibility.reason ?? "You may not review this build.").replace(/^The reviewer/, "You")
+        : null;
+  return {
+    stage: build.stage,
+    next: next ? { ...next, ready: gateOpen(next.requirements) } : null,
+    review: { mayReview: reviewReason === null, reason: reviewReason, ownReviewId: own?.id ?? null, ownVerdict: own?.verdict ?? null },
+    mayWithdraw: can(viewer.role, "build:withdraw") && transitionShapeError(build.stage, "withdrawn") === null,
+  };
 }

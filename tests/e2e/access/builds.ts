@@ -14,6 +14,7 @@ export const buildRows: AccessRow[] = [
   { file: "app/api/v1/builds/route.ts", kind: "api", method: "POST", url: "/api/v1/builds", body: { version: "x" }, allowed: CREATE, ok: 422 },
   { file: "app/api/v1/builds/options/route.ts", kind: "api", method: "GET", url: "/api/v1/builds/options", allowed: CREATE },
   { file: "app/api/v1/builds/[id]/route.ts", kind: "api", method: "GET", url: `/api/v1/builds/${ANY_UUID}`, allowed: "all", ok: 404 },
+  { file: "app/api/v1/builds/[id]/gate/route.ts", kind: "api", method: "GET", url: `/api/v1/builds/${ANY_UUID}/gate`, allowed: "all", ok: 404 },
   { file: "app/api/v1/builds/[id]/transitions/route.ts", kind: "api", method: "POST", url: `/api/v1/builds/${ANY_UUID}/transitions`, body: { from: "nowhere" }, allowed: CREATE, ok: 422 },
   { file: "app/api/v1/builds/[id]/reviews/route.ts", kind: "api", method: "POST", url: `/api/v1/builds/${ANY_UUID}/reviews`, body: { verdict: "maybe" }, allowed: REVIEW, ok: 422 },
   { file: "app/api/v1/builds/[id]/reviews/[reviewId]/route.ts", kind: "api", method: "PATCH", url: `/api/v1/builds/${ANY_UUID}/reviews/${ANY_UUID}`, body: { verdict: "maybe" }, allowed: REVIEW, ok: 422 },

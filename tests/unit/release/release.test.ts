@@ -78,27 +78,27 @@ describe("measurements against the estimate", () => {
   };
 
   it("estimates two equal 40 dB sources at their reference speeds as 43.01 dB (incoherent sum; ASHRAE Fundamentals, 'Sound and Vibration')", () => {
-    const [row] = compareMeasurements([{ liquidTempC: 40, pumpRpm: 2900, fanRpm: 2000, soundDbA: 44 }], hw, 3);
+    const [row] = compareMeasurements([{ liquidTempC: 40, pumpRpm: 2900, fanRpm: 2000, soundDbA: 44, backgroundDbA: null }], hw, 3);
     expect(row!.estimatedDbA).toBeCloseTo(43.01, 2);
     expect(row!.deltaDb).toBeCloseTo(0.99, 2);
     expect(row!.withinTolerance).toBe(true);
   });
 
   it("scales the fan by 50·log10(N2/N1): halving its speed takes 15.05 dB off it (fan-law sound scaling; ASHRAE HVAC Systems and Equipment, 'Fans')", () => {
-    const [row] = compareMeasurements([{ liquidTempC: 40, pumpRpm: 2900, fanRpm: 1000, soundDbA: 40 }], hw, 3);
+    const [row] = compareMeasurements([{ liquidTempC: 40, pumpRpm: 2900, fanRpm: 1000, soundDbA: 40, backgroundDbA: null }], hw, 3);
     const fanDb = 40 - 50 * Math.log10(2);
     expect(row!.estimatedDbA).toBeCloseTo(10 * Math.log10(10 ** (fanDb / 10) + 10 ** 4), 6);
     expect(fanDb).toBeCloseTo(24.95, 2);
   });
 
   it("fails the gate beyond the tolerance and names the worst point", () => {
-    const rows = compareMeasurements([{ liquidTempC: 40, pumpRpm: 2900, fanRpm: 2000, soundDbA: 47.5 }], hw, 3);
+    const rows = compareMeasurements([{ liquidTempC: 40, pumpRpm: 2900, fanRpm: 2000, soundDbA: 47.5, backgroundDbA: null }], hw, 3);
     expect(rows[0]!.withinTolerance).toBe(false);
-    expect(soundGateIssues(rows, 3)[0]).toMatch(/1 of 1 .* more than 3 dB .*47\.5 dB\(A\) measured against 43\.0 estimated at pump 2900 RPM, fans 2000 RPM/);
+    expect(soundGateIssues(rows, 3)[0]).toMatch(/1 of 1 comparable .* more than 3 dB .*47\.5 dB\(A\) after background correction against 43\.0 estimated at pump 2900 RPM, fans 2000 RPM/);
   });
 
   it("parses the lab CSV and names bad lines", () => {
-    expect(parseMeasurementsCsv(`${MEASUREMENT_HEADER}\n40,2000,1200,31.5\n`)).toEqual({ ok: true, rows: [{ liquidTempC: 40, pumpRpm: 2000, fanRpm: 1200, soundDbA: 31.5 }] });
+    expect(parseMeasurementsCsv(`${MEASUREMENT_HEADER}\n40,2000,1200,31.5\n`)).toEqual({ ok: true, rows: [{ liquidTempC: 40, pumpRpm: 2000, fanRpm: 1200, soundDbA: 31.5, backgroundDbA: null }] });
     const bad = parseMeasurementsCsv(`${MEASUREMENT_HEADER}\n40,2000,1200\n40,abc,1200,30\n`);
     expect(bad).toEqual({ ok: false, errors: ["Line 2: expected 4 values, found 3.", "Line 3: pump_rpm must be a number from 0 to 20000."] });
     expect(parseMeasurementsCsv("temp,rpm\n1,2").ok).toBe(false);
