@@ -26,7 +26,8 @@ export function ImportButton({ profileId, onImported }: { profileId: string; onI
         setError({ message: body?.error?.message ?? `The server answered ${res.status}.`, issues: body?.error?.issues } as AppError);
         return;
       }
-      onImported(`${JSON.stringify(JSON.parse(text), null, 2)}\n`, body?.draftRevision ?? 0);
+      // The server keeps the file as written; the editor shows the same text.
+      onImported(text, body?.draftRevision ?? 0);
     } catch {
       setError({ message: "Could not read or send the file." } as AppError);
     } finally {
