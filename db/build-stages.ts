@@ -3,6 +3,7 @@ import { and, eq } from "drizzle-orm";
 import { buildReviews, builds, buildTransitions, type Build, type BuildStage } from "./schema";
 import type { Database, Tx } from "./client";
 import { recordAudit, type AuditActor } from "./audit";
+import { signBuildBank } from "./bank-signatures";
 import { enqueueMail } from "./mail";
 import { AppError } from "@/lib/api/errors";
 import type { OutgoingMail } from "@/lib/release/mail";
@@ -51,6 +52,8 @@ export async function transitionBuild(db: Database, actor: Actor, input: Transit
     if (input.to === "withdrawn") patch.withdrawnReason = input.reason ?? null;
     if (input.to === "production") patch.releaseNotes = input.releaseNotes ?? null;
     await tx.update(builds).set(patch).where(eq(builds.id, build.id));
+    // The bank a pilot run flashes is signed now, in the same transaction as the move.
+    if (input.to === "pilot") await signBuildBank(tx, build);
     const [transition] = await tx
       .insert(buildTransitions)
       .values({ buildId: build.id, fromStage: build.stage, toStage: input.to, actorUserId: actor.userId, reason: input.reason ?? input.releaseNotes ?? null })

@@ -24,6 +24,7 @@ const buildSummary = {
   bankBytes: builds.bankBytes,
   bankSha256: builds.bankSha256,
   bankCrc32: builds.bankCrc32,
+  bankSignatureKeyId: builds.bankSignatureKeyId,
   releaseNotes: builds.releaseNotes,
   waiverReason: builds.waiverReason,
   withdrawnReason: builds.withdrawnReason,
@@ -62,7 +63,7 @@ export async function getBuildRow(db: Executor, { id }: { id: string }) {
 }
 
 export async function getBuildImage(db: Executor, { id }: { id: string }) {
-  const [row] = await db.select({ bankImage: builds.bankImage, version: builds.version, boardModelId: builds.boardModelId, revisionRange: builds.revisionRange }).from(builds).where(eq(builds.id, id)).limit(1);
+  const [row] = await db.select({ bankImage: builds.bankImage, bankSignature: builds.bankSignature, bankSignatureKeyId: builds.bankSignatureKeyId, version: builds.version, boardModelId: builds.boardModelId, revisionRange: builds.revisionRange }).from(builds).where(eq(builds.id, id)).limit(1);
   return row;
 }
 

@@ -278,6 +278,9 @@ export const builds = pgTable(
     bankBytes: integer("bank_bytes"),
     bankSha256: text("bank_sha256"),
     bankCrc32: bigint("bank_crc32", { mode: "number" }),
+    /** Ed25519 signature of bank_image, made when the build enters pilot (docs/bank-format.md). */
+    bankSignature: bytea("bank_signature"),
+    bankSignatureKeyId: text("bank_signature_key_id"),
     releaseNotes: text("release_notes"),
     waiverReason: text("waiver_reason"),
     withdrawnReason: text("withdrawn_reason"),
@@ -292,6 +295,24 @@ export const builds = pgTable(
     index("builds_lab_report_idx").on(t.labReportUploadId),
     index("builds_measurements_idx").on(t.measurementsUploadId),
     check("builds_withdrawn_has_reason", sql`${t.stage} <> 'withdrawn' or ${t.withdrawnReason} is not null`),
+    check("builds_signature_has_key", sql`(${t.bankSignature} is null) = (${t.bankSignatureKeyId} is null)`),
+  ],
+);
+
+/** Public keys that bank signatures of a board model verify with; a rotated key keeps its row, closed by valid_until. */
+export const bankSigningKeys = pgTable(
+  "bank_signing_keys",
+  {
+    boardModelId: uuid("board_model_id").notNull().references(() => boardModels.id),
+    keyId: text("key_id").notNull(),
+    publicKeyPem: text("public_key_pem").notNull(),
+    validFrom: timestamp("valid_from", { withTimezone: true }).notNull().defaultNow(),
+    validUntil: timestamp("valid_until", { withTimezone: true }),
+  },
+  (t) => [
+    primaryKey({ columns: [t.boardModelId, t.keyId] }),
+    index("bank_signing_keys_board_idx").on(t.boardModelId),
+    check("bank_signing_keys_key_id_hex", sql`${t.keyId} ~ '^[0-9a-f]{16}$'`),
   ],
 );
 

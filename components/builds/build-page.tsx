@@ -53,9 +53,12 @@ export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string
                 <dd className="font-mono">{build.bankCrc32 !== null ? hex32(build.bankCrc32) : "—"}</dd>
                 <dt className="text-ink-600">SHA-256 (.bin)</dt>
                 <dd className="break-all font-mono text-xs" data-testid="bank-sha256">{build.bankSha256 ?? "—"}</dd>
+                <dt className="text-ink-600">Ed25519 signature</dt>
+                <dd data-testid="bank-signature">{build.bankSignatureKeyId ? <>signed by key <code className="text-xs">{build.bankSignatureKeyId}</code></> : "not signed yet (signed when the build enters pilot)"}</dd>
               </dl>
               <div className="mt-3 flex flex-wrap gap-2 text-sm">
                 <a href={`/api/v1/builds/${build.id}/bank?format=bin`} download>Download .bin</a>
+                {build.bankSignatureKeyId && <a href={`/api/v1/builds/${build.id}/bank?format=sig`} download>Download .sig</a>}
                 {hexRevisions.map((r) => (
                   <a key={r.revision} href={`/api/v1/builds/${build.id}/bank?format=hex&revision=${encodeURIComponent(r.revision)}`} download>
                     Download .hex at 0x{r.baseAddress.toString(16).toUpperCase()} (revision {r.revision})

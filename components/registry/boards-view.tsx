@@ -9,6 +9,7 @@ import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { BoardModelForm, BoardRevisionForm } from "./board-forms";
+import { BoardSigningKeys } from "./board-signing-keys";
 
 const hex = (n: number) => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
 
@@ -75,6 +76,7 @@ export function BoardsView({ canWrite }: { canWrite: boolean }) {
               ))}
             </tbody>
           </Table>
+          <BoardSigningKeys boardModelId={b.id} boardName={b.name} />
         </Panel>
       ))}
       {canWrite && q.data && (

@@ -9,6 +9,7 @@ import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { checkBuild } from "@/lib/release/build-check";
 import { MEASUREMENT_HEADER } from "@/lib/release/measurements";
 import { DEMO_BOARD } from "./hardware";
+import { signBuildBank } from "../bank-signatures";
 
 type Db = Database;
 
@@ -231,6 +232,8 @@ export async function seedBuilds(db: Db) {
         })
         .returning({ id: builds.id });
       const buildId = b!.id;
+      // Builds that reached pilot carry the bank signature made at that move.
+      if (reachedIndex >= PATH.indexOf("pilot")) await signBuildBank(tx, { id: buildId, boardModelId: board.id, bankImage: Buffer.from(check.image) });
       await tx.insert(buildSlots).values(versions.map((v, slotIndex) => ({ buildId, slotIndex, profileVersionId: v.pv.id })));
       if (reachedIndex >= 1) {
         const approvers = reachedIndex >= 2 ? reviewers : reviewers.slice(0, 1);

@@ -1,6 +1,7 @@
 import { and, eq, sql } from "drizzle-orm";
 import type { Database } from "../client";
 import { boardModels, boardRevisions, buildSlots, builds, coolerModels, productionLots, profileVersions, profiles, users, type Build, type ProfileVersion } from "../schema";
+import { signBuildBank } from "../bank-signatures";
 import { contentHashHex, crc32, encodeBank, sha256, toHex, type CoolingProfile } from "@/lib/engine";
 import { satisfiesRange, compareVersions } from "@/lib/versioning/semver-helpers";
 import { DEMO_BOARD } from "./hardware";
@@ -147,6 +148,8 @@ export async function seedSupport(db: Database) {
         .onConflictDoNothing()
         .returning();
       if (row) await tx.insert(buildSlots).values(slotVersions.map((v, i) => ({ buildId: row.id, slotIndex: i, profileVersionId: v!.id })));
+      // Builds that reached pilot carry the bank signature made at that move.
+      if (row && ["pilot", "production", "withdrawn"].includes(b.stage)) await signBuildBank(tx, { id: row.id, boardModelId: board.id, bankImage: Buffer.from(image) });
       return row;
     });
     if (created) byBuild.set(b.version, created);

@@ -39,6 +39,8 @@ export interface BuildDetail {
     authorEmail: string;
     bankSha256: string | null;
     bankCrc32: number | null;
+    /** Key id of the Ed25519 bank signature made at pilot; null while unsigned. */
+    bankSignatureKeyId: string | null;
     releaseNotes: string | null;
     waiverReason: string | null;
     withdrawnReason: string | null;
@@ -253,13 +255,13 @@ export const uploadEvidence = defineOperation({
   successStatus: 201,
 });
 
-export const bankQuery = z.strictObject({ format: z.enum(["bin", "hex"]).default("bin"), revision: z.string().max(40).optional() });
+export const bankQuery = z.strictObject({ format: z.enum(["bin", "hex", "sig"]).default("bin"), revision: z.string().max(40).optional() });
 
 export const downloadBank = defineOperation({
   id: "downloadBank",
   method: "GET",
   path: "/api/v1/builds/{id}/bank",
-  summary: "The build's bank image as .bin, or Intel HEX at a revision's base address",
+  summary: "The build's bank image as .bin, Intel HEX at a revision's base address, or its Ed25519 signature block (.sig, from pilot on)",
   tag: "Builds",
   access: "read",
   params: idParams,

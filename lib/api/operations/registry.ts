@@ -140,6 +140,19 @@ export const createBoardRevision = defineOperation({
   successStatus: 201,
 });
 
+export const signingKeyView = z.object({ keyId: z.string(), publicKeyPem: z.string(), validFrom: z.string(), validUntil: z.string().nullable() });
+
+export const listBoardSigningKeys = defineOperation({
+  id: "listBoardSigningKeys",
+  method: "GET",
+  path: "/api/v1/board-models/{id}/signing-keys",
+  summary: "The Ed25519 public keys a board model's bank signatures verify with, and when each was in use (rotated keys stay listed)",
+  tag: "Registry",
+  access: "read",
+  params: idParams,
+  response: z.object({ keys: z.array(signingKeyView) }),
+});
+
 export const getBoardRevision = defineOperation({
   id: "getBoardRevision",
   method: "GET",

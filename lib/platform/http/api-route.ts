@@ -6,12 +6,11 @@ import { AppError, type FieldIssue } from "@/lib/api/errors";
 import type { Operation } from "@/lib/api/operation";
 import { can } from "@/lib/auth/roles";
 import { getSessionActor, getTokenActor, type Actor } from "@/lib/platform/auth/actor";
-import { getDb } from "@/db/client";
-import { hitRateLimit, pruneRateLimits } from "@/db/rate-limit";
 import { fromDbError } from "@/lib/platform/http/db-errors";
 import { env } from "@/lib/platform/env";
 import { logger } from "@/lib/platform/log";
 import { readCappedBody } from "@/lib/platform/http/raw-body";
+import { enforceRequestBudget } from "@/lib/platform/http/rate-limit";
 
 const DEFAULT_MAX_BODY = 256 * 1024;
 
@@ -62,17 +61,6 @@ function checkOrigin(req: NextRequest): void {
   if (!allowed.has(origin)) throw new AppError("forbidden", "Cross-site requests are not accepted.");
 }
 
-/** Per-token (machine clients) or per-account (people) request budget; 429 with Retry-After past it. */
-async function enforceRateLimit(actor: Actor): Promise<void> {
-  const { count, retryAfterSec } = actor.rate ?? (await hitRateLimit(getDb(), { key: `user:${actor.userId}` }));
-  if (Math.random() < 0.001) void pruneRateLimits(getDb()).catch(() => undefined);
-  if (count > env().API_RATE_LIMIT_PER_MIN) {
-    throw new AppError("rate_limited", `Too many requests: at most ${env().API_RATE_LIMIT_PER_MIN} a minute. Try again in ${retryAfterSec} s.`, {
-      headers: { "retry-after": String(retryAfterSec) },
-    });
-  }
-}
-
 export async function resolveActor(req: NextRequest): Promise<Actor | null> {
   const auth = req.headers.get("authorization");
   if (auth) return getTokenActor(auth);
@@ -111,7 +99,7 @@ export function apiRoute<Q extends z.ZodType, B extends z.ZodType, P extends z.Z
           throw new AppError("forbidden", `Your role (${actor.role}) may not do this.`);
         }
         if (actor.via === "session" && op.method !== "GET") checkOrigin(req);
-        await enforceRateLimit(actor);
+        await enforceRequestBudget(actor);
       }
       const rawParams: unknown = (await routeCtx?.params) ?? {};
       const params = op.params ? parseWith(op.params, rawParams, "path") : undefined;

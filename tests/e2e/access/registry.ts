@@ -22,6 +22,7 @@ export const registryRows: AccessRow[] = [
   { file: "app/api/v1/board-revisions/[id]/route.ts", kind: "api", method: "PUT", url: `/api/v1/board-revisions/${ANY_UUID}`, body: { revision: "x" }, allowed: WRITERS, ok: 422 },
   { file: "app/api/v1/board-models/route.ts", kind: "api", method: "GET", url: "/api/v1/board-models", allowed: "all" },
   { file: "app/api/v1/board-models/route.ts", kind: "api", method: "POST", url: "/api/v1/board-models", body: { name: "" }, allowed: WRITERS, ok: 422 },
+  { file: "app/api/v1/board-models/[id]/signing-keys/route.ts", kind: "api", method: "GET", url: `/api/v1/board-models/${ANY_UUID}/signing-keys`, allowed: "all" },
   { file: "app/api/v1/board-models/[id]/revisions/route.ts", kind: "api", method: "POST", url: `/api/v1/board-models/${ANY_UUID}/revisions`, body: { revision: "x" }, allowed: WRITERS, ok: 422 },
   { file: "app/api/v1/board-revisions/[id]/route.ts", kind: "api", method: "GET", url: `/api/v1/board-revisions/${ANY_UUID}`, allowed: "all", ok: 404 },
   { file: "app/api/v1/profiles/route.ts", kind: "api", method: "GET", url: "/api/v1/profiles?sort=updatedAt&dir=desc", allowed: "all" },
