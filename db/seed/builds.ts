@@ -218,7 +218,8 @@ export async function seedBuilds(db: Db) {
           boardModelId: board.id,
           version: demo.version,
           revisionRange: demo.range,
-          stage: demo.stage,
+          // Withdrawn is set after signing: the database refuses any change to a withdrawn build.
+          stage: demo.stage === "withdrawn" ? reached : demo.stage,
           authorUserId: engineer,
           firmwareUploadId,
           labReportUploadId,
@@ -234,6 +235,7 @@ export async function seedBuilds(db: Db) {
       const buildId = b!.id;
       // Builds that reached pilot carry the bank signature made at that move.
       if (reachedIndex >= PATH.indexOf("pilot")) await signBuildBank(tx, { id: buildId, boardModelId: board.id, bankImage: Buffer.from(check.image) });
+      if (demo.stage === "withdrawn") await tx.update(builds).set({ stage: "withdrawn" }).where(eq(builds.id, buildId));
       await tx.insert(buildSlots).values(versions.map((v, slotIndex) => ({ buildId, slotIndex, profileVersionId: v.pv.id })));
       if (reachedIndex >= 1) {
         const approvers = reachedIndex >= 2 ? reviewers : reviewers.slice(0, 1);

@@ -136,7 +136,9 @@ export async function seedSupport(db: Database) {
           boardModelId: board.id,
           version: b.version,
           revisionRange: b.revisionRange,
-          stage: b.stage,
+          // A withdrawn build is written as it was when signed (pilot or later) and withdrawn after:
+          // the database refuses any change to a withdrawn build, the signature included.
+          stage: b.stage === "withdrawn" ? "production" : b.stage,
           authorUserId: releaser.id,
           bankImage: image,
           bankBytes: image.length,
@@ -150,6 +152,7 @@ export async function seedSupport(db: Database) {
       if (row) await tx.insert(buildSlots).values(slotVersions.map((v, i) => ({ buildId: row.id, slotIndex: i, profileVersionId: v!.id })));
       // Builds that reached pilot carry the bank signature made at that move.
       if (row && ["pilot", "production", "withdrawn"].includes(b.stage)) await signBuildBank(tx, { id: row.id, boardModelId: board.id, bankImage: Buffer.from(image) });
+      if (row && b.stage === "withdrawn") await tx.update(builds).set({ stage: "withdrawn" }).where(eq(builds.id, row.id));
       return row;
     });
     if (created) byBuild.set(b.version, created);
