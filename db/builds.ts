@@ -56,6 +56,12 @@ export async function getBuild(db: Executor, { id }: { id: string }) {
   return row;
 }
 
+/** The build's own row (without joins), as gates judge it. */
+export async function getBuildRow(db: Executor, { id }: { id: string }) {
+  const [row] = await db.select().from(builds).where(eq(builds.id, id)).limit(1);
+  return row;
+}
+
 export async function getBuildImage(db: Executor, { id }: { id: string }) {
   const [row] = await db.select({ bankImage: builds.bankImage, bankSignature: builds.bankSignature, bankSignatureKeyId: builds.bankSignatureKeyId, version: builds.version, boardModelId: builds.boardModelId, revisionRange: builds.revisionRange }).from(builds).where(eq(builds.id, id)).limit(1);
   return row;
@@ -144,7 +150,20 @@ export async function loadSlotFacts(db: Executor, { ids, boardModelId }: { ids: 
 
 export async function listReviews(db: Executor, { buildId }: { buildId: string }) {
   return db
-    .select({ id: buildReviews.id, reviewerUserId: buildReviews.reviewerUserId, reviewerName: users.name, reviewerEmail: users.email, verdict: buildReviews.verdict, comment: buildReviews.comment, resolvedAt: buildReviews.resolvedAt, createdAt: buildReviews.createdAt })
+    .select({
+      id: buildReviews.id,
+      reviewerUserId: buildReviews.reviewerUserId,
+      reviewerName: users.name,
+      reviewerEmail: users.email,
+      // The reviewer's account as it is now: the gate counts only active reviewers who still may review.
+      reviewerRole: users.role,
+      reviewerDisabledAt: users.disabledAt,
+      verdict: buildReviews.verdict,
+      comment: buildReviews.comment,
+      resolvedAt: buildReviews.resolvedAt,
+      createdAt: buildReviews.createdAt,
+      updatedAt: buildReviews.updatedAt,
+    })
     .from(buildReviews)
     .innerJoin(users, eq(users.id, buildReviews.reviewerUserId))
     .where(eq(buildReviews.buildId, buildId))

@@ -112,7 +112,7 @@ export async function getProfileDetail(db: Executor, { id }: { id: string }) {
   const versions = await listVersionsOfProfile(db, { profileId: id });
   const p = row.profile;
   return {
-    profile: { id: p.id, name: p.name, description: p.description, ownerName: row.ownerName, draftText: draftTextOf(p), lastPlottableDraftText: lastPlottableDraftOf(p), draftUpdatedAt: p.draftUpdatedAt?.toISOString() ?? null },
+    profile: { id: p.id, name: p.name, description: p.description, ownerName: row.ownerName, draftText: draftTextOf(p), lastPlottableDraftText: lastPlottableDraftOf(p), draftUpdatedAt: p.draftUpdatedAt?.toISOString() ?? null, draftRevision: p.draftRevision },
     cooler: {
       id: hw.cooler.id,
       name: hw.cooler.name,
@@ -132,18 +132,37 @@ export async function getProfileDetail(db: Executor, { id }: { id: string }) {
  * Saves the working draft as the exact text typed (even when it is not valid JSON yet), so
  * nothing typed is lost or reordered. When the text passes the schema it is also kept as the
  * draft's last plottable document, which the editor plots (greyed) while the text is broken.
+ * Optimistic concurrency: the caller says which draft revision its text is based on; if
+ * someone saved since, the save is refused (409) naming who, so nobody overwrites another's
+ * work unseen. `baseRevision` undefined replaces the draft outright (an explicit import).
  */
-export async function saveDraft(db: Database, actor: AuditActor, { id, text }: { id: string; text: string }) {
+export async function saveDraft(db: Database, actor: AuditActor & { userId: string }, { id, text, baseRevision }: { id: string; text: string; baseRevision?: number }) {
   const plottable = validateProfileText(text).value;
   return db.transaction(async (tx) => {
+    const [current] = await tx
+      .select({ draftRevision: profiles.draftRevision, draftUpdatedAt: profiles.draftUpdatedAt, savedBy: users.name })
+      .from(profiles)
+      .leftJoin(users, eq(users.id, profiles.draftSavedByUserId))
+      .where(eq(profiles.id, id))
+      .for("update", { of: profiles });
+    if (!current) throw new AppError("not_found", "No such profile.");
+    if (baseRevision !== undefined && baseRevision !== current.draftRevision) {
+      const who = current.savedBy ?? "Someone";
+      const when = current.draftUpdatedAt ? ` at ${current.draftUpdatedAt.toISOString().slice(11, 16)} UTC` : "";
+      throw new AppError(
+        "conflict",
+        `${who} saved this draft${when} after you loaded it (draft revision ${current.draftRevision}, yours is based on ${baseRevision}). Compare your text with theirs or reload it before saving again.`,
+      );
+    }
     const now = new Date();
-    const res = await tx
+    const draftRevision = current.draftRevision + 1;
+    await tx
       .update(profiles)
-      .set({ draftText: text, ...(plottable ? { draftDocument: plottable } : {}), draftUpdatedAt: now, updatedAt: now }).where(eq(profiles.id, id)).returning({ id: profiles.id });
-    if (res.length === 0) throw new AppError("not_found", "No such profile.");
+      .set({ draftText: text, ...(plottable ? { draftDocument: plottable } : {}), draftUpdatedAt: now, updatedAt: now, draftRevision, draftSavedByUserId: actor.userId })
+      .where(eq(profiles.id, id));
     // The draft itself is not repeated in the log: autosave runs on every pause in typing.
-    await recordAudit(tx, actor, { action: "profile.draft_save", entityType: "profile", entityId: id, after: { bytes: text.length } });
-    return { draftUpdatedAt: now.toISOString() };
+    await recordAudit(tx, actor, { action: "profile.draft_save", entityType: "profile", entityId: id, after: { bytes: text.length, draftRevision } });
+    return { draftUpdatedAt: now.toISOString(), draftRevision };
   });
 }
 

@@ -201,12 +201,17 @@ export const profiles = pgTable(
      */
     draftDocument: jsonb("draft_document"),
     draftUpdatedAt: timestamp("draft_updated_at", { withTimezone: true }),
+    /** Bumped on every draft save: a save based on an older number is refused (optimistic concurrency). */
+    draftRevision: integer("draft_revision").notNull().default(0),
+    /** Who saved the draft last, so a refused stale save can say who saved in between. */
+    draftSavedByUserId: uuid("draft_saved_by_user_id").references(() => users.id),
     ...timestamps,
   },
   (t) => [
     uniqueIndex("profiles_cooler_name_key").on(t.coolerModelId, t.name),
     index("profiles_cooler_idx").on(t.coolerModelId),
     index("profiles_owner_idx").on(t.ownerUserId),
+    index("profiles_draft_saved_by_idx").on(t.draftSavedByUserId),
   ],
 );
 
@@ -337,8 +342,15 @@ export const buildReviews = pgTable(
     /** A change request stays open until the author resolves it. */
     resolvedAt: timestamp("resolved_at", { withTimezone: true }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    /** Set when the reviewer changes their verdict (an explicit update, never a second row). */
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index("build_reviews_build_idx").on(t.buildId), index("build_reviews_reviewer_idx").on(t.reviewerUserId)],
+  (t) => [
+    index("build_reviews_build_idx").on(t.buildId),
+    index("build_reviews_reviewer_idx").on(t.reviewerUserId),
+    // One review per reviewer per build: a second approval is a mistake, not a second vote.
+    uniqueIndex("build_reviews_build_reviewer_key").on(t.buildId, t.reviewerUserId),
+  ],
 );
 
 export const buildTransitions = pgTable(

@@ -85,7 +85,7 @@ export const DEMO_PROFILES: DemoProfile[] = [
       },
       {
         version: "2.0.0",
-        boardRange: ">=0.9.0 <1.0.0 || >=2.0.0",
+        boardRange: ">=2.0.0",
         changelog: "Sixteen-point curves for smoother steps; flash-page boards only.",
         document: doc("Surge", "Full cooling for sustained loads, fine steps.", sixteen(60), sixteen(40)),
       },
@@ -133,7 +133,7 @@ export async function seedRegistry(db: Database): Promise<void> {
     const have = new Set((await db.select({ v: profileVersions.version }).from(profileVersions).where(eq(profileVersions.profileId, profile.id))).map((r) => r.v));
     for (const v of p.versions) {
       if (have.has(v.version)) continue;
-      await publishVersion(db, { userId: owner.id, label: `${owner.email} (demo seed)` }, { profileId: profile.id, version: v.version, changelog: v.changelog, boardRange: v.boardRange, text: documentText(v.document) });
+      await publishVersion(db, { userId: owner.id, role: owner.role, label: `${owner.email} (demo seed)` }, { profileId: profile.id, version: v.version, changelog: v.changelog, boardRange: v.boardRange, text: documentText(v.document) });
     }
   }
 }

@@ -138,6 +138,8 @@ export async function seedSupport(db: Database) {
           boardModelId: board.id,
           version: b.version,
           revisionRange: b.revisionRange,
+          // A withdrawn build is written as it was when signed (pilot or later) and withdrawn after:
+          // the database refuses any change to a withdrawn build, the signature included.
           stage: b.stage,
           authorUserId: releaser.id,
           bankImage: image,

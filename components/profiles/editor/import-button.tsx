@@ -9,7 +9,7 @@ import { Notice } from "@/components/ui/notice";
 import { buttonClass } from "@/components/ui/button";
 
 /** Uploads a .json profile; the server validates it and replaces the draft, then the editor shows it. */
-export function ImportButton({ profileId, onImported }: { profileId: string; onImported: (text: string) => void }) {
+export function ImportButton({ profileId, onImported }: { profileId: string; onImported: (text: string, draftRevision: number) => void }) {
   const input = useRef<HTMLInputElement>(null);
   const [error, setError] = useState<AppError | null>(null);
   const [busy, setBusy] = useState(false);
@@ -22,8 +22,9 @@ export function ImportButton({ profileId, onImported }: { profileId: string; onI
     setBusy(true);
     try {
       const text = await file.text();
-      await apiCall(importDraft, { params: { id: profileId }, raw: { data: text, contentType: "application/json" } });
-      onImported(`${JSON.stringify(JSON.parse(text), null, 2)}\n`);
+      const saved = await apiCall(importDraft, { params: { id: profileId }, raw: { data: text, contentType: "application/json" } });
+      // The server keeps the file as written; the editor shows the same text.
+      onImported(text, saved.draftRevision);
     } catch (err) {
       setError(err instanceof AppError ? err : new AppError("bad_request", "Could not read or send the file."));
     } finally {

@@ -25,6 +25,7 @@ import { ProblemsList } from "./problems-list";
 import { PublishPanel } from "./publish-panel";
 import { useAutosave } from "./use-autosave";
 import { useLastPlotted } from "./use-last-plotted";
+import { DraftConflict } from "./draft-conflict";
 import { VersionHistory } from "./version-history";
 
 // Monaco is heavy: it loads on this route only, in the browser only. The live plot is our own
@@ -76,7 +77,8 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
   const plotted = useLastPlotted(evaluation, hw, profile.lastPlottableDraftText);
   const deferredEvaluation = useDeferredValue(evaluation);
   const deferredHw = useDeferredValue(hw);
-  const save = useAutosave(profile.id, text, canWrite);
+  const { state: save, adopt, keepMine } = useAutosave(profile.id, text, canWrite, profile.draftRevision);
+  const replaceText = (t: string) => (editor.current ? editor.current.setText(t) : setText(t));
   const editing = useCurveEditing(editor, evaluation?.profile, hw, canWrite);
   const [operatingInputs, setOperatingInputs] = useState<OperatingInputs>({ heatLoadW: "200", ambientC: "25" });
   // The operating point follows every drag step (one bisection, well under a millisecond).
@@ -157,13 +159,30 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
                 {save.kind === "saved" && "Draft saved"}
                 {save.kind === "error" && <span className="text-signal-fault">Draft not saved: {save.message}</span>}
               </span>
-              <ImportButton profileId={profile.id} onImported={(t) => (editor.current ? editor.current.setText(t) : setText(t))} />
+              <ImportButton
+                profileId={profile.id}
+                onImported={(t, draftRevision) => {
+                  adopt(t, draftRevision);
+                  replaceText(t);
+                }}
+              />
             </>
           ) : (
             <span className="text-ink-600">Read only: your role may not edit profiles.</span>
           )}
         </div>
       </div>
+      {save.kind === "conflict" && (
+        <DraftConflict
+          conflict={save}
+          mine={text}
+          onTakeTheirs={(theirs, draftRevision) => {
+            adopt(theirs, draftRevision);
+            replaceText(theirs);
+          }}
+          onKeepMine={keepMine}
+        />
+      )}
       {!chosen.own && (
         <Notice tone="info" role="status">
           <span data-testid="evaluating-other-cooler">

@@ -60,6 +60,9 @@ const reviewView = z.object({
   comment: z.string(),
   resolvedAt: timestamp.nullable(),
   createdAt: timestamp,
+  updatedAt: timestamp,
+  /** Whether this review counts toward the approvals now and, if not, why. */
+  standing: z.object({ counts: z.boolean(), reason: z.string().nullable() }),
 });
 
 /** A review row as written (without the reviewer's name). */
@@ -88,8 +91,18 @@ const measurementComparisonView = z.object({
   pumpRpm: z.number(),
   fanRpm: z.number(),
   soundDbA: z.number(),
+  /** The room without the cooler running, dB(A); null when the lab gave none. */
+  backgroundDbA: z.number().nullable(),
   estimatedDbA: z.number(),
-  deltaDb: z.number(),
+  /** Measured minus background, dB; null without a background level. */
+  backgroundDifferenceDb: z.number().nullable(),
+  /** K1 subtracted from the measured level (ISO 3744 background correction), dB; null when not comparable. */
+  correctionDb: z.number().nullable(),
+  /** The cooler's own level after background correction; null when too close to background. */
+  correctedDbA: z.number().nullable(),
+  /** Corrected minus estimated, dB; null when not comparable. */
+  deltaDb: z.number().nullable(),
+  status: z.enum(["within", "above_tolerance", "too_close_to_background"]),
   withinTolerance: z.boolean(),
 });
 
@@ -180,6 +193,35 @@ export const getBuild = defineOperation({
   response: buildDetailView,
 });
 
+export const gateRequirementView = z.object({
+  key: z.string(),
+  label: z.string(),
+  /** "on_promotion": supplied with the promotion itself (release notes), so it does not hold the button back. */
+  state: z.enum(["met", "unmet", "on_promotion"]),
+  detail: z.string(),
+});
+
+export const buildGateView = z.object({
+  stage: stageSchema,
+  /** The next stage on the promotion path with each requirement of its gate; null at the end. */
+  next: z.object({ to: stageSchema, requirements: z.array(gateRequirementView), ready: z.boolean() }).nullable(),
+  /** Whether the signed-in user may review this build now, and why not. */
+  review: z.object({ mayReview: z.boolean(), reason: z.string().nullable(), ownReviewId: z.string().nullable(), ownVerdict: z.enum(["approve", "request_changes"]).nullable() }),
+  mayWithdraw: z.boolean(),
+});
+export type BuildGateView = z.infer<typeof buildGateView>;
+
+export const getBuildGate = defineOperation({
+  id: "getBuildGate",
+  method: "GET",
+  path: "/api/v1/builds/{id}/gate",
+  summary: "The next stage's checklist for the signed-in user, computed by the code that judges the promotion",
+  tag: "Builds",
+  access: "read",
+  params: idParams,
+  response: buildGateView,
+});
+
 export const transitionBody = z.strictObject({
   from: stageSchema,
   to: stageSchema,
@@ -220,6 +262,17 @@ export const reviewBuild = defineOperation({
   body: reviewBody,
   successStatus: 201,
   response: z.object({ review: reviewRecord }),
+});
+
+export const changeReview = defineOperation({
+  id: "changeReview",
+  method: "PATCH",
+  path: "/api/v1/builds/{id}/reviews/{reviewId}",
+  summary: "The reviewer changes their own verdict on a build in review (one review per reviewer)",
+  tag: "Builds",
+  access: "build:review",
+  params: z.strictObject({ id: z.uuid("Not a valid id."), reviewId: z.uuid("Not a valid id.") }),
+  body: reviewBody,
 });
 
 export const resolveReview = defineOperation({

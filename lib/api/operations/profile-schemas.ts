@@ -20,6 +20,8 @@ export const saveDraftBody = z.strictObject({
     .max(MAX_PROFILE_BYTES, "The draft is larger than 256 KiB.")
     // The draft is stored as typed, and PostgreSQL text cannot hold U+0000.
     .refine((t) => !t.includes("\u0000"), "The draft contains a NUL character (U+0000); remove it (in JSON write it as \\u0000 if you mean it)."),
+  /** The draft revision this text was based on (from the profile or the last save); a stale one gets 409. */
+  baseRevision: z.number("Send the draft revision your text is based on.").int().min(0),
 });
 export type SaveDraftBody = z.infer<typeof saveDraftBody>;
 
@@ -91,6 +93,8 @@ export const profileDetailView = z.object({
     /** Set only while draftText does not pass the schema: the last draft that did, for greyed plots. */
     lastPlottableDraftText: z.string().nullable(),
     draftUpdatedAt: z.string().nullable(),
+    /** Send it back as baseRevision when saving the draft. */
+    draftRevision: z.number(),
   }),
   cooler: z.object({ id: z.string(), name: z.string(), fanCount: z.number(), radiatorKPerWAtMinFan: z.number(), radiatorKPerWAtMaxFan: z.number(), boardModelName: z.string() }),
   fan: componentFields,

@@ -55,13 +55,13 @@ export const saveDraft = defineOperation({
   id: "saveDraft",
   method: "PUT",
   path: "/api/v1/profiles/{id}/draft",
-  summary: "Autosave the working draft (may be unfinished)",
+  summary: "Autosave the working draft (may be unfinished); 409 when someone saved since baseRevision",
   tag: "Profiles",
   access: "registry:write",
   params: idParams,
   body: saveDraftBody,
   maxBodyBytes: MAX_PROFILE_BYTES + 1024,
-  response: z.object({ draftUpdatedAt: z.string() }),
+  response: z.object({ draftUpdatedAt: z.string(), draftRevision: z.number() }),
 });
 
 export const importDraft = defineOperation({
@@ -73,7 +73,7 @@ export const importDraft = defineOperation({
   access: "registry:write",
   params: idParams,
   rawBody: { contentTypes: ["application/json"], maxBytes: MAX_PROFILE_BYTES },
-  response: z.object({ draftUpdatedAt: z.string(), warnings: z.number() }),
+  response: z.object({ draftUpdatedAt: z.string(), draftRevision: z.number(), warnings: z.number() }),
 });
 
 export const listVersions = defineOperation({

@@ -28,7 +28,7 @@ export const registryRows: AccessRow[] = [
   { file: "app/api/v1/profiles/route.ts", kind: "api", method: "GET", url: "/api/v1/profiles?sort=updatedAt&dir=desc", allowed: "all" },
   { file: "app/api/v1/profiles/route.ts", kind: "api", method: "POST", url: "/api/v1/profiles", body: { name: "" }, allowed: WRITERS, ok: 422 },
   { file: "app/api/v1/profiles/[id]/route.ts", kind: "api", method: "GET", url: `/api/v1/profiles/${ANY_UUID}`, allowed: "all", ok: 404 },
-  { file: "app/api/v1/profiles/[id]/draft/route.ts", kind: "api", method: "PUT", url: `/api/v1/profiles/${ANY_UUID}/draft`, body: { text: "{}" }, allowed: WRITERS, ok: 404 },
+  { file: "app/api/v1/profiles/[id]/draft/route.ts", kind: "api", method: "PUT", url: `/api/v1/profiles/${ANY_UUID}/draft`, body: { text: "{}", baseRevision: 0 }, allowed: WRITERS, ok: 404 },
   { file: "app/api/v1/profiles/[id]/import/route.ts", kind: "api", method: "POST", url: `/api/v1/profiles/${ANY_UUID}/import`, body: {}, allowed: WRITERS, ok: 404 },
   { file: "app/api/v1/profiles/[id]/versions/route.ts", kind: "api", method: "GET", url: `/api/v1/profiles/${ANY_UUID}/versions`, allowed: "all", ok: 404 },
   { file: "app/api/v1/profiles/[id]/versions/route.ts", kind: "api", method: "POST", url: `/api/v1/profiles/${ANY_UUID}/versions`, body: { version: "x" }, allowed: WRITERS, ok: 422 },
