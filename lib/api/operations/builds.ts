@@ -55,7 +55,6 @@ const reviewView = z.object({
   id: z.string(),
   reviewerUserId: z.string(),
   reviewerName: z.string(),
-  reviewerEmail: z.string(),
   verdict: z.enum(["approve", "request_changes"]),
   comment: z.string(),
   resolvedAt: timestamp.nullable(),
@@ -273,6 +272,7 @@ export const changeReview = defineOperation({
   access: "build:review",
   params: z.strictObject({ id: z.uuid("Not a valid id."), reviewId: z.uuid("Not a valid id.") }),
   body: reviewBody,
+  response: z.object({ review: reviewRecord }),
 });
 
 export const resolveReview = defineOperation({

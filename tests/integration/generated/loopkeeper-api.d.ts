@@ -304,6 +304,26 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/board-models/{id}/signing-keys": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The Ed25519 public keys a board model's bank signatures verify with, and when each was in use (rotated keys stay listed)
+         * @description Roles: admin, engineer, release_manager, support, viewer.
+         */
+        get: operations["listBoardSigningKeys"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/v1/board-revisions/{id}": {
         parameters: {
             query?: never;
@@ -381,7 +401,7 @@ export interface paths {
         };
         get?: never;
         /**
-         * Autosave the working draft (may be unfinished)
+         * Autosave the working draft (may be unfinished); 409 when someone saved since baseRevision
          * @description Roles: admin, engineer.
          */
         put: operations["saveDraft"];
@@ -540,6 +560,26 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/builds/{id}/gate": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The next stage's checklist for the signed-in user, computed by the code that judges the promotion
+         * @description Roles: admin, engineer, release_manager, support, viewer.
+         */
+        get: operations["getBuildGate"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/v1/builds/{id}/transitions": {
         parameters: {
             query?: never;
@@ -578,6 +618,26 @@ export interface paths {
         options?: never;
         head?: never;
         patch?: never;
+        trace?: never;
+    };
+    "/api/v1/builds/{id}/reviews/{reviewId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        /**
+         * The reviewer changes their own verdict on a build in review (one review per reviewer)
+         * @description Roles: admin, engineer.
+         */
+        patch: operations["changeReview"];
         trace?: never;
     };
     "/api/v1/builds/{id}/reviews/{reviewId}/resolve": {
@@ -648,7 +708,7 @@ export interface paths {
             cookie?: never;
         };
         /**
-         * The build's bank image as .bin, or Intel HEX at a revision's base address
+         * The build's bank image as .bin, Intel HEX at a revision's base address, or its Ed25519 signature block (.sig, from pilot on)
          * @description Roles: admin, engineer, release_manager, support, viewer.
          */
         get: operations["downloadBank"];
@@ -834,7 +894,7 @@ export interface paths {
         get?: never;
         put?: never;
         /**
-         * Identify a memory dump (.bin or Intel .hex) read back from a board: CRC, slots, matching profile versions
+         * Identify a memory dump (.bin or Intel .hex) read back from a board by content: CRC, each slot exact/altered (with the differing fields)/unknown/undecodable, safety findings, and the build whose bank it is
          * @description Roles: admin, engineer, release_manager, support.
          */
         post: operations["identifyDump"];
@@ -2072,6 +2132,53 @@ export interface operations {
             };
         };
     };
+    listBoardSigningKeys: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        keys: {
+                            keyId: string;
+                            publicKeyPem: string;
+                            validFrom: string;
+                            validUntil: string | null;
+                        }[];
+                    };
+                };
+            };
+            /** @description Error */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        error: {
+                            code: string;
+                            message: string;
+                            issues?: {
+                                path?: string;
+                                message?: string;
+                            }[];
+                        };
+                    };
+                };
+            };
+        };
+    };
     getBoardRevision: {
         parameters: {
             query?: never;
@@ -2351,7 +2458,9 @@ export interface operations {
                             description: string;
                             ownerName: string;
                             draftText: string | null;
+                            lastPlottableDraftText: string | null;
                             draftUpdatedAt: string | null;
+                            draftRevision: number;
                         };
                         cooler: {
                             id: string;
@@ -2445,6 +2554,7 @@ export interface operations {
             content: {
                 "application/json": {
                     text: string;
+                    baseRevision: number;
                 };
             };
         };
@@ -2457,6 +2567,7 @@ export interface operations {
                 content: {
                     "application/json": {
                         draftUpdatedAt: string;
+                        draftRevision: number;
                     };
                 };
             };
@@ -2503,6 +2614,7 @@ export interface operations {
                 content: {
                     "application/json": {
                         draftUpdatedAt: string;
+                        draftRevision: number;
                         warnings: number;
                     };
                 };
@@ -2771,6 +2883,7 @@ export interface operations {
                             bankBytes: number | null;
                             bankSha256: string | null;
                             bankCrc32: number | null;
+                            bankSignatureKeyId: string | null;
                             releaseNotes: string | null;
                             waiverReason: string | null;
                             withdrawnReason: string | null;
@@ -2955,6 +3068,7 @@ export interface operations {
                             bankBytes: number | null;
                             bankSha256: string | null;
                             bankCrc32: number | null;
+                            bankSignatureKeyId: string | null;
                             releaseNotes: string | null;
                             waiverReason: string | null;
                             withdrawnReason: string | null;
@@ -3015,13 +3129,18 @@ export interface operations {
                             id: string;
                             reviewerUserId: string;
                             reviewerName: string;
-                            reviewerEmail: string;
                             /** @enum {string} */
                             verdict: "approve" | "request_changes";
                             comment: string;
                             resolvedAt: string | null;
                             /** Format: date-time */
                             createdAt: string;
+                            /** Format: date-time */
+                            updatedAt: string;
+                            standing: {
+                                counts: boolean;
+                                reason: string | null;
+                            };
                         }[];
                         approvals: {
                             counting: number;
@@ -3056,11 +3175,79 @@ export interface operations {
                                 pumpRpm: number;
                                 fanRpm: number;
                                 soundDbA: number;
+                                backgroundDbA: number | null;
                                 estimatedDbA: number;
-                                deltaDb: number;
+                                backgroundDifferenceDb: number | null;
+                                correctionDb: number | null;
+                                correctedDbA: number | null;
+                                deltaDb: number | null;
+                                /** @enum {string} */
+                                status: "within" | "above_tolerance" | "too_close_to_background";
                                 withinTolerance: boolean;
                             }[];
                         };
+                    };
+                };
+            };
+            /** @description Error */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        error: {
+                            code: string;
+                            message: string;
+                            issues?: {
+                                path?: string;
+                                message?: string;
+                            }[];
+                        };
+                    };
+                };
+            };
+        };
+    };
+    getBuildGate: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        /** @enum {string} */
+                        stage: "draft" | "review" | "validation" | "pilot" | "production" | "withdrawn";
+                        next: {
+                            /** @enum {string} */
+                            to: "draft" | "review" | "validation" | "pilot" | "production" | "withdrawn";
+                            requirements: {
+                                key: string;
+                                label: string;
+                                /** @enum {string} */
+                                state: "met" | "unmet" | "on_promotion";
+                                detail: string;
+                            }[];
+                            ready: boolean;
+                        } | null;
+                        review: {
+                            mayReview: boolean;
+                            reason: string | null;
+                            ownReviewId: string | null;
+                            ownVerdict: ("approve" | "request_changes") | null;
+                        };
+                        mayWithdraw: boolean;
                     };
                 };
             };
@@ -3170,6 +3357,68 @@ export interface operations {
         responses: {
             /** @description OK */
             201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        review: {
+                            id: string;
+                            buildId: string;
+                            reviewerUserId: string;
+                            /** @enum {string} */
+                            verdict: "approve" | "request_changes";
+                            comment: string;
+                            resolvedAt: string | null;
+                            /** Format: date-time */
+                            createdAt: string;
+                        };
+                    };
+                };
+            };
+            /** @description Error */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        error: {
+                            code: string;
+                            message: string;
+                            issues?: {
+                                path?: string;
+                                message?: string;
+                            }[];
+                        };
+                    };
+                };
+            };
+        };
+    };
+    changeReview: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+                reviewId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    /** @enum {string} */
+                    verdict: "approve" | "request_changes";
+                    /** @default  */
+                    comment?: string;
+                };
+            };
+        };
+        responses: {
+            /** @description OK */
+            200: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -3374,7 +3623,7 @@ export interface operations {
     downloadBank: {
         parameters: {
             query?: {
-                format?: "bin" | "hex";
+                format?: "bin" | "hex" | "sig";
                 revision?: string;
             };
             header?: never;
@@ -3999,44 +4248,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        fileName: string | null;
-                        /** @enum {string} */
-                        format: "bin" | "hex";
-                        sizeBytes: number;
-                        hex?: {
-                            ok: boolean;
-                            startAddress?: number;
-                            recordCount: number;
-                            errors: {
-                                line: number;
-                                message: string;
-                            }[];
-                        };
-                        /** @enum {string} */
-                        status: "ok" | "corrupt" | "unreadable";
-                        crc?: {
-                            stored: string;
-                            computed: string;
-                            ok: boolean;
-                        };
-                        slotCount?: number;
-                        slots: {
-                            slotIndex: number;
-                            version: string;
-                            contentHashPrefix: string;
-                            /** @enum {string} */
-                            match: "exact" | "hash_only" | "unknown";
-                            profileVersionId?: string;
-                            profileName?: string;
-                            coolerName?: string;
-                            knownVersion?: string;
-                        }[];
-                        errors: {
-                            code: string;
-                            message: string;
-                        }[];
-                    };
+                    "application/json": Record<string, never>;
                 };
             };
             /** @description Error */
