@@ -4,9 +4,9 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm } from "react-hook-form";
 import { useMemo, useState } from "react";
 import type { z } from "zod";
-import { apiFetch } from "@/lib/api/client";
+import { apiCall } from "@/lib/api/client";
 import { AppError } from "@/lib/api/errors";
-import { changePasswordBody } from "@/lib/api/operations/account";
+import { changePassword, changePasswordBody } from "@/lib/api/operations/account";
 import { MAX_PASSWORD_BYTES, MIN_PASSWORD_CHARS } from "@/lib/auth/password-policy";
 import { Button } from "@/components/ui/button";
 import { Field, Input, describedBy } from "@/components/ui/field";
@@ -28,7 +28,7 @@ export function ChangePasswordForm({ email, name }: { email: string; name: strin
   const onSubmit = handleSubmit(async (values) => {
     setDone(null);
     try {
-      setDone(await apiFetch<Result>("/api/v1/me/password", { method: "POST", json: values }));
+      setDone(await apiCall(changePassword, { body: values }));
       reset();
     } catch (err) {
       const e = err instanceof AppError ? err : new AppError("internal", "Could not change the password.");

@@ -2,9 +2,9 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { useUrlParams } from "@/components/ui/use-url-params";
-import { apiFetch } from "@/lib/api/client";
+import { apiQuery, queryFromUrl } from "@/lib/api/client";
 import { formText } from "@/components/ui/form-data";
-import type { AuditEventView } from "@/lib/api/operations/admin";
+import { auditQuery, listAudit } from "@/lib/api/operations/admin";
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
@@ -25,10 +25,7 @@ export function AuditLog() {
     if (v) qs.set(f.key, v);
   }
   qs.set("page", String(page));
-  const q = useQuery({
-    queryKey: ["audit", qs.toString()],
-    queryFn: () => apiFetch<{ items: AuditEventView[]; hasMore: boolean }>(`/api/v1/audit?${qs.toString()}`),
-  });
+  const q = useQuery(apiQuery(listAudit, { query: queryFromUrl(auditQuery, Object.fromEntries(qs)) }));
 
 
   return (

@@ -2,8 +2,8 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
-import { apiFetch } from "@/lib/api/client";
-import type { MailboxMessage } from "@/lib/api/operations/builds";
+import { apiQuery } from "@/lib/api/client";
+import { listMailbox } from "@/lib/api/operations/builds";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
@@ -14,8 +14,7 @@ export function Mailbox() {
   const pathname = usePathname();
   const page = Math.max(1, Number(sp.get("page") ?? "1") || 1);
   const q = useQuery({
-    queryKey: ["mailbox", page],
-    queryFn: () => apiFetch<{ items: MailboxMessage[]; hasMore: boolean }>(`/api/v1/mailbox?page=${page}`),
+    ...apiQuery(listMailbox, { query: { page } }),
     refetchInterval: 5000,
   });
   const go = (p: number) => router.replace(`${pathname}?page=${p}`);

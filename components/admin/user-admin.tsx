@@ -3,9 +3,8 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
-import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
-import { createUserBody, type CreateUserBody, type UpdateUserBody, type UserView } from "@/lib/api/operations/admin";
+import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
+import { createUser, createUserBody, listUsers, updateUser, type CreateUserBody, type UpdateUserBody } from "@/lib/api/operations/admin";
 import { ROLES, ROLE_LABELS, type Role } from "@/lib/auth/roles";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
@@ -16,25 +15,25 @@ import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 
 export function UserAdmin({ currentUserId }: { currentUserId: string }) {
   const qc = useQueryClient();
-  const users = useQuery({ queryKey: ["users"], queryFn: () => apiFetch<{ items: UserView[] }>("/api/v1/users") });
+  const users = useQuery(apiQuery(listUsers, {}));
   const form = useForm<CreateUserBody>({ resolver: zodResolver(createUserBody), defaultValues: { role: "viewer" } });
   const create = useMutation({
-    mutationFn: (v: CreateUserBody) => apiFetch("/api/v1/users", { method: "POST", json: v }),
+    mutationFn: (v: CreateUserBody) => apiCall(createUser, { body: v }),
     onSuccess: () => {
       form.reset({ email: "", name: "", password: "", role: "viewer" });
-      void qc.invalidateQueries({ queryKey: ["users"] });
+      void qc.invalidateQueries({ queryKey: operationKey(listUsers) });
     },
   });
   const update = useMutation({
-    mutationFn: ({ id, ...patch }: UpdateUserBody & { id: string }) => apiFetch(`/api/v1/users/${id}`, { method: "PATCH", json: patch }),
-    onSettled: () => void qc.invalidateQueries({ queryKey: ["users"] }),
+    mutationFn: ({ id, ...patch }: UpdateUserBody & { id: string }) => apiCall(updateUser, { params: { id }, body: patch }),
+    onSettled: () => void qc.invalidateQueries({ queryKey: operationKey(listUsers) }),
   });
   const { errors } = form.formState;
 
   return (
     <div className="space-y-5">
       <Panel title="People">
-        {update.error && <div className="mb-3"><Notice tone="fault" role="alert">{(update.error as AppError).message}</Notice></div>}
+        {update.error && <div className="mb-3"><Notice tone="fault" role="alert">{update.error.message}</Notice></div>}
         <Table caption="Users">
           <thead>
             <tr>
@@ -85,7 +84,7 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
       </Panel>
       <Panel title="Add a user">
         <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-3xl gap-3 md:grid-cols-2" noValidate>
-          {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{(create.error as AppError).message}</Notice></div>}
+          {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{create.error.message}</Notice></div>}
           {create.isSuccess && <div className="md:col-span-2"><Notice tone="ok" role="status">User created.</Notice></div>}
           <Field id="new-name" label="Name" error={errors.name?.message}>
             <Input {...describedBy("new-name", errors.name?.message)} {...form.register("name")} />

@@ -2,15 +2,15 @@
 
 import Link from "next/link";
 import { useQuery } from "@tanstack/react-query";
-import { apiFetch } from "@/lib/api/client";
-import type { BuildListItem } from "@/lib/api/operations/builds";
+import { apiQuery } from "@/lib/api/client";
+import { listBuilds } from "@/lib/api/operations/builds";
 import { STAGE_LABELS, STAGE_ORDER } from "@/lib/release/stages";
 import { Notice } from "@/components/ui/notice";
 import { Button } from "@/components/ui/button";
 
 /** Builds in columns by stage, newest first in each. */
 export function Pipeline() {
-  const q = useQuery({ queryKey: ["builds"], queryFn: () => apiFetch<{ items: BuildListItem[] }>("/api/v1/builds") });
+  const q = useQuery(apiQuery(listBuilds, {}));
   if (q.isError) {
     return (
       <Notice tone="fault" role="alert" title="Could not load the builds.">

@@ -6,16 +6,17 @@ import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
-import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
+import { apiCall, apiQuery, queryFromUrl } from "@/lib/api/client";
 import { createProfileBody, type CreateProfileBody, type ProfileSummaryView } from "@/lib/api/operations/profile-schemas";
+import { createProfile, listProfiles, profilesQuery } from "@/lib/api/operations/profiles";
+import { ALL_COOLERS, listCoolerModels } from "@/lib/api/operations/registry";
 import type { CoolerModelView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { Badge } from "@/components/ui/badge";
-import { DataTable, type ServerPage } from "@/components/registry/data-table";
+import { DataTable } from "@/components/registry/data-table";
 import { FilterBar } from "@/components/registry/filter-bar";
 import { useListParams, serverTableProps } from "@/components/registry/use-list-params";
 
@@ -39,8 +40,8 @@ const columns: ColumnDef<ProfileSummaryView>[] = [
 
 export function ProfilesList({ canWrite }: { canWrite: boolean }) {
   const list = useListParams(["q", "coolerModelId"]);
-  const coolers = useQuery({ queryKey: ["cooler-models", "all"], queryFn: () => apiFetch<ServerPage<CoolerModelView>>("/api/v1/cooler-models?pageSize=100") });
-  const q = useQuery({ queryKey: ["profiles", list.apiQuery], queryFn: () => apiFetch<ServerPage<ProfileSummaryView>>(`/api/v1/profiles?${list.apiQuery}`) });
+  const coolers = useQuery(apiQuery(listCoolerModels, { query: ALL_COOLERS }));
+  const q = useQuery(apiQuery(listProfiles, { query: queryFromUrl(profilesQuery, list.query) }));
   return (
     <div className="space-y-5">
       <Panel title="Profiles">
@@ -72,14 +73,14 @@ function CreateProfileForm({ coolers }: { coolers: CoolerModelView[] }) {
   const router = useRouter();
   const form = useForm<CreateProfileBody>({ resolver: zodResolver(createProfileBody), defaultValues: { description: "" } });
   const create = useMutation({
-    mutationFn: (v: CreateProfileBody) => apiFetch<{ profile: { id: string } }>("/api/v1/profiles", { method: "POST", json: v }),
+    mutationFn: (v: CreateProfileBody) => apiCall(createProfile, { body: v }),
     onSuccess: (res) => router.push(`/profiles/${res.profile.id}`),
   });
   const { errors } = form.formState;
   return (
     <Panel title="Start a profile">
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-3xl gap-3 md:grid-cols-2" noValidate>
-        {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{(create.error as AppError).message}</Notice></div>}
+        {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{create.error.message}</Notice></div>}
         <Field id="p-cooler" label="Cooler model" error={errors.coolerModelId?.message}>
           <Select {...describedBy("p-cooler", errors.coolerModelId?.message)} {...form.register("coolerModelId")}>
             <option value="">Choose…</option>

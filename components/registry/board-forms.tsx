@@ -4,8 +4,8 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
-import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
+import { apiCall, operationKey } from "@/lib/api/client";
+import { createBoardModel, createBoardRevision, getBoardRevision, listBoardModels, updateBoardModel, updateBoardRevision } from "@/lib/api/operations/registry";
 import { boardModelBody, boardRevisionBody, type BoardModelBody, type BoardModelView, type BoardRevisionBody, type BoardRevisionView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
@@ -23,10 +23,10 @@ export function BoardModelForm({ editing, onDone }: { editing?: BoardModelView; 
   });
   const create = useMutation({
     mutationFn: (v: BoardModelBody) =>
-      editing ? apiFetch(`/api/v1/board-models/${editing.id}`, { method: "PUT", json: v }) : apiFetch("/api/v1/board-models", { method: "POST", json: v }),
+      editing ? apiCall(updateBoardModel, { params: { id: editing.id }, body: v }) : apiCall(createBoardModel, { body: v }),
     onSuccess: () => {
       if (!editing) form.reset({ name: "", serialPrefix: "", description: "" });
-      void qc.invalidateQueries({ queryKey: ["board-models"] });
+      void qc.invalidateQueries({ queryKey: operationKey(listBoardModels) });
       onDone?.();
     },
     onError: (err) => showServerIssues(form, err),
@@ -36,7 +36,7 @@ export function BoardModelForm({ editing, onDone }: { editing?: BoardModelView; 
   return (
     <Panel title={editing ? `Edit ${editing.name}` : "Add a board model"}>
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="space-y-3" noValidate>
-        {create.error && <Notice tone="fault" role="alert">{(create.error as AppError).message}</Notice>}
+        {create.error && <Notice tone="fault" role="alert">{create.error.message}</Notice>}
         <Field id={`${p}-name`} label="Name" error={errors.name?.message}>
           <Input {...describedBy(`${p}-name`, errors.name?.message)} {...form.register("name")} />
         </Field>
@@ -64,10 +64,10 @@ export function BoardRevisionForm({ boardModels }: { boardModels: BoardModelView
   const [boardModelId, setBoardModelId] = useState(boardModels[0]?.id ?? "");
   const form = useForm<BoardRevisionBody>({ resolver: zodResolver(boardRevisionBody), defaultValues: REVISION_DEFAULTS });
   const create = useMutation({
-    mutationFn: (v: BoardRevisionBody) => apiFetch(`/api/v1/board-models/${boardModelId}/revisions`, { method: "POST", json: v }),
+    mutationFn: (v: BoardRevisionBody) => apiCall(createBoardRevision, { params: { id: boardModelId }, body: v }),
     onSuccess: () => {
       form.reset(REVISION_DEFAULTS);
-      void qc.invalidateQueries({ queryKey: ["board-models"] });
+      void qc.invalidateQueries({ queryKey: operationKey(listBoardModels) });
     },
   });
   const { errors } = form.formState;
@@ -75,7 +75,7 @@ export function BoardRevisionForm({ boardModels }: { boardModels: BoardModelView
   return (
     <Panel title="Add a board revision">
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid gap-3 md:grid-cols-2" noValidate>
-        {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{(create.error as AppError).message}</Notice></div>}
+        {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{create.error.message}</Notice></div>}
         <Field id="br-model" label="Board model">
           <Select id="br-model" value={boardModelId} onChange={(e) => setBoardModelId(e.target.value)}>
             {boardModels.map((b) => <option key={b.id} value={b.id}>{b.name}</option>)}
@@ -124,10 +124,10 @@ export function BoardRevisionEditForm({ revision, onDone }: { revision: BoardRev
   const qc = useQueryClient();
   const form = useForm<BoardRevisionBody>({ resolver: zodResolver(boardRevisionBody), defaultValues: revisionBodyOf(revision) });
   const save = useMutation({
-    mutationFn: (v: BoardRevisionBody) => apiFetch(`/api/v1/board-revisions/${revision.id}`, { method: "PUT", json: v }),
+    mutationFn: (v: BoardRevisionBody) => apiCall(updateBoardRevision, { params: { id: revision.id }, body: v }),
     onSuccess: () => {
-      void qc.invalidateQueries({ queryKey: ["board-revision", revision.id] });
-      void qc.invalidateQueries({ queryKey: ["board-models"] });
+      void qc.invalidateQueries({ queryKey: operationKey(getBoardRevision, { params: { id: revision.id } }) });
+      void qc.invalidateQueries({ queryKey: operationKey(listBoardModels) });
       onDone();
     },
     onError: (err) => showServerIssues(form, err),
@@ -137,7 +137,7 @@ export function BoardRevisionEditForm({ revision, onDone }: { revision: BoardRev
   return (
     <Panel title={`Edit revision ${revision.revision}`}>
       <form onSubmit={(e) => void form.handleSubmit((v) => save.mutate(v))(e)} className="grid gap-3 md:grid-cols-2" noValidate>
-        {save.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{(save.error as AppError).message}</Notice></div>}
+        {save.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{save.error.message}</Notice></div>}
         <Field id="bre-rev" label="Revision" hint="Semantic version, e.g. 2.1.0." error={errors.revision?.message}>
           <Input {...describedBy("bre-rev", errors.revision?.message)} {...form.register("revision")} />
         </Field>

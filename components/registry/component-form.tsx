@@ -3,8 +3,8 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
-import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
+import { apiCall, operationKey } from "@/lib/api/client";
+import { createComponent, listComponents } from "@/lib/api/operations/registry";
 import { componentBody, type ComponentBody } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
@@ -18,10 +18,10 @@ export function ComponentForm() {
   const qc = useQueryClient();
   const form = useForm<ComponentBody>({ resolver: zodResolver(componentBody), defaultValues: DEFAULTS });
   const create = useMutation({
-    mutationFn: (v: ComponentBody) => apiFetch("/api/v1/components", { method: "POST", json: v }),
+    mutationFn: (v: ComponentBody) => apiCall(createComponent, { body: v }),
     onSuccess: () => {
       form.reset(DEFAULTS);
-      void qc.invalidateQueries({ queryKey: ["components"] });
+      void qc.invalidateQueries({ queryKey: operationKey(listComponents) });
     },
   });
   const { errors } = form.formState;
@@ -29,7 +29,7 @@ export function ComponentForm() {
   return (
     <Panel title="Add a fan or pump">
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-4xl gap-3 md:grid-cols-3" noValidate>
-        {create.error && <div className="md:col-span-3"><Notice tone="fault" role="alert">{(create.error as AppError).message}</Notice></div>}
+        {create.error && <div className="md:col-span-3"><Notice tone="fault" role="alert">{create.error.message}</Notice></div>}
         {create.isSuccess && <div className="md:col-span-3"><Notice tone="ok" role="status">Component added.</Notice></div>}
         <Field id="c-name" label="Name" error={errors.name?.message}>
           <Input {...describedBy("c-name", errors.name?.message)} {...form.register("name")} />

@@ -2,12 +2,13 @@
 
 import { useQuery } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
-import { apiFetch } from "@/lib/api/client";
+import { apiQuery, queryFromUrl } from "@/lib/api/client";
+import { componentsQuery, listComponents } from "@/lib/api/operations/registry";
 import type { ComponentView } from "@/lib/api/operations/registry-schemas";
 import { Badge } from "@/components/ui/badge";
 import { Input, Select } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import { DataTable, type ServerPage } from "./data-table";
+import { DataTable } from "./data-table";
 import { FilterBar } from "./filter-bar";
 import { useListParams, serverTableProps } from "./use-list-params";
 import { ComponentForm } from "./component-form";
@@ -26,8 +27,7 @@ const columns: ColumnDef<ComponentView>[] = [
 export function ComponentsList({ canWrite }: { canWrite: boolean }) {
   const list = useListParams(["q", "kind"]);
   const q = useQuery({
-    queryKey: ["components", list.apiQuery],
-    queryFn: () => apiFetch<ServerPage<ComponentView>>(`/api/v1/components?${list.apiQuery}`),
+    ...apiQuery(listComponents, { query: queryFromUrl(componentsQuery, list.query) }),
   });
   return (
     <div className="space-y-5">

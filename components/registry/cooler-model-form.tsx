@@ -3,14 +3,13 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
-import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
-import { coolerModelBody, type BoardModelView, type ComponentView, type CoolerModelBody, type CoolerModelView } from "@/lib/api/operations/registry-schemas";
+import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
+import { ALL_COMPONENTS, createCoolerModel, listBoardModels, listComponents, listCoolerModels, updateCoolerModel } from "@/lib/api/operations/registry";
+import { coolerModelBody, type CoolerModelBody, type CoolerModelView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
-import type { ServerPage } from "./data-table";
 import { NumberField } from "./number-field";
 import { showServerIssues } from "./server-issues";
 
@@ -28,15 +27,15 @@ const bodyOf = (c: CoolerModelView): CoolerModelBody => ({
 /** Adds a cooler model, or edits `editing` in place (same schema as the API body). */
 export function CoolerModelForm({ editing, onDone }: { editing?: CoolerModelView; onDone?: () => void }) {
   const qc = useQueryClient();
-  const parts = useQuery({ queryKey: ["components", "all"], queryFn: () => apiFetch<ServerPage<ComponentView>>("/api/v1/components?pageSize=100") });
-  const boards = useQuery({ queryKey: ["board-models"], queryFn: () => apiFetch<{ items: BoardModelView[] }>("/api/v1/board-models") });
+  const parts = useQuery(apiQuery(listComponents, { query: ALL_COMPONENTS }));
+  const boards = useQuery(apiQuery(listBoardModels, {}));
   const form = useForm<CoolerModelBody>({ resolver: zodResolver(coolerModelBody), defaultValues: editing ? bodyOf(editing) : undefined });
   const create = useMutation({
     mutationFn: (v: CoolerModelBody) =>
-      editing ? apiFetch(`/api/v1/cooler-models/${editing.id}`, { method: "PUT", json: v }) : apiFetch("/api/v1/cooler-models", { method: "POST", json: v }),
+      editing ? apiCall(updateCoolerModel, { params: { id: editing.id }, body: v }) : apiCall(createCoolerModel, { body: v }),
     onSuccess: () => {
       if (!editing) form.reset();
-      void qc.invalidateQueries({ queryKey: ["cooler-models"] });
+      void qc.invalidateQueries({ queryKey: operationKey(listCoolerModels) });
       onDone?.();
     },
     onError: (err) => showServerIssues(form, err),
@@ -49,7 +48,7 @@ export function CoolerModelForm({ editing, onDone }: { editing?: CoolerModelView
   return (
     <Panel title={editing ? `Edit ${editing.name}` : "Add a cooler model"}>
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-4xl gap-3 md:grid-cols-3" noValidate>
-        {create.error && <div className="md:col-span-3"><Notice tone="fault" role="alert">{(create.error as AppError).message}</Notice></div>}
+        {create.error && <div className="md:col-span-3"><Notice tone="fault" role="alert">{create.error.message}</Notice></div>}
         {create.isSuccess && !editing && <div className="md:col-span-3"><Notice tone="ok" role="status">Cooler model added.</Notice></div>}
         {editing && editing.profileCount > 0 && (
           <div className="md:col-span-3">

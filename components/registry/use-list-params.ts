@@ -19,7 +19,7 @@ export function useListParams(keys: readonly string[]) {
 
   const set = (next: Record<string, string>) => setUrl(next, { scroll: false });
 
-  return { sp, page, sort, dir, apiQuery: apiQuery.toString(), set };
+  return { sp, page, sort, dir, query: Object.fromEntries(apiQuery), set };
 }
 
 /**

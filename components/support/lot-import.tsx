@@ -2,9 +2,8 @@
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useId, useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
-import type { ImportResult } from "@/lib/api/operations/support";
+import { apiCall, operationKey } from "@/lib/api/client";
+import { importLots, listLots } from "@/lib/api/operations/support";
 import { LOT_CSV_COLUMNS } from "@/lib/lots/input";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
@@ -19,9 +18,9 @@ export function LotImport() {
   const [fileName, setFileName] = useState("");
   const run = useMutation({
     mutationFn: ({ dryRun }: { dryRun: boolean }) =>
-      apiFetch<ImportResult>(`/api/v1/lots/import?dryRun=${String(dryRun)}`, { method: "POST", body: text ?? "", headers: { "content-type": "text/csv" } }),
+      apiCall(importLots, { query: { dryRun: dryRun ? "true" : "false" }, raw: { data: text ?? "", contentType: "text/csv" } }),
     onSuccess: (r) => {
-      if (!r.dryRun && r.committed > 0) void qc.invalidateQueries({ queryKey: ["lots"] });
+      if (!r.dryRun && r.committed > 0) void qc.invalidateQueries({ queryKey: operationKey(listLots) });
     },
   });
   const r = run.data;
@@ -49,7 +48,7 @@ export function LotImport() {
         <Button variant="secondary" disabled={text === null || run.isPending} onClick={() => run.mutate({ dryRun: true })}>Preview</Button>
         <Button disabled={text === null || run.isPending || !r?.dryRun || r.issues.length > 0} onClick={() => run.mutate({ dryRun: false })}>Import</Button>
       </div>
-      {run.error && <div className="mt-3"><Notice tone="fault" role="alert">{(run.error as AppError).message}</Notice></div>}
+      {run.error && <div className="mt-3"><Notice tone="fault" role="alert">{run.error.message}</Notice></div>}
       {r && r.issues.length > 0 && (
         <div className="mt-3 space-y-2">
           <Notice tone="fault" role="alert" title={`${fileName || "The file"}: ${r.issues.length} problem(s); nothing was imported`}>Fix these rows and preview again.</Notice>

@@ -2,8 +2,9 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { useUrlParams } from "@/components/ui/use-url-params";
-import { apiFetch } from "@/lib/api/client";
-import type { LotOptions, LotView } from "@/lib/api/operations/support";
+import { apiQuery, queryFromUrl } from "@/lib/api/client";
+import { listLots, lotsQuery } from "@/lib/api/operations/support";
+import type { LotOptions } from "@/lib/api/operations/support";
 import { formText } from "@/components/ui/form-data";
 import { Button } from "@/components/ui/button";
 import { Input, Select } from "@/components/ui/field";
@@ -26,7 +27,7 @@ export function LotsList({ options }: { options: LotOptions | undefined }) {
     if (v) qs.set(k, v);
   }
   qs.set("page", String(page));
-  const q = useQuery({ queryKey: ["lots", qs.toString()], queryFn: () => apiFetch<{ items: LotView[]; hasMore: boolean }>(`/api/v1/lots?${qs.toString()}`) });
+  const q = useQuery(apiQuery(listLots, { query: queryFromUrl(lotsQuery, Object.fromEntries(qs)) }));
   const builds = (options?.boardModels ?? []).flatMap((m) => m.builds.map((b) => ({ ...b, model: m.name })));
 
 

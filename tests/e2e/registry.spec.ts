@@ -95,6 +95,9 @@ test.describe("registry, as a viewer", () => {
     await page.goto(`/profiles/${hush.id}`);
     await expect(page.locator(".monaco-editor")).toBeVisible();
     await expect(page.getByText("Read only: your role may not edit profiles.")).toBeVisible();
+    // A reader is not told to edit or that drafts save themselves.
+    await expect(page.getByText(/Drafts save themselves/)).toHaveCount(0);
+    await expect(page.getByText(/Edit the JSON/)).toHaveCount(0);
     await expect(page.getByRole("button", { name: "Publish version" })).toHaveCount(0);
     await expect(page.getByText("Import .json")).toHaveCount(0);
 

@@ -1,3 +1,4 @@
+import zlib from "node:zlib";
 import { expect, request as playwrightRequest, test, type APIRequestContext } from "@playwright/test";
 import { Client } from "pg";
 import { writeIntelHex } from "../../lib/engine";
@@ -38,7 +39,7 @@ test.describe("support lookup", () => {
     await page.getByRole("button", { name: "Look up" }).click();
     await expect(page.getByRole("heading", { name: "Serial TC1-00012345" })).toBeVisible();
     await expect(page.getByText("TW-2501", { exact: true })).toBeVisible();
-    await expect(page.getByRole("heading", { name: "Slot 0: Quiet 1.0.0" })).toBeVisible();
+    await expect(page.getByRole("heading", { name: "Slot 1: Quiet 1.0.0" })).toBeVisible();
     // recharts draws the curves lazily once the result is on screen.
     await expect(page.locator("figure .recharts-surface").first()).toBeVisible();
     await expect(page.getByText("Build 3.1.0", { exact: true })).toBeVisible();
@@ -74,8 +75,20 @@ test.describe("support lookup", () => {
     await page.getByRole("button", { name: "Identify" }).click();
     const result = page.getByTestId("dump-result");
     await expect(result.getByText("Dump is intact")).toBeVisible();
-    await expect(result.getByText("Known version")).toHaveCount(2);
-    await expect(result.getByText(/Quiet 1\.0\.0/)).toBeVisible();
+    await expect(result.getByText("Exact registry version")).toHaveCount(2);
+    await expect(result.getByText(/Quiet v1\.0\.0/)).toBeVisible();
+    await expect(result.getByText("This is the bank of build 3.0.0")).toBeVisible();
+
+    // A curve byte changed and the CRC-32 written again: intact bytes, but not the registry's version.
+    const altered = Buffer.from(bytes);
+    const at = 8 + 19 + 2 * 1 + 1; // slot 0, pump point 2 duty (docs/bank-format.md)
+    altered[at] = altered[at]! + 4;
+    altered.writeUInt32LE(zlib.crc32(altered.subarray(0, altered.length - 4)), altered.length - 4);
+    await file.setInputFiles({ name: "altered.bin", mimeType: "application/octet-stream", buffer: altered });
+    await page.getByRole("button", { name: "Identify" }).click();
+    await expect(result.getByText("Altered", { exact: true })).toBeVisible();
+    await expect(result.getByText("Exact registry version")).toHaveCount(1);
+    await expect(result.getByTestId("dump-faults")).toContainText(`pump point 2: ${altered[at] / 2} % here, ${bytes[at]! / 2} % in v1.0.0`);
 
     const corrupted = Buffer.from(bytes);
     corrupted[20] = corrupted[20]! ^ 0xff;

@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "./support/db";
 import { callRoute, tokenFor } from "./support/http";
 import { coolerModels } from "@/db/schema";
-import { createProfile, getProfileDetail } from "@/db/profiles";
+import { createProfile, getProfileDetail, saveDraft } from "@/db/profiles";
 import { GET as getProfile } from "@/app/api/v1/profiles/[id]/route";
 import { PUT as putDraft } from "@/app/api/v1/profiles/[id]/draft/route";
 
@@ -64,5 +64,21 @@ describe("a draft with a NUL character", () => {
     expect(put.status).toBe(422);
     expect(await put.text()).toMatch(/NUL character/);
     expect((await getProfileDetail(getDb(), { id: profile.id }))!.profile.draftText).toBe(before);
+  });
+});
+
+describe("the last plottable draft", () => {
+  it("is offered only while the draft text does not pass the schema", async () => {
+    const profile = await newProfile();
+    const db = getDb();
+    const engineer = await demoActor("engineer@tarnwell.example");
+    const good = (await getProfileDetail(db, { id: profile.id }))!.profile;
+    expect(good.lastPlottableDraftText).toBeNull();
+    await saveDraft(db, engineer, { id: profile.id, text: `${good.draftText!.slice(0, 40)}` });
+    const broken = (await getProfileDetail(db, { id: profile.id }))!.profile;
+    expect(broken.draftText).toBe(good.draftText!.slice(0, 40));
+    expect(JSON.parse(broken.lastPlottableDraftText!)).toEqual(JSON.parse(good.draftText!));
+    await saveDraft(db, engineer, { id: profile.id, text: good.draftText! });
+    expect((await getProfileDetail(db, { id: profile.id }))!.profile.lastPlottableDraftText).toBeNull();
   });
 });

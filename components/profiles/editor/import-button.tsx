@@ -1,34 +1,32 @@
 "use client";
 
 import { useRef, useState } from "react";
-import type { AppError } from "@/lib/api/errors";
+import { apiCall } from "@/lib/api/client";
+import { AppError } from "@/lib/api/errors";
+import { importDraft } from "@/lib/api/operations/profiles";
 import { MAX_PROFILE_BYTES } from "@/lib/api/operations/profile-schemas";
 import { Notice } from "@/components/ui/notice";
 import { buttonClass } from "@/components/ui/button";
 
 /** Uploads a .json profile; the server validates it and replaces the draft, then the editor shows it. */
-export function ImportButton({ profileId, onImported }: { profileId: string; onImported: (text: string) => void }) {
+export function ImportButton({ profileId, onImported }: { profileId: string; onImported: (text: string, draftRevision: number) => void }) {
   const input = useRef<HTMLInputElement>(null);
   const [error, setError] = useState<AppError | null>(null);
   const [busy, setBusy] = useState(false);
   async function upload(file: File) {
     setError(null);
     if (file.size > MAX_PROFILE_BYTES) {
-      setError({ message: `The file is ${Math.ceil(file.size / 1024)} KiB; at most 256 KiB is accepted.` } as AppError);
+      setError(new AppError("payload_too_large", `The file is ${Math.ceil(file.size / 1024)} KiB; at most 256 KiB is accepted.`));
       return;
     }
     setBusy(true);
     try {
       const text = await file.text();
-      const res = await fetch(`/api/v1/profiles/${profileId}/import`, { method: "POST", headers: { "content-type": "application/json" }, body: text });
-      const body = (await res.json().catch(() => null)) as { error?: { message: string; issues?: { path: string; message: string }[] } } | null;
-      if (!res.ok) {
-        setError({ message: body?.error?.message ?? `The server answered ${res.status}.`, issues: body?.error?.issues } as AppError);
-        return;
-      }
-      onImported(`${JSON.stringify(JSON.parse(text), null, 2)}\n`);
-    } catch {
-      setError({ message: "Could not read or send the file." } as AppError);
+      const saved = await apiCall(importDraft, { params: { id: profileId }, raw: { data: text, contentType: "application/json" } });
+      // The server keeps the file as written; the editor shows the same text.
+      onImported(text, saved.draftRevision);
+    } catch (err) {
+      setError(err instanceof AppError ? err : new AppError("bad_request", "Could not read or send the file."));
     } finally {
       setBusy(false);
       if (input.current) input.current.value = "";

@@ -1,13 +1,14 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
+import { hex32 } from "@/lib/hex/address";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
-import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
-import { publishBody, type VersionView } from "@/lib/api/operations/profile-schemas";
+import { apiCall, operationKey } from "@/lib/api/client";
+import { publishBody } from "@/lib/api/operations/profile-schemas";
+import { getProfile, publishVersion } from "@/lib/api/operations/profiles";
 import type { VersionSuggestion } from "@/lib/engine";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Textarea, describedBy } from "@/components/ui/field";
@@ -39,15 +40,15 @@ export function PublishPanel({
     if (followSuggestion) form.setValue("version", suggested);
   }, [suggested, followSuggestion, form]);
   const publish = useMutation({
-    mutationFn: (v: PublishForm) => apiFetch<{ version: VersionView }>(`/api/v1/profiles/${profileId}/versions`, { method: "POST", json: { ...v, text } }),
+    mutationFn: (v: PublishForm) => apiCall(publishVersion, { params: { id: profileId }, body: { ...v, text } }),
     onSuccess: () => {
       form.reset({ version: suggested, changelog: "", boardRange: form.getValues("boardRange") });
       setFollowSuggestion(true);
-      void qc.invalidateQueries({ queryKey: ["profile", profileId] });
+      void qc.invalidateQueries({ queryKey: operationKey(getProfile, { params: { id: profileId } }) });
     },
   });
   const { errors } = form.formState;
-  const err = publish.error as AppError | null;
+  const err = publish.error;
   return (
     <form onSubmit={(e) => void form.handleSubmit((v) => publish.mutate(v))(e)} className="space-y-3" noValidate aria-label="Publish a version">
       {suggestion && (
@@ -76,7 +77,7 @@ export function PublishPanel({
           )}
         </Notice>
       )}
-      {publish.isSuccess && <Notice tone="ok" role="status">Published {publish.data.version.version} ({publish.data.version.encodedBytes} B, CRC-32 0x{publish.data.version.crc32.toString(16).toUpperCase().padStart(8, "0")}).</Notice>}
+      {publish.isSuccess && <Notice tone="ok" role="status">Published {publish.data.version.version} ({publish.data.version.encodedBytes} B, CRC-32 {hex32(publish.data.version.crc32)}).</Notice>}
       {blocked && <p className="text-sm text-signal-fault">Fix the errors in the problems list before publishing.</p>}
       <Button type="submit" disabled={publish.isPending || blocked}>Publish version</Button>
     </form>

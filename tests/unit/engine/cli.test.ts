@@ -4,7 +4,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { COMMANDS } from "@/cli/commands";
-import { decodeBank, readIntelHex } from "@/lib/engine";
+import { contentHashHex, decodeBank, readIntelHex, type CoolingProfile } from "@/lib/engine";
 import { examplePath } from "./fixtures";
 
 const root = path.resolve(__dirname, "../../..");
@@ -182,10 +182,16 @@ describe("cli bank and inspect", { timeout: 60_000 }, () => {
   it("identifies slots against a known list", () => {
     const b = tmp("bank-known.bin");
     expect(cli("bank", quiet, "--hardware", hw, "--out", b).code).toBe(0);
-    const slotHash = decodeBank(new Uint8Array(readFileSync(b))).slots[0]!.contentHashPrefix;
-    const known = tmp("known.json", JSON.stringify([{ profileVersionId: "pv-hush-1", contentHashPrefix: slotHash, version: "1.0.0" }]));
+    const document = JSON.parse(readFileSync(quiet, "utf8")) as CoolingProfile;
+    const known = tmp("known.json", JSON.stringify({ profileVersions: [{ profileVersionId: "pv-hush-1", version: "1.0.0", contentHash: contentHashHex(document), document }] }));
     const r = cli("inspect", b, "--known", known, "--json");
-    expect(JSON.parse(r.stdout).identities[0]).toMatchObject({ match: "exact", profileVersionId: "pv-hush-1" });
+    expect(r.code).toBe(0);
+    expect(JSON.parse(r.stdout).report.slots[0]).toMatchObject({ match: "exact", profileVersionId: "pv-hush-1" });
+    // The old label-only list cannot prove content, so it is refused with the expected shape.
+    const labels = tmp("labels.json", JSON.stringify([{ profileVersionId: "pv-hush-1", contentHashPrefix: contentHashHex(document).slice(0, 16), version: "1.0.0" }]));
+    const old = cli("inspect", b, "--known", labels);
+    expect(old.code).toBe(2);
+    expect(old.stderr).toMatch(/needs its stored document/);
   });
 
   it("refuses a profile that breaks the board's limits, and bad --versions", () => {

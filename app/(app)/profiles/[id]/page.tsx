@@ -9,10 +9,15 @@ export const metadata: Metadata = { title: "Profile editor" };
 export default async function ProfileEditorPage({ params }: { params: Promise<{ id: string }> }) {
   const actor = await requirePageActor("read");
   const { id } = await params;
+  const canWrite = can(actor.role, "registry:write");
   return (
     <>
-      <PageHeader title="Profile editor" subtitle="Edit the JSON; problems, plots and memory update as you type. Drafts save themselves." />
-      <ProfileWorkspace id={id} canWrite={can(actor.role, "registry:write")} />
+      {canWrite ? (
+        <PageHeader title="Profile editor" subtitle="Edit the JSON; problems, plots and memory update as you type. Drafts save themselves." />
+      ) : (
+        <PageHeader title="Profile" subtitle="The working draft with its problems, plots and memory for the chosen hardware. Your role may read it, not change it." />
+      )}
+      <ProfileWorkspace id={id} canWrite={canWrite} />
     </>
   );
 }
