@@ -14,11 +14,11 @@ test.describe("a draft that stopped being valid JSON", () => {
     await expect(page.getByTestId("stale-plots")).toHaveCount(0);
 
     // Break the saved draft on its third line (a missing value), as an interrupted edit leaves it.
-    const detail = (await (await page.request.get(`/api/v1/profiles/${id}`)).json()) as { profile: { draftText: string } };
+    const detail = (await (await page.request.get(`/api/v1/profiles/${id}`)).json()) as { profile: { draftText: string; draftRevision: number } };
     const lines = detail.profile.draftText.split("\n");
     lines[2] = lines[2]!.replace(/:\s*.*$/, ": ,");
     const broken = lines.join("\n");
-    expect((await page.request.put(`/api/v1/profiles/${id}/draft`, { data: { text: broken } })).status()).toBe(200);
+    expect((await page.request.put(`/api/v1/profiles/${id}/draft`, { data: { text: broken, baseRevision: detail.profile.draftRevision } })).status()).toBe(200);
 
     await page.reload();
     const note = page.getByTestId("stale-plots");

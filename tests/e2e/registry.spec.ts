@@ -107,7 +107,7 @@ test.describe("registry, as a viewer", () => {
     await expect(page.getByRole("button", { name: "Create and open the editor" })).toHaveCount(0);
 
     const text = `${JSON.stringify({ formatVersion: 1 })}\n`;
-    expect((await page.request.put(`/api/v1/profiles/${hush.id}/draft`, { data: { text } })).status()).toBe(403);
+    expect((await page.request.put(`/api/v1/profiles/${hush.id}/draft`, { data: { text, baseRevision: 0 } })).status()).toBe(403);
     expect((await page.request.post(`/api/v1/profiles/${hush.id}/versions`, { data: { version: "9.0.0", changelog: "x", boardRange: ">=1.0.0", text } })).status()).toBe(403);
     expect((await page.request.post("/api/v1/profiles", { data: { coolerModelId: "00000000-0000-4000-8000-000000000000", name: "x", description: "" } })).status()).toBe(403);
   });
