@@ -1,7 +1,7 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { useMemo, useState } from "react";
 import type { z } from "zod";
 import { apiCall } from "@/lib/api/client";
@@ -17,12 +17,12 @@ type Result = { otherSessionsEnded: number; tokensRevoked: number };
 
 export function ChangePasswordForm({ email, name }: { email: string; name: string }) {
   const [done, setDone] = useState<Result | null>(null);
-  const { register, handleSubmit, setError, reset, formState, watch } = useForm<z.input<typeof changePasswordBody>, unknown, z.output<typeof changePasswordBody>>({
+  const { register, handleSubmit, setError, reset, formState, control } = useForm<z.input<typeof changePasswordBody>, unknown, z.output<typeof changePasswordBody>>({
     resolver: zodResolver(changePasswordBody),
     defaultValues: { currentPassword: "", newPassword: "", revokeTokens: false },
   });
   const { errors, isSubmitting } = formState;
-  const newPassword = watch("newPassword") ?? "";
+  const newPassword = useWatch({ control, name: "newPassword" }) ?? "";
   const userInputs = useMemo(() => [email, name, "loopkeeper", "tarnwell"], [email, name]);
 
   const onSubmit = handleSubmit(async (values) => {

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { defineOperation, noContent } from "../operation";
+import { defineOperation } from "../operation";
 import { ROLES } from "@/lib/auth/roles";
 import { newPasswordSchema } from "@/lib/auth/password-policy";
 import { timestamp } from "./timestamp";
