@@ -1,9 +1,12 @@
 import type { ReactNode } from "react";
 
-/** Dense, readable table chrome; columns and rows come from the caller. */
+/**
+ * Dense, readable table chrome; columns and rows come from the caller. The wrapper scrolls
+ * sideways on narrow screens, so it takes keyboard focus (arrow keys scroll it).
+ */
 export function Table({ children, caption }: { children: ReactNode; caption?: string }) {
   return (
-    <div className="overflow-x-auto">
+    <div className="overflow-x-auto" tabIndex={0} {...(caption ? { role: "region", "aria-label": caption } : {})}>
       <table className="w-full border-collapse text-left text-sm">
         {caption && <caption className="sr-only">{caption}</caption>}
         {children}

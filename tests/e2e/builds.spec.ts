@@ -89,8 +89,9 @@ test("a build goes from draft to the factory and is withdrawn, with reviews, lab
   await expect(release.getByRole("link", { name: "lab-report.pdf" })).toBeVisible();
   await release.getByLabel("Measurements (CSV)").setInputFiles({ name: "measurements.csv", mimeType: "text/csv", buffer: measurementsCsv() });
   await expect(release.getByTestId("sound-plot")).toBeVisible();
-  await expect(release.getByTestId("sound-plot").locator(".recharts-line")).toHaveCount(2);
-  await expect(release.getByText("every point within it.")).toBeVisible();
+  // Measured, corrected for the room's background, and estimated.
+  await expect(release.getByTestId("sound-plot").locator(".recharts-line")).toHaveCount(3);
+  await expect(release.getByText("no compared point is louder than the estimate by more than that.")).toBeVisible();
   await expectAccessible(release);
   await release.getByRole("button", { name: "Promote to pilot run" }).click();
   await expect(release.getByRole("heading", { level: 1 })).toContainText("Pilot run");
