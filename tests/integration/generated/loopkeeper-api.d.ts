@@ -34,7 +34,7 @@ export interface paths {
         get?: never;
         put?: never;
         /**
-         * Change your own password
+         * Change your own password (signed-in session only; ends your other sessions)
          * @description Any signed-in user or API token.
          */
         post: operations["changePassword"];
@@ -79,7 +79,7 @@ export interface paths {
         put?: never;
         post?: never;
         /**
-         * Revoke one of your API tokens
+         * Revoke one of your API tokens (an unknown id and someone else's token get the same 404)
          * @description Any signed-in user or API token.
          */
         delete: operations["revokeToken"];
@@ -1034,16 +1034,23 @@ export interface operations {
                 "application/json": {
                     currentPassword: string;
                     newPassword: string;
+                    /** @default false */
+                    revokeTokens?: boolean;
                 };
             };
         };
         responses: {
-            /** @description Done; no body. */
-            204: {
+            /** @description OK */
+            200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        otherSessionsEnded: number;
+                        tokensRevoked: number;
+                    };
+                };
             };
             /** @description Error */
             default: {
