@@ -1,23 +1,10 @@
 /** @type {import('next').NextConfig} */
 
-// Only self: scripts, styles, fonts, images and workers all come from this origin.
-// Monaco needs 'unsafe-eval' for its tokenizer and blob: workers; Next needs inline scripts and styles.
-const csp = [
-  "default-src 'self'",
-  "script-src 'self' 'unsafe-inline' 'unsafe-eval'",
-  "style-src 'self' 'unsafe-inline'",
-  "img-src 'self' data: blob:",
-  "font-src 'self' data:",
-  "worker-src 'self' blob:",
-  "connect-src 'self'",
-  "frame-ancestors 'none'",
-  "form-action 'self'",
-  "base-uri 'self'",
-  "object-src 'none'",
-].join("; ");
+// Screens get their Content-Security-Policy with a per-response script nonce from proxy.ts
+// (lib/platform/http/content-security.ts); API answers get one that allows nothing.
+const apiCsp = "default-src 'none'; frame-ancestors 'none'; base-uri 'none'; form-action 'none'";
 
 const securityHeaders = [
-  { key: "Content-Security-Policy", value: csp },
   { key: "X-Frame-Options", value: "DENY" },
   { key: "X-Content-Type-Options", value: "nosniff" },
   { key: "Referrer-Policy", value: "same-origin" },
@@ -31,7 +18,10 @@ const nextConfig = {
   serverExternalPackages: ["pino", "pg", "bcryptjs", "nodemailer", "smtp-server", "@aws-sdk/client-s3"],
   experimental: { authInterrupts: true },
   async headers() {
-    return [{ source: "/:path*", headers: securityHeaders }];
+    return [
+      { source: "/:path*", headers: securityHeaders },
+      { source: "/api/:path*", headers: [{ key: "Content-Security-Policy", value: apiCsp }] },
+    ];
   },
 };
 

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { connection } from "next/server";
 import localFont from "next/font/local";
 import "./globals.css";
 
@@ -9,7 +10,9 @@ export const metadata: Metadata = {
   description: "Registry of liquid-cooler controller curves, board revisions, builds and shipped boards.",
 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every screen renders per request: its scripts carry that response's CSP nonce (proxy.ts).
+  await connection();
   return (
     <html lang="en" className={sans.variable}>
       <body className="min-h-screen font-sans">{children}</body>

@@ -115,3 +115,45 @@ export async function unlockAccount(db: Executor, { email }: { email: string }):
   const res = await db.execute(sql`delete from sign_in_attempts where key = ${accountKey(e)} or starts_with(key, ${`pair:${e}|`})`);
   return res.rowCount ?? 0;
 }
+
+export interface ThrottledAccountRow {
+  email: string;
+  failures: number;
+  windowEndsAt: Date;
+  clients: number;
+  longestWaitSec: number;
+}
+
+/** Accounts and addresses with failures in the current window (the admin's view), most failures first. */
+export async function listThrottled(db: Executor): Promise<{ accounts: ThrottledAccountRow[]; addresses: { address: string; failures: number; waitSec: number }[] }> {
+  const accounts = await db.execute<{ email: string; failures: number; window_ends_at: Date | string; clients: number; longest_wait: number }>(sql`
+    select substr(a.key, 6) as email, a.failures,
+      a.window_started_at + make_interval(mins => ${WINDOW_MINUTES}) as window_ends_at,
+      (select count(*) from sign_in_attempts p where p.key like 'pair:%' and split_part(substr(p.key, 6), '|', 1) = substr(a.key, 6) and p.window_started_at >= ${windowStart})::int as clients,
+      coalesce((select max(greatest(0, ceil(extract(epoch from (p.locked_until - now()))))) from sign_in_attempts p
+        where p.key like 'pair:%' and split_part(substr(p.key, 6), '|', 1) = substr(a.key, 6) and p.window_started_at >= ${windowStart}), 0)::int as longest_wait
+    from sign_in_attempts a
+    where a.key like 'acct:%' and a.window_started_at >= ${windowStart}
+    order by a.failures desc, a.key
+    limit 200`);
+  const addresses = await db.execute<{ address: string; failures: number; wait: number }>(sql`
+    select substr(key, 6) as address, failures, greatest(0, ceil(extract(epoch from (locked_until - now()))))::int as wait
+    from sign_in_attempts
+    where key like 'addr:%' and window_started_at >= ${windowStart}
+    order by failures desc, key
+    limit 200`);
+  return {
+    accounts: accounts.rows.map((r) => ({ email: r.email, failures: Number(r.failures), windowEndsAt: new Date(r.window_ends_at), clients: Number(r.clients), longestWaitSec: Number(r.longest_wait) })),
+    addresses: addresses.rows.map((r) => ({ address: r.address, failures: Number(r.failures), waitSec: Number(r.wait ?? 0) })),
+  };
+}
+
+/** Forgets an account's failures from every client (an admin unlocking it); returns how many records went. */
+export async function clearAccountThrottle(tx: Executor, { email }: { email: string }): Promise<number> {
+  const e = email.toLowerCase();
+  const res = await tx.execute<{ key: string }>(sql`
+    delete from sign_in_attempts
+    where key = ${accountKey(e)} or (key like 'pair:%' and split_part(substr(key, 6), '|', 1) = ${e})
+    returning key`);
+  return res.rows.length;
+}

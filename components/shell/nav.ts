@@ -42,6 +42,7 @@ export const NAV: NavGroup[] = [
     label: "Admin",
     items: [
       { href: "/admin/users", label: "Users and roles", capability: "admin" },
+      { href: "/admin/access", label: "Sign-ins and tokens", capability: "admin" },
       { href: "/admin/audit", label: "Audit log", capability: "admin" },
       { href: "/admin/mailbox", label: "Mailbox", capability: "admin" },
     ],

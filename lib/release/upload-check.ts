@@ -11,6 +11,14 @@ export const UPLOAD_MAX_BYTES: Record<UploadKind, number> = {
   measurements: 512 * 1024,
 };
 
+/**
+ * Upload housekeeping policy. An upload that no build refers to is "pending": each person may
+ * hold at most `PENDING_UPLOAD_QUOTA_BYTES` of them, and they are removed (row and stored
+ * bytes) `PENDING_UPLOAD_HOURS` after they arrived. Files a build refers to are kept.
+ */
+export const PENDING_UPLOAD_QUOTA_BYTES = 64 * 1024 * 1024;
+export const PENDING_UPLOAD_HOURS = 24;
+
 export const UPLOAD_LABELS: Record<UploadKind, string> = {
   firmware: "Firmware image (.bin or Intel HEX .hex)",
   lab_report: "Lab report (PDF)",
@@ -79,4 +87,19 @@ export function uploadRowErrors(kind: UploadKind, bytes: Uint8Array): string[] {
   if (kind !== "measurements") return [];
   const parsed = parseMeasurementsCsv(new TextDecoder().decode(bytes));
   return parsed.ok ? [] : parsed.errors;
+}
+
+/** The extension a checked content type downloads with: the stored name never decides how a file opens. */
+const EXTENSION_OF: Record<string, string> = { "application/pdf": ".pdf", "text/csv": ".csv", "text/x-hex": ".hex", "application/octet-stream": ".bin" };
+
+/**
+ * The file name a download is offered under: the uploaded name reduced to safe characters,
+ * with its extension replaced by the one of the type judged from the content (a PDF uploaded
+ * as `report.html` downloads as `report.pdf`).
+ */
+export function downloadName(originalName: string, contentType: string): string {
+  const safe = originalName.replace(/[^A-Za-z0-9._ -]/g, "_").slice(0, 120).trim();
+  const ext = EXTENSION_OF[contentType] ?? ".bin";
+  const stem = safe.replace(/\.[A-Za-z0-9]{1,8}$/, "").replace(/^\.+/, "") || "download";
+  return `${stem}${ext}`;
 }

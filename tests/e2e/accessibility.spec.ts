@@ -8,7 +8,7 @@ const SCREENS = [
   "/account",
   "/admin/users",
   "/admin/audit",
-  "/admin/mailbox",
+  "/admin/mailbox", "/admin/access",
   "/profiles",
   "/components",
   "/cooler-models",

@@ -55,4 +55,15 @@ describe("upload and download routes", () => {
     expect(parsed.startAddress).toBe(0x0801f800);
     expect(parsed.bytes).toEqual(bin);
   });
+
+  it("ASVS 12.2.1 — a PDF uploaded as report.html downloads as report.pdf, the extension of its checked type", async () => {
+    const token = await tokenFor("release@tarnwell.example");
+    const b = await freshDraftBuild();
+    const res = await callRoute(uploadEvidence, { url: `/api/v1/builds/${b.id}/evidence?kind=lab_report&name=report.html`, method: "POST", token, params: { id: b.id }, body: "%PDF-1.4\n%%EOF\n" });
+    expect(res.status).toBe(201);
+    const { upload } = (await res.json()) as { upload: { id: string } };
+    const down = await callRoute(downloadUpload, { url: `/api/v1/uploads/${upload.id}`, token, params: { id: upload.id } });
+    expect(down.headers.get("content-type")).toBe("application/pdf");
+    expect(down.headers.get("content-disposition")).toBe('attachment; filename="report.pdf"');
+  });
 });

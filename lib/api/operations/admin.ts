@@ -2,7 +2,7 @@ import { z } from "zod";
 import { newPasswordSchema } from "@/lib/auth/password-policy";
 import { defineOperation } from "../operation";
 import { ROLES } from "@/lib/auth/roles";
-import { idParams } from "./account";
+import { idParams, tokenSchema } from "./account";
 import { timestamp } from "./timestamp";
 
 export const userSchema = z.object({
@@ -97,4 +97,61 @@ export const listAudit = defineOperation({
   access: "admin",
   query: auditQuery,
   response: z.object({ items: z.array(auditEventSchema), page: z.number(), pageSize: z.number(), hasMore: z.boolean() }),
+});
+
+export const ownedTokenSchema = tokenSchema.extend({ userEmail: z.string(), userName: z.string() });
+export type OwnedTokenView = z.infer<typeof ownedTokenSchema>;
+
+export const listEveryonesTokens = defineOperation({
+  id: "listEveryonesTokens",
+  method: "GET",
+  path: "/api/v1/admin/tokens",
+  summary: "Every user's API tokens with whose they are, newest first (never their secret)",
+  tag: "Admin",
+  access: "admin",
+  query: z.strictObject({ live: z.enum(["true", "false"]).default("false") }),
+  response: z.object({ items: z.array(ownedTokenSchema) }),
+});
+
+export const revokeAnyToken = defineOperation({
+  id: "revokeAnyToken",
+  method: "DELETE",
+  path: "/api/v1/admin/tokens/{id}",
+  summary: "Revoke anyone's API token (audited)",
+  tag: "Admin",
+  access: "admin",
+  params: idParams,
+  response: z.object({ token: tokenSchema }),
+});
+
+export const throttledAccountSchema = z.object({
+  email: z.string(),
+  failures: z.number(),
+  windowEndsAt: timestamp,
+  clients: z.number(),
+  longestWaitSec: z.number(),
+});
+export const throttledAddressSchema = z.object({ address: z.string(), failures: z.number(), waitSec: z.number() });
+
+export const listSignInThrottle = defineOperation({
+  id: "listSignInThrottle",
+  method: "GET",
+  path: "/api/v1/admin/sign-in-throttle",
+  summary: "Accounts and client addresses with failed sign-ins in the current window, and how long they wait",
+  tag: "Admin",
+  access: "admin",
+  response: z.object({ accounts: z.array(throttledAccountSchema), addresses: z.array(throttledAddressSchema), windowMinutes: z.number() }),
+});
+
+export const clearSignInThrottleBody = z.strictObject({ email: z.email("Enter the account's e-mail address.").max(320) });
+
+export const clearSignInThrottle = defineOperation({
+  id: "clearSignInThrottle",
+  method: "POST",
+  path: "/api/v1/admin/sign-in-throttle/clear",
+  summary: "Forget an account's failed sign-ins, from every client (audited)",
+  tag: "Admin",
+  access: "admin",
+  body: clearSignInThrottleBody,
+  response: z.object({ cleared: z.number() }),
 });

@@ -3,9 +3,10 @@ import { assertIdentityEncoding } from "@/lib/platform/http/raw-body";
 import type { NextRequest } from "next/server";
 import { getDb, type Tx } from "@/db/client";
 import type { AuditActor } from "@/db/audit";
-import { insertUpload } from "@/db/uploads";
+import { deletePendingUploads, insertUpload, pendingUploadBytes } from "@/db/uploads";
+import { recordAudit } from "@/db/audit";
 import { AppError } from "@/lib/api/errors";
-import { checkUploadContent, uploadNameProblem, uploadRowErrors, UPLOAD_MAX_BYTES, type UploadKind } from "@/lib/release/upload-check";
+import { checkUploadContent, uploadNameProblem, uploadRowErrors, PENDING_UPLOAD_HOURS, PENDING_UPLOAD_QUOTA_BYTES, UPLOAD_MAX_BYTES, type UploadKind } from "@/lib/release/upload-check";
 import { getStorage, type ByteSource, type Storage } from "@/lib/platform/storage";
 
 type Uploader = AuditActor & { userId: string };
@@ -38,6 +39,8 @@ export async function acceptUpload(
       });
     }
     return await getDb().transaction(async (tx) => {
+      const pending = await pendingUploadBytes(tx, { userId: uploader.userId });
+      if (!input.attach && pending + stored.sizeBytes > PENDING_UPLOAD_QUOTA_BYTES) throw quotaError(pending);
       const row = await insertUpload(tx, uploader, { kind: input.kind, storageKey: stored.key, originalName: input.name.trim(), contentType: content.contentType, sizeBytes: stored.sizeBytes, sha256: stored.sha256 });
       await input.attach?.(tx, row);
       return row;
@@ -46,6 +49,34 @@ export async function acceptUpload(
     await storage.delete(stored.key).catch(() => undefined);
     throw err;
   }
+}
+
+function mib(bytes: number): string {
+  return `${(bytes / 1024 / 1024).toFixed(1)} MiB`;
+}
+
+function quotaError(pendingBytes: number): AppError {
+  return new AppError(
+    "payload_too_large",
+    `You already hold ${mib(pendingBytes)} of uploads no build uses yet; each person may hold ${mib(PENDING_UPLOAD_QUOTA_BYTES)}. Use them in a build, or wait: unused uploads are removed ${PENDING_UPLOAD_HOURS} hours after they arrive.`,
+  );
+}
+
+/**
+ * Removes uploads no build refers to, `PENDING_UPLOAD_HOURS` after they arrived: the rows go in
+ * one transaction with an audit event, then their stored bytes. Returns how many went.
+ */
+export async function removeUnusedUploads({ now = new Date(), storage = getStorage() }: { now?: Date; storage?: Storage } = {}): Promise<number> {
+  const before = new Date(now.getTime() - PENDING_UPLOAD_HOURS * 3_600_000);
+  const removed = await getDb().transaction(async (tx) => {
+    const rows = await deletePendingUploads(tx, { before });
+    if (rows.length > 0) {
+      await recordAudit(tx, { userId: null, label: "housekeeping" }, { action: "upload.expire", entityType: "upload", entityId: `${rows.length} unused`, after: { ids: rows.map((r) => r.id), before: before.toISOString() } });
+    }
+    return rows;
+  });
+  for (const r of removed) await storage.delete(r.storageKey).catch(() => undefined);
+  return removed.length;
 }
 
 /** The declared length, when present, refuses an oversize upload before reading it. */

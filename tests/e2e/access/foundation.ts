@@ -5,6 +5,7 @@ export const foundationRows: AccessRow[] = [
   { file: "app/(app)/page.tsx", kind: "page", method: "GET", url: "/", allowed: "all" },
   { file: "app/(app)/account/page.tsx", kind: "page", method: "GET", url: "/account", allowed: "all" },
   { file: "app/(app)/admin/users/page.tsx", kind: "page", method: "GET", url: "/admin/users", allowed: ["admin"] },
+  { file: "app/(app)/admin/access/page.tsx", kind: "page", method: "GET", url: "/admin/access", allowed: ["admin"] },
   { file: "app/(app)/admin/audit/page.tsx", kind: "page", method: "GET", url: "/admin/audit", allowed: ["admin"] },
 
   { file: "app/api/auth/[...nextauth]/route.ts", kind: "api", method: "GET", url: "/api/auth/csrf", allowed: "public" },
@@ -20,5 +21,9 @@ export const foundationRows: AccessRow[] = [
   { file: "app/api/v1/users/route.ts", kind: "api", method: "GET", url: "/api/v1/users", allowed: ["admin"] },
   { file: "app/api/v1/users/route.ts", kind: "api", method: "POST", url: "/api/v1/users", body: { email: "not-an-email" }, allowed: ["admin"], ok: 422 },
   { file: "app/api/v1/users/[id]/route.ts", kind: "api", method: "PATCH", url: `/api/v1/users/${ANY_UUID}`, body: { role: "viewer" }, allowed: ["admin"], ok: 404 },
+  { file: "app/api/v1/admin/tokens/route.ts", kind: "api", method: "GET", url: "/api/v1/admin/tokens", allowed: ["admin"] },
+  { file: "app/api/v1/admin/tokens/[id]/route.ts", kind: "api", method: "DELETE", url: `/api/v1/admin/tokens/${ANY_UUID}`, allowed: ["admin"], ok: 404 },
+  { file: "app/api/v1/admin/sign-in-throttle/route.ts", kind: "api", method: "GET", url: "/api/v1/admin/sign-in-throttle", allowed: ["admin"] },
+  { file: "app/api/v1/admin/sign-in-throttle/clear/route.ts", kind: "api", method: "POST", url: "/api/v1/admin/sign-in-throttle/clear", body: { email: "not-an-email" }, allowed: ["admin"], ok: 422 },
   { file: "app/api/v1/audit/route.ts", kind: "api", method: "GET", url: "/api/v1/audit", allowed: ["admin"] },
 ];

@@ -13,6 +13,7 @@ import * as tokensRoute from "@/app/api/v1/tokens/route";
 import * as auditRoute from "@/app/api/v1/audit/route";
 import * as lotsRoute from "@/app/api/v1/lots/route";
 import * as lotImportRoute from "@/app/api/v1/lots/import/route";
+import * as buildsRoute from "@/app/api/v1/builds/route";
 
 process.env.LOOPKEEPER_LOG = "silent";
 
@@ -117,5 +118,17 @@ describe("ASVS 5.1.1 — HTTP parameter pollution", () => {
     const res = await callRoute(lotsRoute.GET, { url: "/api/v1/lots?code=TW&code=XX", token: release });
     expect(res.status).toBe(400);
     expect(await text(res)).toMatch(/more than once/);
+  });
+});
+
+describe("ASVS 5.1.4 — a build version is three numbers 0–255, as its message says", () => {
+  it.each(["1.256.0", "256.0.0", "1.0.999", "01.2.3"])("%s is refused with the message that names the rule", async (version) => {
+    const res = await callRoute(buildsRoute.POST, { url: "/api/v1/builds", method: "POST", token: release, ...json({ version, boardModelId: "00000000-0000-4000-8000-000000000000", slots: [] }) });
+    expect([400, 422]).toContain(res.status);
+    expect(await text(res)).toMatch(/each 0–255/);
+  });
+  it("255.255.255 passes the version rule (the answer complains about other fields only)", async () => {
+    const res = await callRoute(buildsRoute.POST, { url: "/api/v1/builds", method: "POST", token: release, ...json({ version: "255.255.255", boardModelId: "00000000-0000-4000-8000-000000000000", slots: [] }) });
+    expect(await text(res)).not.toMatch(/each 0–255/);
   });
 });

@@ -119,3 +119,31 @@ describe("ASVS 7.4.1 — a NUL in the sign-in form gives the generic failure, ne
     await expect(authorize()({ email: "admin@tarnwell.example", password: "pass\u0000word" }, { headers: from("198.51.100.70") })).resolves.toBeNull();
   });
 });
+
+describe("ASVS 2.2.1 — an admin sees who is slowed down and can unlock an account", () => {
+  it("the admin view lists the account with its failures and waits; unlocking forgets them from every client and is audited", async () => {
+    const { callRoute, tokenFor } = await import("../support/http");
+    const listRoute = await import("@/app/api/v1/admin/sign-in-throttle/route");
+    const clearRoute = await import("@/app/api/v1/admin/sign-in-throttle/clear/route");
+    const admin = await tokenFor("admin@tarnwell.example");
+    const guessing = "198.51.100.201";
+    for (let i = 0; i < 6; i++) await recordSignInFailure(getDb(), { email, client: guessing });
+    expect(await signIn(PASSWORD, from(guessing))).toBe(false);
+
+    const listed = await callRoute(listRoute.GET, { url: "/api/v1/admin/sign-in-throttle", token: admin });
+    expect(listed.status).toBe(200);
+    const view = (await listed.json()) as { accounts: { email: string; failures: number; clients: number; longestWaitSec: number }[] };
+    const row = view.accounts.find((a) => a.email === email);
+    expect(row?.failures).toBeGreaterThanOrEqual(6);
+    expect(row?.clients).toBeGreaterThanOrEqual(1);
+    expect(row?.longestWaitSec).toBeGreaterThan(0);
+
+    const cleared = await callRoute(clearRoute.POST, { url: "/api/v1/admin/sign-in-throttle/clear", method: "POST", token: admin, body: JSON.stringify({ email: email.toUpperCase() }), headers: { "content-type": "application/json" } });
+    expect(cleared.status).toBe(200);
+    expect(((await cleared.json()) as { cleared: number }).cleared).toBeGreaterThanOrEqual(2);
+    // The client that waited is heard again at once.
+    expect(await signIn(PASSWORD, from(guessing))).toBe(true);
+    const audit = await getDb().execute<{ n: number }>(sql`select count(*)::int as n from audit_events where action = 'sign_in.unlock' and entity_id = ${email}`);
+    expect(audit.rows[0]?.n).toBe(1);
+  });
+});

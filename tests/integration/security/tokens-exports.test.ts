@@ -15,6 +15,8 @@ import { updateUser } from "@/db/users";
 import * as meRoute from "@/app/api/v1/me/route";
 import * as tokensRoute from "@/app/api/v1/tokens/route";
 import * as tokenRoute from "@/app/api/v1/tokens/[id]/route";
+import * as adminTokensRoute from "@/app/api/v1/admin/tokens/route";
+import * as adminTokenRoute from "@/app/api/v1/admin/tokens/[id]/route";
 import * as shippedRoute from "@/app/api/v1/support/withdrawn/[id]/shipped.csv/route";
 import { MAX_LIVE_TOKENS, MAX_TOKEN_DAYS } from "@/lib/api/operations/account";
 import { splitCsv } from "@/lib/lots/csv";
@@ -130,5 +132,31 @@ describe("ASVS 5.3.1 — CSV exports escape formula starters after any separator
     const token = await tokenFor("support@tarnwell.example");
     const res = await callRoute(shippedRoute.GET, { url: `/api/v1/support/withdrawn/${live!.id}/shipped.csv`, token, params: { id: live!.id } });
     expect(res.status).toBe(404);
+  });
+});
+
+describe("ASVS 3.3.1 / 4.1.3 — admins list and revoke anyone's tokens; nobody else can", () => {
+  it("an admin sees another user's live token with its owner and revokes it; the token stops at once and the revocation is audited", async () => {
+    const victim = await tokenFor(tempEmail);
+    expect((await callRoute(meRoute.GET, { url: "/api/v1/me", token: victim })).status).toBe(200);
+    const admin = await tokenFor("admin@tarnwell.example");
+    const listed = await callRoute(adminTokensRoute.GET, { url: "/api/v1/admin/tokens?live=true", token: admin });
+    expect(listed.status).toBe(200);
+    const items = ((await listed.json()) as { items: { id: string; userEmail: string; tokenPrefix: string }[] }).items.filter((t) => t.userEmail === tempEmail);
+    expect(items.length).toBeGreaterThanOrEqual(1);
+    const target = items.find((t) => victim.startsWith(t.tokenPrefix));
+    if (!target) throw new Error("the admin list does not show the user's live token");
+
+    // An engineer cannot use the admin route, even for a token of their own.
+    const engineer = await tokenFor("engineer@tarnwell.example");
+    expect((await callRoute(adminTokenRoute.DELETE, { url: `/api/v1/admin/tokens/${target.id}`, method: "DELETE", token: engineer, params: { id: target.id } })).status).toBe(403);
+
+    const revoked = await callRoute(adminTokenRoute.DELETE, { url: `/api/v1/admin/tokens/${target.id}`, method: "DELETE", token: admin, params: { id: target.id } });
+    expect(revoked.status).toBe(200);
+    expect(((await revoked.json()) as { token: { revokedAt: string | null } }).token.revokedAt).not.toBeNull();
+    // The token-to-person cache forgets it when PostgreSQL announces the change (LISTEN/NOTIFY): moments, not minutes.
+    await expect.poll(async () => (await callRoute(meRoute.GET, { url: "/api/v1/me", token: victim })).status, { timeout: 5_000 }).toBe(401);
+    const audit = await getDb().execute<{ n: number }>(sql`select count(*)::int as n from audit_events where action = 'token.revoke' and entity_id = ${target.id}`);
+    expect(audit.rows[0]?.n).toBe(1);
   });
 });
