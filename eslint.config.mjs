@@ -13,6 +13,7 @@ export default tseslint.config(
       ".next-*/**",
       ".data/**",
       "drizzle/**",
+      "lib/validation/generated/**",
       "test-results/**",
       "playwright-report/**",
       "next-env.d.ts",

@@ -118,6 +118,7 @@ test.describe("ASVS 14.4.3 — a Content-Security-Policy without 'unsafe-inline'
     await page.getByRole("button", { name: /sign in/i }).click();
     await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
     await page.goto("/profiles");
+    await page.waitForLoadState("networkidle");
     const href = await page.locator("a[href]").evaluateAll((as) => as.map((a) => a.getAttribute("href") ?? "").find((h) => /^\/profiles\/[0-9a-f-]{36}$/.test(h)));
     expect(href).toBeTruthy();
     await page.goto(href!);
