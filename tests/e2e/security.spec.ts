@@ -101,7 +101,7 @@ test.describe("ASVS 14.4.3 — a Content-Security-Policy without 'unsafe-inline'
       if (/Content Security Policy|Content-Security-Policy/i.test(m.text())) violations.push(m.text());
     });
     await page.addInitScript(() => {
-      document.addEventListener("securitypolicyviolation", (e) => console.error(`Content Security Policy violation: ${e.violatedDirective} ${e.blockedURI}`));
+      document.addEventListener("securitypolicyviolation", (e) => console.error(`Content Security Policy violation: ${e.violatedDirective} ${e.blockedURI} at ${e.sourceFile}:${e.lineNumber}:${e.columnNumber} ${e.sample}`));
     });
     const signIn = await page.goto("/sign-in");
     const policy = signIn?.headers()["content-security-policy"] ?? "";
