@@ -152,6 +152,86 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/admin/tokens": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Every user's API tokens with whose they are, newest first (never their secret)
+         * @description Roles: admin.
+         */
+        get: operations["listEveryonesTokens"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/admin/tokens/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        /**
+         * Revoke anyone's API token (audited)
+         * @description Roles: admin.
+         */
+        delete: operations["revokeAnyToken"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/admin/sign-in-throttle": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Accounts and client addresses with failed sign-ins in the current window, and how long they wait
+         * @description Roles: admin.
+         */
+        get: operations["listSignInThrottle"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/v1/admin/sign-in-throttle/clear": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Forget an account's failed sign-ins, from every client (audited)
+         * @description Roles: admin.
+         */
+        post: operations["clearSignInThrottle"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/v1/components": {
         parameters: {
             query?: never;
@@ -1441,6 +1521,212 @@ export interface operations {
                         page: number;
                         pageSize: number;
                         hasMore: boolean;
+                    };
+                };
+            };
+            /** @description Error */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        error: {
+                            code: string;
+                            message: string;
+                            issues?: {
+                                path?: string;
+                                message?: string;
+                            }[];
+                        };
+                    };
+                };
+            };
+        };
+    };
+    listEveryonesTokens: {
+        parameters: {
+            query?: {
+                live?: "true" | "false";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        items: {
+                            id: string;
+                            name: string;
+                            tokenPrefix: string;
+                            /** Format: date-time */
+                            expiresAt: string;
+                            revokedAt: string | null;
+                            lastUsedAt: string | null;
+                            /** Format: date-time */
+                            createdAt: string;
+                            userEmail: string;
+                            userName: string;
+                        }[];
+                    };
+                };
+            };
+            /** @description Error */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        error: {
+                            code: string;
+                            message: string;
+                            issues?: {
+                                path?: string;
+                                message?: string;
+                            }[];
+                        };
+                    };
+                };
+            };
+        };
+    };
+    revokeAnyToken: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        token: {
+                            id: string;
+                            name: string;
+                            tokenPrefix: string;
+                            /** Format: date-time */
+                            expiresAt: string;
+                            revokedAt: string | null;
+                            lastUsedAt: string | null;
+                            /** Format: date-time */
+                            createdAt: string;
+                        };
+                    };
+                };
+            };
+            /** @description Error */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        error: {
+                            code: string;
+                            message: string;
+                            issues?: {
+                                path?: string;
+                                message?: string;
+                            }[];
+                        };
+                    };
+                };
+            };
+        };
+    };
+    listSignInThrottle: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        accounts: {
+                            email: string;
+                            failures: number;
+                            /** Format: date-time */
+                            windowEndsAt: string;
+                            clients: number;
+                            longestWaitSec: number;
+                        }[];
+                        addresses: {
+                            address: string;
+                            failures: number;
+                            waitSec: number;
+                        }[];
+                        windowMinutes: number;
+                    };
+                };
+            };
+            /** @description Error */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        error: {
+                            code: string;
+                            message: string;
+                            issues?: {
+                                path?: string;
+                                message?: string;
+                            }[];
+                        };
+                    };
+                };
+            };
+        };
+    };
+    clearSignInThrottle: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    /** Format: email */
+                    email: string;
+                };
+            };
+        };
+        responses: {
+            /** @description OK */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        cleared: number;
                     };
                 };
             };
