@@ -8,7 +8,8 @@ import type { AuditEventView } from "@/lib/api/operations/admin";
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { Pager } from "@/components/ui/pager";
 
 const FILTERS = [
   { key: "action", label: "Action contains" },
@@ -61,11 +62,7 @@ export function AuditLog() {
         </thead>
         <tbody>
           {q.isPending && <SkeletonRows cols={5} />}
-          {q.isError && (
-            <EmptyRow colSpan={5}>
-              Could not load the audit log. <button className="underline" onClick={() => void q.refetch()}>Retry</button>
-            </EmptyRow>
-          )}
+          {q.isError && <ErrorRow colSpan={5} error={q.error} onRetry={() => void q.refetch()} />}
           {q.data?.items.length === 0 && <EmptyRow colSpan={5}>No events match.</EmptyRow>}
           {q.data?.items.map((e) => (
             <tr key={e.id}>
@@ -83,11 +80,7 @@ export function AuditLog() {
           ))}
         </tbody>
       </Table>
-      <div className="mt-3 flex items-center gap-2 text-sm">
-        <Button variant="secondary" disabled={page <= 1} onClick={() => setParams({ page: String(page - 1) })}>Newer</Button>
-        <span className="tabular-nums text-ink-600">Page {page}</span>
-        <Button variant="secondary" disabled={!q.data?.hasMore} onClick={() => setParams({ page: String(page + 1) })}>Older</Button>
-      </div>
+      <Pager page={page} hasMore={q.data?.hasMore} previousLabel="Newer" nextLabel="Older" label="Audit pages" />
     </Panel>
   );
 }

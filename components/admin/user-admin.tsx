@@ -4,7 +4,6 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
 import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
 import { createUserBody, type CreateUserBody, type UpdateUserBody, type UserView } from "@/lib/api/operations/admin";
 import { ROLES, ROLE_LABELS, type Role } from "@/lib/auth/roles";
 import { Button } from "@/components/ui/button";
@@ -12,7 +11,9 @@ import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { Badge } from "@/components/ui/badge";
-import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 
 export function UserAdmin({ currentUserId }: { currentUserId: string }) {
   const qc = useQueryClient();
@@ -20,6 +21,7 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
   const form = useForm<CreateUserBody>({ resolver: zodResolver(createUserBody), defaultValues: { role: "viewer" } });
   const create = useMutation({
     mutationFn: (v: CreateUserBody) => apiFetch("/api/v1/users", { method: "POST", json: v }),
+    onError: (err) => showServerIssues(form, err),
     onSuccess: () => {
       form.reset({ email: "", name: "", password: "", role: "viewer" });
       void qc.invalidateQueries({ queryKey: ["users"] });
@@ -34,7 +36,7 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
   return (
     <div className="space-y-5">
       <Panel title="People">
-        {update.error && <div className="mb-3"><Notice tone="fault" role="alert">{(update.error as AppError).message}</Notice></div>}
+        {update.error && <div className="mb-3"><ErrorNotice error={update.error} /></div>}
         <Table caption="Users">
           <thead>
             <tr>
@@ -47,11 +49,7 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
           </thead>
           <tbody>
             {users.isPending && <SkeletonRows cols={5} />}
-            {users.isError && (
-              <EmptyRow colSpan={5}>
-                Could not load users. <button className="underline" onClick={() => void users.refetch()}>Retry</button>
-              </EmptyRow>
-            )}
+            {users.isError && <ErrorRow colSpan={5} error={users.error} onRetry={() => void users.refetch()} />}
             {users.data?.items.map((u) => (
               <tr key={u.id}>
                 <Td className="font-medium">{u.name}</Td>
@@ -85,7 +83,7 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
       </Panel>
       <Panel title="Add a user">
         <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-3xl gap-3 md:grid-cols-2" noValidate>
-          {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{(create.error as AppError).message}</Notice></div>}
+          {create.error && <div className="md:col-span-2"><ErrorNotice error={create.error} besideFields={fieldsOf(form)} /></div>}
           {create.isSuccess && <div className="md:col-span-2"><Notice tone="ok" role="status">User created.</Notice></div>}
           <Field id="new-name" label="Name" error={errors.name?.message}>
             <Input {...describedBy("new-name", errors.name?.message)} {...form.register("name")} />

@@ -9,7 +9,7 @@ import { capabilityFor, nextStage, WITHDRAWABLE } from "@/lib/release/transition
 import { Button } from "@/components/ui/button";
 import { Field, Textarea } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import { ErrorNotice } from "./error-notice";
+import { ErrorNotice } from "@/components/ui/error-notice";
 import { useBuildMutation } from "./use-build";
 
 const PROMOTE_LABEL: Record<string, string> = {

@@ -6,12 +6,12 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery } from "@tanstack/react-query";
 import { useForm, useWatch } from "react-hook-form";
 import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
 import { createBuildBody, type BuildOptions, type CreateBuildBody, type UploadView } from "@/lib/api/operations/builds";
 import { UPLOAD_MAX_BYTES } from "@/lib/release/upload-check";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
-import { Notice } from "@/components/ui/notice";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 import { Panel } from "@/components/ui/panel";
 
 /** The API body without the firmware id: the file is uploaded first, on submit. */
@@ -40,9 +40,9 @@ export function NewBuildForm() {
       return apiFetch<{ build: { id: string } }>("/api/v1/builds", { method: "POST", json: { ...values, firmwareUploadId: up.upload.id } });
     },
     onSuccess: (r) => router.push(`/builds/${r.build.id}`),
+    onError: (err) => showServerIssues(form, err),
   });
   const { errors } = form.formState;
-  const serverError = create.error as AppError | null;
   const firstBoard = options.data?.boardModels[0]?.id;
 
   return (
@@ -118,15 +118,7 @@ export function NewBuildForm() {
             onChange={(e) => setFile(e.target.files?.[0] ?? null)}
           />
         </Field>
-        {serverError && (
-          <Notice tone="fault" role="alert" title={serverError.message}>
-            {serverError.issues && serverError.issues.length > 1 && (
-              <ul className="list-disc pl-5">
-                {serverError.issues.map((i, n) => <li key={n}>{i.message}</li>)}
-              </ul>
-            )}
-          </Notice>
-        )}
+        <ErrorNotice error={create.error} besideFields={fieldsOf(form)} />
         <div>
           <Button type="submit" disabled={create.isPending}>{create.isPending ? "Creating…" : "Create build"}</Button>
         </div>

@@ -7,17 +7,17 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
 import { createProfileBody, type CreateProfileBody, type ProfileSummaryView } from "@/lib/api/operations/profile-schemas";
 import type { CoolerModelView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
-import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { Badge } from "@/components/ui/badge";
 import { DataTable, type ServerPage } from "@/components/registry/data-table";
 import { FilterBar } from "@/components/registry/filter-bar";
 import { useListParams, serverTableProps } from "@/components/registry/use-list-params";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 
 const columns: ColumnDef<ProfileSummaryView>[] = [
   {
@@ -74,12 +74,13 @@ function CreateProfileForm({ coolers }: { coolers: CoolerModelView[] }) {
   const create = useMutation({
     mutationFn: (v: CreateProfileBody) => apiFetch<{ profile: { id: string } }>("/api/v1/profiles", { method: "POST", json: v }),
     onSuccess: (res) => router.push(`/profiles/${res.profile.id}`),
+    onError: (err) => showServerIssues(form, err),
   });
   const { errors } = form.formState;
   return (
     <Panel title="Start a profile">
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-3xl gap-3 md:grid-cols-2" noValidate>
-        {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{(create.error as AppError).message}</Notice></div>}
+        {create.error && <div className="md:col-span-2"><ErrorNotice error={create.error} besideFields={fieldsOf(form)} /></div>}
         <Field id="p-cooler" label="Cooler model" error={errors.coolerModelId?.message}>
           <Select {...describedBy("p-cooler", errors.coolerModelId?.message)} {...form.register("coolerModelId")}>
             <option value="">Choose…</option>

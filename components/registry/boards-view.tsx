@@ -9,6 +9,7 @@ import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { BoardModelForm, BoardRevisionForm } from "./board-forms";
+import { ErrorNotice } from "@/components/ui/error-notice";
 
 const hex = (n: number) => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
 
@@ -24,9 +25,7 @@ export function BoardsView({ canWrite }: { canWrite: boolean }) {
       )}
       {q.isError && (
         <Panel title="Board models">
-          <p className="text-sm text-ink-700">
-            Could not load the boards. <button className="underline" onClick={() => void q.refetch()}>Retry</button>
-          </p>
+          <ErrorNotice error={q.error} onRetry={() => void q.refetch()} />
         </Panel>
       )}
       {q.data?.items.map((b) => (

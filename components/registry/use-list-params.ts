@@ -24,21 +24,20 @@ export function useListParams(keys: readonly string[]) {
 
 /**
  * The props a server-paged DataTable takes from its query and the URL list state: one place
- * for sorting (which resets to page 1), paging and retry, instead of the same wiring per list.
+ * for sorting (which resets to page 1), the page shown and retry, instead of the same wiring per list.
  */
 export function serverTableProps<D>(
   list: ReturnType<typeof useListParams>,
-  query: { data: D | undefined; isPending: boolean; isError: boolean; refetch: () => Promise<unknown> },
+  query: { data: D | undefined; isPending: boolean; error: unknown; refetch: () => Promise<unknown> },
 ) {
   return {
     data: query.data,
     isPending: query.isPending,
-    isError: query.isError,
+    error: query.error,
     onRetry: () => void query.refetch(),
     sort: list.sort,
     dir: list.dir,
     onSort: (sort: string, dir: "asc" | "desc") => list.set({ sort, dir, page: "" }),
     page: list.page,
-    onPage: (p: number) => list.set({ page: String(p) }),
   };
 }

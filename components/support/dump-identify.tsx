@@ -3,13 +3,13 @@
 import { useMutation } from "@tanstack/react-query";
 import { useId, useState } from "react";
 import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
 import type { DumpIdentifyResult } from "@/lib/api/operations/support";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { Table, Td, Th } from "@/components/ui/table";
+import { ErrorNotice } from "@/components/ui/error-notice";
 
 const MATCH_LABEL = { exact: "Known version", hash_only: "Known content, other version", unknown: "Unknown" } as const;
 
@@ -47,7 +47,7 @@ export function DumpIdentify() {
         </div>
         <Button type="submit" disabled={!file || identify.isPending}>{identify.isPending ? "Reading…" : "Identify"}</Button>
       </form>
-      {identify.error && <div className="mt-3"><Notice tone="fault" role="alert">{(identify.error as AppError).message}</Notice></div>}
+      {identify.error && <div className="mt-3"><ErrorNotice error={identify.error} /></div>}
       {r && (
         <div className="mt-4 space-y-3" data-testid="dump-result">
           {r.status === "ok" && <Notice tone="ok" role="status" title="Dump is intact">CRC-32 {r.crc?.stored} matches; {r.slots.length} slot(s) read.</Notice>}

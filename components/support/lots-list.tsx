@@ -8,8 +8,9 @@ import { formText } from "@/components/ui/form-data";
 import { Button } from "@/components/ui/button";
 import { Input, Select } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
-import { StageBadge } from "./stage-badge";
+import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { Pager } from "@/components/ui/pager";
+import { StageBadge } from "@/components/ui/stage-badge";
 
 const SORTS = [
   { value: "serial", label: "First serial" },
@@ -86,11 +87,7 @@ export function LotsList({ options }: { options: LotOptions | undefined }) {
         </thead>
         <tbody>
           {q.isPending && <SkeletonRows cols={6} />}
-          {q.isError && (
-            <EmptyRow colSpan={6}>
-              Could not load lots. <button className="underline" onClick={() => void q.refetch()}>Retry</button>
-            </EmptyRow>
-          )}
+          {q.isError && <ErrorRow colSpan={6} error={q.error} onRetry={() => void q.refetch()} />}
           {q.data?.items.length === 0 && <EmptyRow colSpan={6}>No lots match.</EmptyRow>}
           {q.data?.items.map((l) => (
             <tr key={l.id}>
@@ -104,11 +101,7 @@ export function LotsList({ options }: { options: LotOptions | undefined }) {
           ))}
         </tbody>
       </Table>
-      <div className="mt-3 flex items-center gap-2 text-sm">
-        <Button variant="secondary" disabled={page <= 1} onClick={() => setParams({ page: String(page - 1) })}>Previous</Button>
-        <span className="tabular-nums text-ink-600">Page {page}</span>
-        <Button variant="secondary" disabled={!q.data?.hasMore} onClick={() => setParams({ page: String(page + 1) })}>Next</Button>
-      </div>
+      <Pager page={page} hasMore={q.data?.hasMore} label="Lot pages" />
     </Panel>
   );
 }

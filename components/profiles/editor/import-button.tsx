@@ -1,9 +1,9 @@
 "use client";
 
 import { useRef, useState } from "react";
-import type { AppError } from "@/lib/api/errors";
+import { AppError } from "@/lib/api/errors";
 import { MAX_PROFILE_BYTES } from "@/lib/api/operations/profile-schemas";
-import { Notice } from "@/components/ui/notice";
+import { ErrorNotice } from "@/components/ui/error-notice";
 import { buttonClass } from "@/components/ui/button";
 
 /** Uploads a .json profile; the server validates it and replaces the draft, then the editor shows it. */
@@ -14,7 +14,7 @@ export function ImportButton({ profileId, onImported }: { profileId: string; onI
   async function upload(file: File) {
     setError(null);
     if (file.size > MAX_PROFILE_BYTES) {
-      setError({ message: `The file is ${Math.ceil(file.size / 1024)} KiB; at most 256 KiB is accepted.` } as AppError);
+      setError(new AppError("payload_too_large", `The file is ${Math.ceil(file.size / 1024)} KiB; at most 256 KiB is accepted.`));
       return;
     }
     setBusy(true);
@@ -23,12 +23,12 @@ export function ImportButton({ profileId, onImported }: { profileId: string; onI
       const res = await fetch(`/api/v1/profiles/${profileId}/import`, { method: "POST", headers: { "content-type": "application/json" }, body: text });
       const body = (await res.json().catch(() => null)) as { error?: { message: string; issues?: { path: string; message: string }[] } } | null;
       if (!res.ok) {
-        setError({ message: body?.error?.message ?? `The server answered ${res.status}.`, issues: body?.error?.issues } as AppError);
+        setError(new AppError("validation_failed", body?.error?.message ?? `The server answered ${res.status}.`, { issues: body?.error?.issues }));
         return;
       }
       onImported(`${JSON.stringify(JSON.parse(text), null, 2)}\n`);
     } catch {
-      setError({ message: "Could not read or send the file." } as AppError);
+      setError(new AppError("unavailable", "Could not read or send the file."));
     } finally {
       setBusy(false);
       if (input.current) input.current.value = "";
@@ -40,11 +40,7 @@ export function ImportButton({ profileId, onImported }: { profileId: string; onI
         Import .json
         <input ref={input} type="file" accept=".json,application/json" className="sr-only" disabled={busy} onChange={(e) => { const f = e.target.files?.[0]; if (f) void upload(f); }} />
       </label>
-      {error && (
-        <Notice tone="fault" role="alert" title={error.message}>
-          {error.issues && <ul className="list-disc pl-5">{error.issues.map((i, n) => <li key={n}><code className="text-xs">{i.path}</code> {i.message}</li>)}</ul>}
-        </Notice>
-      )}
+      <ErrorNotice error={error} />
     </div>
   );
 }
