@@ -53,9 +53,9 @@ export default tseslint.config(
   {
     // lib/ is pure domain logic shared by browser and server; components never reach the database.
     files: ["lib/**/*.ts", "components/**/*.{ts,tsx}"],
-    ignores: ["lib/server/**"],
+    ignores: ["lib/platform/**", "lib/use-cases/**"],
     rules: {
-      "no-restricted-imports": ["error", { patterns: [{ group: ["@/db", "@/db/*", "pg", "drizzle-orm", "drizzle-orm/*"], message: "Only db/ and lib/server talk to PostgreSQL." }] }],
+      "no-restricted-imports": ["error", { patterns: [{ group: ["@/db", "@/db/*", "pg", "drizzle-orm", "drizzle-orm/*"], message: "Only db/, lib/platform and lib/use-cases reach PostgreSQL." }] }],
     },
   },
 );

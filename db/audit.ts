@@ -2,7 +2,7 @@ import "server-only";
 import { and, desc, eq, gte, ilike, lte, or, type SQL } from "drizzle-orm";
 import { auditEvents } from "./schema";
 import type { Executor } from "./client";
-import { logger } from "@/lib/server/log";
+import { logger } from "@/lib/platform/log";
 
 export interface AuditActor {
   userId: string | null;

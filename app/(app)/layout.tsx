@@ -1,6 +1,6 @@
 import Image from "next/image";
 import Link from "next/link";
-import { requirePageActor } from "@/lib/server/guard";
+import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { Providers } from "@/components/providers";
 import { Sidebar } from "@/components/shell/sidebar";

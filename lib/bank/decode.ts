@@ -20,6 +20,11 @@ import {
 import { dutyFromCode, hysteresisFromCode, rampFromCode, tempFromCode } from "./quantise";
 import type { BankIssue, DecodeBankResult, DecodedSlot } from "./types";
 
+/** Smallest slot: fixed fields and two curves of one point each. */
+const MIN_SLOT_BYTES = SLOT_FIXED_BYTES + 2 * (CURVE_FIXED_BYTES + BYTES_PER_POINT);
+/** What erased EEPROM or flash reads as. */
+const ERASED_BYTE = 0xff;
+
 const hex32 = (n: number): string => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
 
 class SlotReader {
@@ -71,7 +76,7 @@ function readCurve(r: SlotReader, name: string): CurveSettings | null {
 
 function readSlot(bytes: Uint8Array, offset: number, limit: number, index: number, errors: BankIssue[]): { slot: DecodedSlot | null; next: number } {
   const length = bytes[offset]!;
-  const minLength = SLOT_FIXED_BYTES + 2 * (CURVE_FIXED_BYTES + BYTES_PER_POINT);
+  const minLength = MIN_SLOT_BYTES;
   if (length < minLength || offset + length > limit) {
     errors.push({ code: "bank.bad_slot_length", message: `Slot ${index} at offset ${offset} says it is ${length} bytes, which does not fit the image (${minLength} bytes at least, ${limit - offset} left).`, offset, actual: length });
     return { slot: null, next: limit };
@@ -100,8 +105,9 @@ function readSlot(bytes: Uint8Array, offset: number, limit: number, index: numbe
 
 /**
  * Reads a bank image (or a memory dump that starts with one; bytes after the
- * length the header gives are ignored). Checks magic, format version, length,
- * CRC-32 trailer (stored vs computed) and every slot's bounds and value
+ * length the header gives must be erased memory, 0xFF). Checks magic, format
+ * version, length, slot count (1–16 and no more than the length has room
+ * for), CRC-32 trailer (stored vs computed) and every slot's bounds and value
  * ranges. Never throws: problems come back in `errors`, and slots that could
  * be read are returned even when the CRC does not match.
  */
@@ -145,8 +151,22 @@ export function decodeBank(bytes: Uint8Array): DecodeBankResult {
   if (stored !== computed) {
     errors.push({ code: "bank.crc_mismatch", message: `CRC-32 mismatch: the image stores ${hex32(stored)} at offset ${crcAt} but its bytes give ${hex32(computed)}; the image is damaged.`, offset: crcAt, expected: stored, actual: computed });
   }
+  const erased = bytes.subarray(byteLength).findIndex((b) => b !== ERASED_BYTE);
+  if (erased !== -1) {
+    const at = byteLength + erased;
+    errors.push({ code: "bank.trailing_data", message: `Byte ${at} after the bank's CRC holds 0x${bytes[at]!.toString(16).toUpperCase().padStart(2, "0")}; past the image the memory must be erased (0xFF). The header's length is wrong or something else was written there.`, offset: at, expected: ERASED_BYTE, actual: bytes[at] });
+  }
+  if (result.slotCount === 0) {
+    errors.push({ code: "bank.no_slots", message: "The header gives 0 slots; a bank holds at least one profile version.", offset: 5, actual: 0 });
+    return result;
+  }
   if (result.slotCount > MAX_SLOTS) {
     errors.push({ code: "bank.too_many_slots", message: `The header gives ${result.slotCount} slots; at most ${MAX_SLOTS} are allowed.`, offset: 5, actual: result.slotCount });
+    return result;
+  }
+  const slotRoom = Math.floor((byteLength - HEADER_BYTES - CRC_BYTES) / MIN_SLOT_BYTES);
+  if (result.slotCount > slotRoom) {
+    errors.push({ code: "bank.slots_exceed_length", message: `The header gives ${result.slotCount} slots, but its length of ${byteLength} bytes has room for at most ${slotRoom} (a slot takes at least ${MIN_SLOT_BYTES} bytes).`, offset: 5, expected: slotRoom, actual: result.slotCount });
     return result;
   }
   let at = HEADER_BYTES;

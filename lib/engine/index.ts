@@ -92,7 +92,7 @@ export { writeIntelHex } from "../hex/write";
 /** Intel HEX reader: checks every record checksum, 02/04 addresses; never throws. */
 export { readIntelHex } from "../hex/read";
 /** Reader result (start address, bytes) and issues with their line. */
-export type { HexIssue, ReadHexResult } from "../hex/read";
+export type { HexIssue, HexStartRecord, ReadHexResult } from "../hex/read";
 /** Record checksum (two's complement of the byte sum) and the EOF record ":00000001FF". */
 export { recordChecksum, EOF_RECORD } from "../hex/record";
 

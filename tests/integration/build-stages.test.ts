@@ -3,15 +3,15 @@ import { and, eq } from "drizzle-orm";
 import { closeDb, getDb } from "./support/db";
 import { chunksOf, demoBoardId, freshDraftBuild, freshProfileVersions, mover } from "./support/builds";
 import { auditEvents, buildTransitions, builds, mailOutbox } from "@/db/schema";
-import { moveBuild, reviewBuild } from "@/lib/server/builds/stages";
+import { moveBuild, reviewBuild } from "@/lib/use-cases/builds/stages";
 import { recordWaiver } from "@/db/build-stages";
-import { acceptUpload } from "@/lib/server/builds/uploads";
+import { acceptUpload } from "@/lib/use-cases/builds/uploads";
 import { attachEvidence } from "@/db/build-stages";
 import { AppError } from "@/lib/api/errors";
 import { coolerNoise } from "@/lib/engine";
 import { MEASUREMENT_HEADER } from "@/lib/release/measurements";
 import { tinyPdf } from "@/db/seed/builds";
-import { checkSlots, checkStoredBuild } from "@/lib/server/builds/check";
+import { checkSlots, checkStoredBuild } from "@/lib/use-cases/builds/check";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 
 // Background delivery passes after a transition must not reach anybody's SMTP server.

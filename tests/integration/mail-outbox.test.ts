@@ -5,8 +5,8 @@ import { eq, sql } from "drizzle-orm";
 import { closeDb, getDb } from "./support/db";
 import { freshDraftBuild, mover } from "./support/builds";
 import { builds, mailOutbox } from "@/db/schema";
-import { moveBuild } from "@/lib/server/builds/stages";
-import { deliverDueMail, mailSenderIdle } from "@/lib/server/mail/sender";
+import { moveBuild } from "@/lib/use-cases/builds/stages";
+import { deliverDueMail, mailSenderIdle } from "@/lib/platform/mail/sender";
 
 // Background passes started by the transition itself go nowhere.
 process.env.SMTP_PORT = "1";

@@ -1,6 +1,6 @@
 import net from "node:net";
 import { describe, expect, it } from "vitest";
-import { s3Storage } from "@/lib/server/storage";
+import { s3Storage } from "@/lib/platform/storage";
 import { AppError } from "@/lib/api/errors";
 
 /** A loopback port with nothing listening: the fake S3 server is "down". */

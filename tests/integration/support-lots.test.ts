@@ -3,11 +3,11 @@ import { and, eq, sql } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "./support/db";
 import { createLot, importLots } from "@/db/lots";
 import { findLotBySerial, listKnownProfileVersions } from "@/db/lookup";
-import { identifyDumpBytes } from "@/lib/server/dump";
+import { identifyDumpBytes } from "@/lib/use-cases/support/identify-dump";
 import { writeIntelHex } from "@/lib/engine";
 import { boardModels, builds, productionLots } from "@/db/schema";
 import { parseLotsCsv } from "@/lib/lots/csv";
-import { lookupSerial } from "@/lib/server/lookup";
+import { lookupSerial } from "@/lib/use-cases/support/lookup";
 
 afterAll(closeDb);
 

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { requirePageActor } from "@/lib/server/guard";
+import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { PageHeader, Panel } from "@/components/ui/panel";
 import { ChangePasswordForm } from "@/components/account/change-password-form";

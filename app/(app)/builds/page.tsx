@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { requirePageActor } from "@/lib/server/guard";
+import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { can } from "@/lib/auth/roles";
 import { PageHeader } from "@/components/ui/panel";
 import { buttonClass } from "@/components/ui/button";

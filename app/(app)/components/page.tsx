@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { requirePageActor } from "@/lib/server/guard";
+import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { can } from "@/lib/auth/roles";
 import { PageHeader } from "@/components/ui/panel";
 import { ComponentsList } from "@/components/registry/components-list";

@@ -4,7 +4,7 @@ import { getDb } from "@/db/client";
 import { boardModels, components, coolerModels, profiles, uploads } from "@/db/schema";
 import { createBuild } from "@/db/builds";
 import { demoProfileDocument, insertProfileVersion } from "@/db/seed/builds";
-import { checkSlots } from "@/lib/server/builds/check";
+import { checkSlots } from "@/lib/use-cases/builds/check";
 import { demoActor } from "./db";
 
 /** A build version no other test run is likely to have used; parts stay within the bank's 0–255. */
@@ -54,7 +54,7 @@ export async function freshDraftBuild(opts: { authorEmail?: string; revisionRang
   return { ...build, authorUserId: author.userId, profileVersions: versions };
 }
 
-/** A demo account as a mover for lib/server/builds/stages. */
+/** A demo account as a mover for lib/use-cases/builds/stages. */
 export async function mover(email: string) {
   const a = await demoActor(email);
   const { getUserByEmail } = await import("@/db/users");

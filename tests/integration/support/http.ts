@@ -2,7 +2,7 @@ import { randomBytes } from "node:crypto";
 import { NextRequest } from "next/server";
 import { getDb } from "@/db/client";
 import { createToken } from "@/db/tokens";
-import { hashToken } from "@/lib/server/actor";
+import { hashToken } from "@/lib/platform/auth/actor";
 import { demoActor } from "./db";
 
 type RouteHandler = (req: NextRequest, ctx: { params: Promise<Record<string, string | string[]>> }) => Promise<Response>;

@@ -1,8 +1,9 @@
 import zlib from "node:zlib";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { bankBytes, contentHashHex, decodeBank, encodeBank, identifySlots, quantise, type CoolingProfile, type ProfileSettings } from "@/lib/engine";
-import { anyInRangeProfileArb, performanceProfile, quietProfile } from "./fixtures";
+import { bankBytes, contentHashHex, decodeBank, encodeBank, identifySlots, quantise, readIntelHex, writeIntelHex, type CoolingProfile, type ProfileSettings } from "@/lib/engine";
+import { demoBankImages } from "./demo-images";
+import { anyInRangeProfileArb, performanceProfile, quietProfile, validProfileArb } from "./fixtures";
 
 const settingsOf = (p: CoolingProfile): ProfileSettings => {
   const { criticalTempC, sensorLossDutyPct, pump, fans } = p;
@@ -152,4 +153,111 @@ describe("identify", () => {
     // Malformed registry entries are skipped, not fatal.
     expect(identifySlots(decodeBank(bytes).slots, [null, { profileVersionId: "x" }] as never).map((i) => i.match)).toEqual(["unknown", "unknown", "unknown"]);
   });
+});
+
+describe("strict bank decoder", () => {
+  const image = () => encodeOk([{ profile: quietProfile(), version: "1.0.0" }]);
+  /** Rewrites a header byte and recomputes the CRC, so only the header rule can object. */
+  const withHeader = (bytes: Uint8Array, offset: number, value: number): Uint8Array => {
+    const b = bytes.slice();
+    b[offset] = value;
+    new DataView(b.buffer).setUint32(b.length - 4, zlib.crc32(b.subarray(0, b.length - 4)), true);
+    return b;
+  };
+
+  it("refuses a header with 0 slots even when the CRC matches", () => {
+    const d = decodeBank(withHeader(image(), 5, 0));
+    expect(d.ok).toBe(false);
+    expect(d.errors.map((e) => e.code)).toEqual(["bank.no_slots"]);
+  });
+
+  it("refuses more slots than the header's length has room for", () => {
+    // One slot of 4 + 4 points is 15 + 8 + 16 = 39 bytes; the 51-byte image leaves 39 bytes for slots,
+    // room for 1 slot of the smallest size (23 bytes: two curves of one point).
+    const bytes = image();
+    expect(bytes.length).toBe(8 + 39 + 4);
+    const d = decodeBank(withHeader(bytes, 5, 2));
+    expect(d.errors[0]).toMatchObject({ code: "bank.slots_exceed_length", expected: 1, actual: 2 });
+    expect(d.ok).toBe(false);
+  });
+
+  it("refuses anything but erased memory (0xFF) after the CRC, naming the byte", () => {
+    const bytes = image();
+    const dump = new Uint8Array(bytes.length + 40).fill(0xff);
+    dump.set(bytes);
+    expect(decodeBank(dump).ok).toBe(true);
+    dump[bytes.length + 17] = 0x00;
+    const d = decodeBank(dump);
+    expect(d.ok).toBe(false);
+    expect(d.errors).toEqual([expect.objectContaining({ code: "bank.trailing_data", offset: bytes.length + 17, actual: 0 })]);
+  });
+
+  it("reports every single-byte change of the demo images, exhaustively (every position, every other value)", () => {
+    const images = demoBankImages();
+    expect(images.length).toBeGreaterThanOrEqual(3);
+    let tried = 0;
+    for (const { name, bytes } of images) {
+      expect(decodeBank(bytes).ok, name).toBe(true);
+      // As read back from a board: the image, then erased memory.
+      const dump = new Uint8Array(bytes.length + 16).fill(0xff);
+      dump.set(bytes);
+      for (let at = 0; at < dump.length; at++) {
+        for (let value = 0; value < 256; value++) {
+          if (value === dump[at]) continue;
+          const changed = dump.slice();
+          changed[at] = value;
+          const d = decodeBank(changed);
+          tried++;
+          if (d.ok || d.errors.length === 0) throw new Error(`${name}: byte ${at} changed to 0x${value.toString(16)} was read as a sound image`);
+        }
+      }
+    }
+    expect(tried).toBe(images.reduce((n, i) => n + (i.bytes.length + 16) * 255, 0));
+  }, 180_000);
+
+  it("reports every change of one character of a demo image's Intel HEX (every position; every hex digit, separator and control byte), or reads back the same bytes", () => {
+    const { bytes } = demoBankImages()[1]!;
+    const text = new TextEncoder().encode(writeIntelHex(bytes, 0x0801f800));
+    const values = [..."0123456789ABCDEFabcdef: \t\r\n"].map((c) => c.charCodeAt(0)).concat([0x00, 0x7f, 0xff]);
+    let reported = 0;
+    let tried = 0;
+    for (let at = 0; at < text.length; at++) {
+      for (const value of values) {
+        tried++;
+        if (value === text[at]) continue;
+        const changed = text.slice();
+        changed[at] = value;
+        const hex = readIntelHex(new TextDecoder().decode(changed));
+        if (!hex.ok || !decodeBank(hex.bytes).ok) {
+          reported++;
+          continue;
+        }
+        // Only a change of the line ending or trailing space can leave the file sound, and then its bytes are the image's.
+        expect(hex.bytes).toEqual(bytes);
+        expect(hex.startAddress).toBe(0x0801f800);
+      }
+    }
+    expect(tried).toBeGreaterThan(text.length * 25);
+    expect(reported).toBeGreaterThan(tried * 0.95);
+  }, 180_000);
+
+  it("property: banks of hundreds of bytes round-trip and any one changed byte is reported", () => {
+    let largest = 0;
+    fc.assert(
+      fc.property(fc.array(validProfileArb, { minLength: 1, maxLength: 16, size: "max" }), fc.nat(), fc.integer({ min: 1, max: 255 }), (profiles, pick, delta) => {
+        const bytes = encodeOk(profiles.map((p, i) => ({ profile: p, version: `1.${i}.0` })));
+        largest = Math.max(largest, bytes.length);
+        const d = decodeBank(bytes);
+        expect(d.ok).toBe(true);
+        expect(d.slots).toHaveLength(profiles.length);
+        const changed = bytes.slice();
+        const at = pick % bytes.length;
+        changed[at] = (changed[at]! + delta) & 0xff;
+        expect(decodeBank(changed).ok).toBe(false);
+      }),
+      { numRuns: 300 },
+    );
+    // Reached realistic images: several slots of several points (fast-check's default size stays near 10 elements).
+    expect(largest).toBeGreaterThanOrEqual(400);
+  }, 120_000);
 });

@@ -103,3 +103,4 @@ export const hardwareArb: fc.Arbitrary<HardwareContext> = fc
       radiator: { thermalResistanceAtMaxFanKPerW: h.rFast, thermalResistanceAtMinFanKPerW: h.rFast + h.rExtra },
     };
   });
+

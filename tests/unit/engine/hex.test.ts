@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { EOF_RECORD, readIntelHex, recordChecksum, writeIntelHex } from "@/lib/engine";
+import { formatRecord, RECORD_DATA } from "@/lib/hex/record";
 
 const recordBytes = (rec: string): number[] => (rec.slice(1).match(/../g) ?? []).map((h) => parseInt(h, 16));
 
@@ -51,15 +52,90 @@ describe("Intel HEX", () => {
     expect(Array.from(r.bytes)).toEqual([1, 2, 3, 4]);
   });
 
-  it("property: write → read round-trips at any base address", () => {
+  it("property: write → read round-trips at any base address, for images of hundreds of bytes and many records", () => {
+    let largestBytes = 0;
+    let mostRecords = 0;
     fc.assert(
-      fc.property(fc.uint8Array({ minLength: 1, maxLength: 600 }), fc.integer({ min: 0, max: 0xfffff000 }), (data, base) => {
+      fc.property(fc.uint8Array({ minLength: 1, maxLength: 2048, size: "max" }), fc.integer({ min: 0, max: 0xfffff000 }), (data, base) => {
         const r = readIntelHex(writeIntelHex(data, base));
         expect(r.ok).toBe(true);
         expect(r.startAddress).toBe(base);
         expect(r.bytes).toEqual(data);
+        largestBytes = Math.max(largestBytes, data.length);
+        mostRecords = Math.max(mostRecords, r.recordCount);
       }),
+      { numRuns: 200 },
     );
+    // The generator really reached realistic sizes (fast-check's default size would stay near 10 bytes).
+    expect(largestBytes).toBeGreaterThanOrEqual(500);
+    expect(mostRecords).toBeGreaterThanOrEqual(32);
+  }, 120_000);
+
+  it("property: a data record repeated or moved onto another's address is refused, naming both lines", () => {
+    let mostLines = 0;
+    fc.assert(
+      fc.property(fc.uint8Array({ minLength: 64, maxLength: 1024, size: "max" }), fc.nat(), fc.nat(), fc.integer({ min: -8, max: 8 }), (data, pick, put, shift) => {
+        const lines = writeIntelHex(data, 0x8000).trim().split("\n");
+        mostLines = Math.max(mostLines, lines.length);
+        // Line 1 is the address record, the last is end-of-file: data records lie between.
+        const dataLines = lines.length - 2;
+        const from = 1 + (pick % dataLines);
+        const bytes = recordBytes(lines[from]!);
+        const payload = bytes.slice(4, -1);
+        // Shifted by less than its own length, the copy always overlaps the original record.
+        const address = Math.max(0, ((bytes[1]! << 8) | bytes[2]!) + (shift % payload.length));
+        const copy = formatRecord(RECORD_DATA, address, payload);
+        const at = 1 + (put % (dataLines + 1));
+        lines.splice(at, 0, copy);
+        const r = readIntelHex(lines.join("\n"));
+        expect(r.ok).toBe(false);
+        const overlap = r.errors.find((e) => e.code === "hex.overlap");
+        expect(overlap).toBeDefined();
+        const named = [...overlap!.message.matchAll(/Lines (\d+) and (\d+)/g)].flatMap((m) => [Number(m[1]), Number(m[2])]);
+        expect(named).toContain(at + 1);
+      }),
+      { numRuns: 300 },
+    );
+    expect(mostLines).toBeGreaterThanOrEqual(40);
+  }, 120_000);
+
+  it("refuses two records for one address, naming both lines", () => {
+    const text = [":020000040000FA", ":0400100001020304E2", ":0400100005060708D2", EOF_RECORD].join("\n");
+    const r = readIntelHex(text);
+    expect(r.ok).toBe(false);
+    expect(r.errors).toHaveLength(1);
+    expect(r.errors[0]).toMatchObject({ code: "hex.overlap", line: 3 });
+    expect(r.errors[0]!.message).toMatch(/^Lines 2 and 3 both write address 0x00000010–0x00000013/);
+    // A partial overlap names the one shared byte.
+    const partial = readIntelHex([":0400100001020304E2", ":0200130009AA38", EOF_RECORD].join("\n"));
+    expect(partial.errors.map((e) => e.code)).toEqual(["hex.overlap"]);
+    expect(partial.errors[0]!.message).toMatch(/^Lines 1 and 2 both write address 0x00000013;/);
+  });
+
+  it("refuses an end-of-file record with data, anything after it, and address records of the wrong length", () => {
+    const codes = (t: string) => readIntelHex(t).errors.map((e) => `${e.code}@${e.line}`);
+    // ":01000001AA54" is an end-of-file record carrying one byte (0x01+0x01+0xAA+0x54 = 0x100).
+    expect(codes(":0100000001FE\n:01000001AA54")).toEqual(["hex.bad_eof@2"]);
+    expect(codes(":0100000001FE\n:00000001FF\n:0100100002ED")).toEqual(["hex.after_eof@3"]);
+    expect(codes(":0100000001FE\n:00000001FF\ngarbage")).toEqual(["hex.after_eof@3"]);
+    // Extended linear address with 1 and 3 data bytes.
+    expect(codes(":0100000400FB\n:0100000001FE\n:00000001FF")).toEqual(["hex.bad_length@1"]);
+    expect(codes(":030000040000F009\n:0100000001FE\n:00000001FF")).toEqual(["hex.bad_length@1"]);
+    // Extended segment address with 1 byte; start records with 2 bytes.
+    expect(codes(":0100000210ED\n:0100000001FE\n:00000001FF")).toEqual(["hex.bad_length@1"]);
+    expect(codes(":0100000001FE\n:020000050000F9\n:00000001FF")).toEqual(["hex.bad_length@2"]);
+  });
+
+  it("reports start-address records 03 and 05 without placing data", () => {
+    // Type 03: CS = 0x1234, IP = 0x5678; type 05: EIP = 0x08000135 (checksums worked by hand: bytes sum to 0 mod 256).
+    const r = readIntelHex([":0100000001FE", ":0400000312345678E5", ":0400000508000135B9", EOF_RECORD].join("\n"));
+    expect(r.errors).toEqual([]);
+    expect(r.ok).toBe(true);
+    expect(Array.from(r.bytes)).toEqual([1]);
+    expect(r.startRecords).toEqual([
+      { line: 2, type: 3, segment: 0x1234, offset: 0x5678 },
+      { line: 3, type: 5, linearAddress: 0x08000135 },
+    ]);
   });
 
   it("reports the line of a record with a bad checksum", () => {

@@ -1,6 +1,6 @@
 import { Writable } from "node:stream";
 import { describe, expect, it } from "vitest";
-import { createLogger } from "@/lib/server/log";
+import { createLogger } from "@/lib/platform/log";
 
 describe("structured logs", () => {
   it("writes JSON lines with the request id and redacts secrets", () => {

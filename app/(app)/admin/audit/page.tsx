@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { Suspense } from "react";
-import { requirePageActor } from "@/lib/server/guard";
+import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { PageHeader } from "@/components/ui/panel";
 import { AuditLog } from "@/components/admin/audit-log";
 

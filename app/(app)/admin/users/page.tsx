@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { requirePageActor } from "@/lib/server/guard";
+import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { PageHeader } from "@/components/ui/panel";
 import { UserAdmin } from "@/components/admin/user-admin";
 

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { requirePageActor } from "@/lib/server/guard";
+import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { BuildPage } from "@/components/builds/build-page";
 
 export const metadata: Metadata = { title: "Build" };

@@ -1,5 +1,5 @@
 import NextAuth from "next-auth";
-import { authOptions } from "@/lib/server/auth";
+import { authOptions } from "@/lib/platform/auth/options";
 
 async function handler(req: Request, ctx: { params: Promise<{ nextauth: string[] }> }) {
   // next-auth v4 reads params synchronously; Next 16 hands them over as a promise.

@@ -1,4 +1,4 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { listAudit } from "@/lib/api/operations/admin";
 import { getDb } from "@/db/client";
 import { listAuditEvents } from "@/db/audit";

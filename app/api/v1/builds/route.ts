@@ -1,10 +1,10 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { createBuild, listBuilds } from "@/lib/api/operations/builds";
 import { getDb } from "@/db/client";
 import * as builds from "@/db/builds";
-import { auditActor } from "@/lib/server/actor";
+import { auditActor } from "@/lib/platform/auth/actor";
 import { AppError } from "@/lib/api/errors";
-import { checkSlots } from "@/lib/server/builds/check";
+import { checkSlots } from "@/lib/use-cases/builds/check";
 
 export const GET = apiRoute(listBuilds, async ({ query }) => ({ items: await builds.listBuilds(getDb(), { stage: query.stage, limit: 500 }) }));
 

@@ -1,8 +1,8 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { createComponent, listComponents } from "@/lib/api/operations/registry";
 import { getDb } from "@/db/client";
 import * as components from "@/db/components";
-import { auditActor } from "@/lib/server/actor";
+import { auditActor } from "@/lib/platform/auth/actor";
 
 export const GET = apiRoute(listComponents, async ({ query }) => components.listComponents(getDb(), query));
 

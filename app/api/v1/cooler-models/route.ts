@@ -1,8 +1,8 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { createCoolerModel, listCoolerModels } from "@/lib/api/operations/registry";
 import { getDb } from "@/db/client";
 import * as coolers from "@/db/cooler-models";
-import { auditActor } from "@/lib/server/actor";
+import { auditActor } from "@/lib/platform/auth/actor";
 
 export const GET = apiRoute(listCoolerModels, async ({ query }) => coolers.listCoolerModels(getDb(), query));
 

@@ -1,10 +1,10 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { lookupSerial as lookupOp } from "@/lib/api/operations/support";
 import { getDb } from "@/db/client";
 import { recordLookup } from "@/db/lookup";
 import { AppError } from "@/lib/api/errors";
 import { formatSerial, parseSerial } from "@/lib/serials/serial";
-import { lookupSerial } from "@/lib/server/lookup";
+import { lookupSerial } from "@/lib/use-cases/support/lookup";
 
 export const GET = apiRoute(lookupOp, async ({ actor, query }) => {
   const parsed = parseSerial(query.serial);

@@ -1,9 +1,9 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { createLot as createLotOp, listLots as listLotsOp } from "@/lib/api/operations/support";
 import { getDb } from "@/db/client";
 import { createLot, listLots } from "@/db/lots";
-import { auditActor } from "@/lib/server/actor";
-import { toLotView } from "@/lib/server/lot-view";
+import { auditActor } from "@/lib/platform/auth/actor";
+import { toLotView } from "@/lib/use-cases/lots/lot-view";
 import { AppError } from "@/lib/api/errors";
 
 export const GET = apiRoute(listLotsOp, async ({ query }) => {

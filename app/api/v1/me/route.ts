@@ -1,4 +1,4 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { getMe } from "@/lib/api/operations/account";
 
 export const GET = apiRoute(getMe, async ({ actor }) => ({

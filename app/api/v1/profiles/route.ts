@@ -1,8 +1,8 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { createProfile, listProfiles } from "@/lib/api/operations/profiles";
 import { getDb } from "@/db/client";
 import * as profiles from "@/db/profiles";
-import { auditActor } from "@/lib/server/actor";
+import { auditActor } from "@/lib/platform/auth/actor";
 
 export const GET = apiRoute(listProfiles, async ({ query }) => {
   const page = await profiles.listProfiles(getDb(), query);

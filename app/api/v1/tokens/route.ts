@@ -1,9 +1,9 @@
 import { randomBytes } from "node:crypto";
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { createToken, listTokens } from "@/lib/api/operations/account";
 import { getDb } from "@/db/client";
 import * as tokens from "@/db/tokens";
-import { auditActor, hashToken } from "@/lib/server/actor";
+import { auditActor, hashToken } from "@/lib/platform/auth/actor";
 
 export const GET = apiRoute(listTokens, async ({ actor }) => ({ items: await tokens.listTokens(getDb(), { userId: actor.userId }) }));
 

@@ -1,9 +1,9 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { createUser, listUsers } from "@/lib/api/operations/admin";
 import { getDb } from "@/db/client";
 import * as users from "@/db/users";
-import { auditActor } from "@/lib/server/actor";
-import { hashPassword } from "@/lib/server/password";
+import { auditActor } from "@/lib/platform/auth/actor";
+import { hashPassword } from "@/lib/platform/auth/password";
 
 export const GET = apiRoute(listUsers, async () => ({ items: await users.listUsers(getDb()) }));
 

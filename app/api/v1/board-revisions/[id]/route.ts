@@ -1,11 +1,11 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { getBoardRevision, updateBoardRevision } from "@/lib/api/operations/registry";
 import { AppError } from "@/lib/api/errors";
 import { getDb } from "@/db/client";
 import * as boards from "@/db/boards";
 import { listVersionsForBoardModel } from "@/db/profile-versions";
 import { compatibilityCells } from "@/lib/registry/version-image";
-import { auditActor } from "@/lib/server/actor";
+import { auditActor } from "@/lib/platform/auth/actor";
 
 export const GET = apiRoute(getBoardRevision, async ({ params }) => {
   const db = getDb();

@@ -1,4 +1,4 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { getBuildOptions } from "@/lib/api/operations/builds";
 import { getDb } from "@/db/client";
 import { listBoardModels, listRevisions, listSlotCandidates } from "@/db/builds";

@@ -1,10 +1,10 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { identifyDump, MAX_DUMP_BYTES } from "@/lib/api/operations/support";
 import { getDb } from "@/db/client";
 import { listKnownProfileVersions } from "@/db/lookup";
 import { AppError } from "@/lib/api/errors";
-import { firstFormFile, readRawBody } from "@/lib/server/raw-body";
-import { identifyDumpBytes } from "@/lib/server/dump";
+import { firstFormFile, readRawBody } from "@/lib/platform/http/raw-body";
+import { identifyDumpBytes } from "@/lib/use-cases/support/identify-dump";
 
 export const POST = apiRoute(identifyDump, async ({ req }) => {
   // Multipart framing adds a little to the file itself.

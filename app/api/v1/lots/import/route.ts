@@ -1,9 +1,9 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { importLots as importLotsOp, MAX_LOTS_CSV_BYTES, type ImportResult } from "@/lib/api/operations/support";
 import { getDb } from "@/db/client";
 import { importLots } from "@/db/lots";
-import { auditActor } from "@/lib/server/actor";
-import { readRawBody } from "@/lib/server/raw-body";
+import { auditActor } from "@/lib/platform/auth/actor";
+import { readRawBody } from "@/lib/platform/http/raw-body";
 import { parseLotsCsv } from "@/lib/lots/csv";
 
 export const POST = apiRoute(importLotsOp, async ({ actor, query, req, requestId }): Promise<ImportResult> => {

@@ -1,4 +1,4 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { getLotOptions } from "@/lib/api/operations/support";
 import { getDb } from "@/db/client";
 import { lotOptions } from "@/db/lots";

@@ -1,10 +1,10 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { changePassword } from "@/lib/api/operations/account";
 import { AppError } from "@/lib/api/errors";
 import { getDb } from "@/db/client";
 import { getUserById, setPasswordHash } from "@/db/users";
-import { hashPassword, verifyPassword } from "@/lib/server/password";
-import { auditActor } from "@/lib/server/actor";
+import { hashPassword, verifyPassword } from "@/lib/platform/auth/password";
+import { auditActor } from "@/lib/platform/auth/actor";
 
 export const POST = apiRoute(changePassword, async ({ actor, body, requestId }) => {
   const db = getDb();

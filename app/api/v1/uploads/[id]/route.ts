@@ -1,9 +1,9 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { downloadUpload } from "@/lib/api/operations/builds";
 import { getDb } from "@/db/client";
 import { getUpload } from "@/db/uploads";
 import { AppError } from "@/lib/api/errors";
-import { getStorage } from "@/lib/server/storage";
+import { getStorage } from "@/lib/platform/storage";
 
 /** The stored name is a label only: it is quoted and stripped of anything but safe characters. */
 function dispositionName(name: string): string {

@@ -1,4 +1,4 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { downloadBank } from "@/lib/api/operations/builds";
 import { getDb } from "@/db/client";
 import { getBuildImage, listRevisions } from "@/db/builds";

@@ -1,11 +1,11 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { uploadEvidence } from "@/lib/api/operations/builds";
 import { attachEvidence } from "@/db/build-stages";
 import { getBuild } from "@/db/builds";
 import { getDb } from "@/db/client";
 import { AppError } from "@/lib/api/errors";
-import { auditActor } from "@/lib/server/actor";
-import { acceptUpload, requestBody } from "@/lib/server/builds/uploads";
+import { auditActor } from "@/lib/platform/auth/actor";
+import { acceptUpload, requestBody } from "@/lib/use-cases/builds/uploads";
 
 export const POST = apiRoute(uploadEvidence, async ({ actor, params, query, req, requestId }) => {
   // 404 before reading a byte of the upload.

@@ -1,4 +1,4 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { downloadVersion } from "@/lib/api/operations/profiles";
 import { AppError } from "@/lib/api/errors";
 import { getDb } from "@/db/client";

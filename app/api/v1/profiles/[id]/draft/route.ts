@@ -1,7 +1,7 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { saveDraft } from "@/lib/api/operations/profiles";
 import { getDb } from "@/db/client";
 import * as profiles from "@/db/profiles";
-import { auditActor } from "@/lib/server/actor";
+import { auditActor } from "@/lib/platform/auth/actor";
 
 export const PUT = apiRoute(saveDraft, async ({ actor, params, body, requestId }) => profiles.saveDraft(getDb(), auditActor(actor, requestId), { id: params.id, text: body.text }));

@@ -1,10 +1,10 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { importDraft } from "@/lib/api/operations/profiles";
 import { AppError } from "@/lib/api/errors";
 import { getDb } from "@/db/client";
 import * as profiles from "@/db/profiles";
-import { auditActor } from "@/lib/server/actor";
-import { readTextBody } from "@/lib/server/read-text";
+import { auditActor } from "@/lib/platform/auth/actor";
+import { readTextBody } from "@/lib/platform/http/read-text";
 import { validateProfileText } from "@/lib/engine";
 import { documentText } from "@/lib/registry/starter-profile";
 

@@ -1,10 +1,10 @@
-import { apiRoute } from "@/lib/server/api";
+import { apiRoute } from "@/lib/platform/http/api-route";
 import { listVersions, publishVersion } from "@/lib/api/operations/profiles";
 import { AppError } from "@/lib/api/errors";
 import { getDb } from "@/db/client";
 import { getProfileRow, listVersionsOfProfile } from "@/db/profiles";
 import * as versions from "@/db/profile-versions";
-import { auditActor } from "@/lib/server/actor";
+import { auditActor } from "@/lib/platform/auth/actor";
 
 export const GET = apiRoute(listVersions, async ({ params }) => {
   const db = getDb();

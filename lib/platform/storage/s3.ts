@@ -2,7 +2,7 @@ import "server-only";
 import { AppError } from "@/lib/api/errors";
 import { createHash } from "node:crypto";
 import { CreateBucketCommand, DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
-import { assertKey, limitedChunks, newKey, type ByteSource, type PutOptions, type Storage, type StoredObject } from "./types";
+import { assertKey, limitedChunks, newKey, type ByteSource, type PutOptions, type Storage, type StoredObject } from "@/lib/platform/storage/types";
 
 export interface S3Config {
   endpoint?: string;

@@ -1,7 +1,7 @@
 import "server-only";
 import { forbidden, redirect } from "next/navigation";
 import { can, type Capability } from "@/lib/auth/roles";
-import { getSessionActor, type Actor } from "./actor";
+import { getSessionActor, type Actor } from "@/lib/platform/auth/actor";
 
 /**
  * The guard every page and layout calls first: signed-out visitors go to sign-in, a role

@@ -5,13 +5,13 @@ import { z } from "zod";
 import { AppError, type FieldIssue } from "@/lib/api/errors";
 import type { Operation } from "@/lib/api/operation";
 import { can } from "@/lib/auth/roles";
-import { getSessionActor, getTokenActor, type Actor } from "./actor";
+import { getSessionActor, getTokenActor, type Actor } from "@/lib/platform/auth/actor";
 import { getDb } from "@/db/client";
 import { hitRateLimit, pruneRateLimits } from "@/db/rate-limit";
-import { fromDbError } from "./db-errors";
-import { env } from "./env";
-import { logger } from "./log";
-import { readCappedBody } from "./raw-body";
+import { fromDbError } from "@/lib/platform/http/db-errors";
+import { env } from "@/lib/platform/env";
+import { logger } from "@/lib/platform/log";
+import { readCappedBody } from "@/lib/platform/http/raw-body";
 
 const DEFAULT_MAX_BODY = 256 * 1024;
 

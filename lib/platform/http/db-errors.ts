@@ -1,6 +1,6 @@
 import "server-only";
 import { AppError } from "@/lib/api/errors";
-import { constraintIssues } from "./constraint-messages";
+import { constraintIssues } from "@/lib/platform/http/constraint-messages";
 
 const CONNECTION_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "EPIPE", "57P01", "57P02", "57P03", "08000", "08001", "08003", "08006"]);
 

@@ -7,7 +7,7 @@ import { getUserById } from "@/db/users";
 import { findActiveTokenCounting, touchToken } from "@/db/tokens";
 import type { AuditActor } from "@/db/audit";
 import type { Role } from "@/lib/auth/roles";
-import { authOptions } from "./auth";
+import { authOptions } from "@/lib/platform/auth/options";
 
 /** Who is making this request, as the server established it. */
 export interface Actor {

@@ -3,9 +3,9 @@ import type { Executor } from "@/db/client";
 import { getUpload } from "@/db/uploads";
 import { compareMeasurements, parseMeasurementsCsv, type MeasurementComparison } from "@/lib/release/measurements";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
-import { env } from "../env";
-import { getStorage } from "../storage";
-import { checkStoredBuild } from "./check";
+import { env } from "@/lib/platform/env";
+import { getStorage } from "@/lib/platform/storage";
+import { checkStoredBuild } from "@/lib/use-cases/builds/check";
 
 export type ComparisonResult =
   | { state: "none" }

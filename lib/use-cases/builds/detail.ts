@@ -5,8 +5,8 @@ import { getUploads } from "@/db/uploads";
 import { AppError } from "@/lib/api/errors";
 import { countingApprovers, openChangeRequests } from "@/lib/release/approvals";
 import { satisfiesRange } from "@/lib/engine";
-import { env } from "../env";
-import { measurementComparison } from "./measurements";
+import { env } from "@/lib/platform/env";
+import { measurementComparison } from "@/lib/use-cases/builds/measurements";
 
 /** Everything the build page shows, in one read. */
 export async function buildDetail(db: Executor, { id }: { id: string }) {

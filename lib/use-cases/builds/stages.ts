@@ -11,10 +11,10 @@ import { approvalGateIssues } from "@/lib/release/approvals";
 import { releaseMail, reviewRequestedMail, verdictMail, type BuildMailFacts } from "@/lib/release/mail";
 import { soundGateIssues } from "@/lib/release/measurements";
 import { capabilityFor } from "@/lib/release/transitions";
-import { env } from "../env";
-import { kickMailSender } from "../mail/sender";
-import { checkStoredBuild } from "./check";
-import { measurementComparison } from "./measurements";
+import { env } from "@/lib/platform/env";
+import { kickMailSender } from "@/lib/platform/mail/sender";
+import { checkStoredBuild } from "@/lib/use-cases/builds/check";
+import { measurementComparison } from "@/lib/use-cases/builds/measurements";
 
 type Mover = AuditActor & { userId: string; role: Role; name: string };
 

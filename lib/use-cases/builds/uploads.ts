@@ -1,12 +1,12 @@
 import "server-only";
-import { assertIdentityEncoding } from "@/lib/server/raw-body";
+import { assertIdentityEncoding } from "@/lib/platform/http/raw-body";
 import type { NextRequest } from "next/server";
 import { getDb, type Tx } from "@/db/client";
 import type { AuditActor } from "@/db/audit";
 import { insertUpload } from "@/db/uploads";
 import { AppError } from "@/lib/api/errors";
 import { checkUploadContent, uploadNameProblem, UPLOAD_MAX_BYTES, type UploadKind } from "@/lib/release/upload-check";
-import { getStorage, type ByteSource, type Storage } from "../storage";
+import { getStorage, type ByteSource, type Storage } from "@/lib/platform/storage";
 
 type Uploader = AuditActor & { userId: string };
 type UploadRow = Awaited<ReturnType<typeof insertUpload>>;

@@ -2,8 +2,8 @@ import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
 import { getDb, type Database } from "@/db/client";
 import { deliverNextDueMail, type DeliveryOutcome } from "@/db/mail";
-import { env } from "../env";
-import { logger } from "../log";
+import { env } from "@/lib/platform/env";
+import { logger } from "@/lib/platform/log";
 
 export interface SmtpSettings {
   host: string;

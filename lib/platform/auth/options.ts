@@ -5,8 +5,8 @@ import { z } from "zod";
 import { getDb } from "@/db/client";
 import { getUserByEmail } from "@/db/users";
 import { clearFailures, recordFailure, secondsLocked } from "@/db/throttle";
-import { burnPasswordCheck, verifyPassword } from "./password";
-import { env } from "./env";
+import { burnPasswordCheck, verifyPassword } from "@/lib/platform/auth/password";
+import { env } from "@/lib/platform/env";
 
 const credentialsSchema = z.object({ email: z.string().trim().min(1).max(320), password: z.string().min(1).max(1024) });
 

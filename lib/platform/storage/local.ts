@@ -4,7 +4,7 @@ import { createWriteStream } from "node:fs";
 import fs from "node:fs/promises";
 import path from "node:path";
 import { once } from "node:events";
-import { assertKey, limitedChunks, newKey, type ByteSource, type PutOptions, type Storage, type StoredObject } from "./types";
+import { assertKey, limitedChunks, newKey, type ByteSource, type PutOptions, type Storage, type StoredObject } from "@/lib/platform/storage/types";
 
 /** Files in one local directory, named by generated keys; the default driver. */
 export function localStorage(dir: string): Storage {

@@ -1,7 +1,7 @@
 import "server-only";
 import type { NextRequest } from "next/server";
 import { AppError } from "@/lib/api/errors";
-import { readCappedBody } from "./raw-body";
+import { readCappedBody } from "@/lib/platform/http/raw-body";
 
 /** Reads a request body as UTF-8 text, stopping at `maxBytes` so a large upload never fills memory. */
 export async function readTextBody(req: NextRequest, { maxBytes, contentTypes }: { maxBytes: number; contentTypes: string[] }): Promise<string> {

@@ -1,11 +1,11 @@
 import "server-only";
 import path from "node:path";
-import { env } from "../env";
-import { localStorage } from "./local";
-import { s3Storage } from "./s3";
-import type { Storage } from "./types";
+import { env } from "@/lib/platform/env";
+import { localStorage } from "@/lib/platform/storage/local";
+import { s3Storage } from "@/lib/platform/storage/s3";
+import type { Storage } from "@/lib/platform/storage/types";
 
-export type { Storage, StoredObject, PutOptions, ByteSource } from "./types";
+export type { Storage, StoredObject, PutOptions, ByteSource } from "@/lib/platform/storage/types";
 export { localStorage, s3Storage };
 
 const globalForStorage = globalThis as unknown as { loopkeeperStorage?: Storage };
