@@ -3,6 +3,8 @@
 import { useQuery } from "@tanstack/react-query";
 import { useUrlParams } from "@/components/ui/use-url-params";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
+import { AUDIT_FILTERS, pagedQueryFromUrl } from "@/lib/api/screen-queries";
 import { formText } from "@/components/ui/form-data";
 import type { AuditEventView } from "@/lib/api/operations/admin";
 import { Button } from "@/components/ui/button";
@@ -19,16 +21,12 @@ const FILTERS = [
 
 export function AuditLog() {
   const { sp, set: setParams } = useUrlParams();
-  const page = Math.max(1, Number(sp.get("page") ?? "1") || 1);
-  const qs = new URLSearchParams();
-  for (const f of FILTERS) {
-    const v = sp.get(f.key);
-    if (v) qs.set(f.key, v);
-  }
-  qs.set("page", String(page));
+  // The same reading of the URL the page made on the server for the first page it rendered.
+  const query = pagedQueryFromUrl(AUDIT_FILTERS, sp);
+  const page = Number(query.page);
   const q = useQuery({
-    queryKey: ["audit", qs.toString()],
-    queryFn: () => apiFetch<{ items: AuditEventView[]; hasMore: boolean }>(`/api/v1/audit?${qs.toString()}`),
+    queryKey: operationKey("listAudit", { query }),
+    queryFn: () => apiFetch<{ items: AuditEventView[]; hasMore: boolean }>(`/api/v1/audit?${new URLSearchParams(query).toString()}`),
   });
 
 

@@ -2,9 +2,10 @@
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
 import type { BuildDetail } from "@/lib/api/operations/builds";
 
-export const buildKey = (id: string) => ["build", id] as const;
+export const buildKey = (id: string) => operationKey("getBuild", { params: { id } });
 
 export function useBuild(id: string) {
   return useQuery({ queryKey: buildKey(id), queryFn: () => apiFetch<BuildDetail>(`/api/v1/builds/${id}`) });

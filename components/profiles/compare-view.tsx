@@ -5,6 +5,7 @@ import dynamic from "next/dynamic";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo } from "react";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
 import type { ProfileDetailView, VersionWithDocumentView } from "@/lib/api/operations/profile-schemas";
 import { evaluateCurves, type CoolingProfile } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
@@ -22,7 +23,7 @@ export function CompareView({ id }: { id: string }) {
   const sp = useSearchParams();
   const router = useRouter();
   const pathname = usePathname();
-  const detail = useQuery({ queryKey: ["profile", id], queryFn: () => apiFetch<ProfileDetailView>(`/api/v1/profiles/${id}`) });
+  const detail = useQuery({ queryKey: operationKey("getProfile", { params: { id } }), queryFn: () => apiFetch<ProfileDetailView>(`/api/v1/profiles/${id}`) });
   const versions = detail.data?.versions ?? [];
   const a = sp.get("a") ?? versions[1]?.id ?? "";
   const b = sp.get("b") ?? versions[0]?.id ?? "";

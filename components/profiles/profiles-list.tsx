@@ -7,6 +7,8 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
+import { ALL_COOLERS, PROFILE_FILTERS } from "@/lib/api/screen-queries";
 import { createProfileBody, type CreateProfileBody, type ProfileSummaryView } from "@/lib/api/operations/profile-schemas";
 import type { CoolerModelView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
@@ -38,9 +40,9 @@ const columns: ColumnDef<ProfileSummaryView>[] = [
 ];
 
 export function ProfilesList({ canWrite }: { canWrite: boolean }) {
-  const list = useListParams(["q", "coolerModelId"]);
-  const coolers = useQuery({ queryKey: ["cooler-models", "all"], queryFn: () => apiFetch<ServerPage<CoolerModelView>>("/api/v1/cooler-models?pageSize=100") });
-  const q = useQuery({ queryKey: ["profiles", list.apiQuery], queryFn: () => apiFetch<ServerPage<ProfileSummaryView>>(`/api/v1/profiles?${list.apiQuery}`) });
+  const list = useListParams(PROFILE_FILTERS);
+  const coolers = useQuery({ queryKey: operationKey("listCoolerModels", { query: ALL_COOLERS }), queryFn: () => apiFetch<ServerPage<CoolerModelView>>(`/api/v1/cooler-models?${new URLSearchParams(ALL_COOLERS).toString()}`) });
+  const q = useQuery({ queryKey: operationKey("listProfiles", { query: list.query }), queryFn: () => apiFetch<ServerPage<ProfileSummaryView>>(`/api/v1/profiles?${list.apiQuery}`) });
   return (
     <div className="space-y-5">
       <Panel title="Profiles">

@@ -5,6 +5,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
 import { boardModelBody, boardRevisionBody, type BoardModelBody, type BoardModelView, type BoardRevisionBody, type BoardRevisionView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
@@ -25,7 +26,7 @@ export function BoardModelForm({ editing, onDone }: { editing?: BoardModelView; 
       editing ? apiFetch(`/api/v1/board-models/${editing.id}`, { method: "PUT", json: v }) : apiFetch("/api/v1/board-models", { method: "POST", json: v }),
     onSuccess: () => {
       if (!editing) form.reset({ name: "", serialPrefix: "", description: "" });
-      void qc.invalidateQueries({ queryKey: ["board-models"] });
+      void qc.invalidateQueries({ queryKey: operationKey("listBoardModels") });
       onDone?.();
     },
     onError: (err) => showServerIssues(form, err),
@@ -66,7 +67,7 @@ export function BoardRevisionForm({ boardModels }: { boardModels: BoardModelView
     mutationFn: (v: BoardRevisionBody) => apiFetch(`/api/v1/board-models/${boardModelId}/revisions`, { method: "POST", json: v }),
     onSuccess: () => {
       form.reset(REVISION_DEFAULTS);
-      void qc.invalidateQueries({ queryKey: ["board-models"] });
+      void qc.invalidateQueries({ queryKey: operationKey("listBoardModels") });
     },
     onError: (err) => showServerIssues(form, err),
   });
@@ -126,8 +127,8 @@ export function BoardRevisionEditForm({ revision, onDone }: { revision: BoardRev
   const save = useMutation({
     mutationFn: (v: BoardRevisionBody) => apiFetch(`/api/v1/board-revisions/${revision.id}`, { method: "PUT", json: v }),
     onSuccess: () => {
-      void qc.invalidateQueries({ queryKey: ["board-revision", revision.id] });
-      void qc.invalidateQueries({ queryKey: ["board-models"] });
+      void qc.invalidateQueries({ queryKey: operationKey("getBoardRevision", { params: { id: revision.id } }) });
+      void qc.invalidateQueries({ queryKey: operationKey("listBoardModels") });
       onDone();
     },
     onError: (err) => showServerIssues(form, err),

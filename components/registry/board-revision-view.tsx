@@ -4,6 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
 import type { BoardRevisionDetail } from "@/lib/api/operations/registry";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
@@ -13,7 +14,7 @@ import { CompatibilityMatrix } from "./compatibility-matrix";
 import { ErrorNotice } from "@/components/ui/error-notice";
 
 export function BoardRevisionView({ id, canWrite }: { id: string; canWrite: boolean }) {
-  const q = useQuery({ queryKey: ["board-revision", id], queryFn: () => apiFetch<BoardRevisionDetail>(`/api/v1/board-revisions/${id}`) });
+  const q = useQuery({ queryKey: operationKey("getBoardRevision", { params: { id } }), queryFn: () => apiFetch<BoardRevisionDetail>(`/api/v1/board-revisions/${id}`) });
   const [editing, setEditing] = useState(false);
   if (q.isPending) return <Panel title="Board revision"><Table caption="Loading"><tbody><SkeletonRows cols={4} rows={4} /></tbody></Table></Panel>;
   if (q.isError)

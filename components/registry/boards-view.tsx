@@ -4,6 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
 import type { BoardModelView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
@@ -14,7 +15,7 @@ import { ErrorNotice } from "@/components/ui/error-notice";
 const hex = (n: number) => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
 
 export function BoardsView({ canWrite }: { canWrite: boolean }) {
-  const q = useQuery({ queryKey: ["board-models"], queryFn: () => apiFetch<{ items: BoardModelView[] }>("/api/v1/board-models") });
+  const q = useQuery({ queryKey: operationKey("listBoardModels"), queryFn: () => apiFetch<{ items: BoardModelView[] }>("/api/v1/board-models") });
   const [editingId, setEditingId] = useState<string | null>(null);
   return (
     <div className="space-y-5">

@@ -4,6 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
 import { componentBody, type ComponentBody } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
@@ -22,7 +23,7 @@ export function ComponentForm() {
     mutationFn: (v: ComponentBody) => apiFetch("/api/v1/components", { method: "POST", json: v }),
     onSuccess: () => {
       form.reset(DEFAULTS);
-      void qc.invalidateQueries({ queryKey: ["components"] });
+      void qc.invalidateQueries({ queryKey: operationKey("listComponents") });
     },
     onError: (err) => showServerIssues(form, err),
   });

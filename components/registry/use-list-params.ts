@@ -1,6 +1,7 @@
 "use client";
 
 import { useUrlParams } from "@/components/ui/use-url-params";
+import { listQueryFromUrl } from "@/lib/api/list-query";
 
 /** List state (filters, sort, page) kept in the URL, so a view can be shared and survives reload. */
 export function useListParams(keys: readonly string[]) {
@@ -8,18 +9,12 @@ export function useListParams(keys: readonly string[]) {
   const page = Math.max(1, Number(sp.get("page") ?? "1") || 1);
   const sort = sp.get("sort") ?? "";
   const dir: "asc" | "desc" = sp.get("dir") === "desc" ? "desc" : "asc";
-  const apiQuery = new URLSearchParams();
-  for (const k of keys) {
-    const v = sp.get(k);
-    if (v) apiQuery.set(k, v);
-  }
-  if (sort) apiQuery.set("sort", sort);
-  apiQuery.set("dir", dir);
-  apiQuery.set("page", String(page));
+  // The same reading of the URL the page made on the server for the first page it rendered.
+  const query = listQueryFromUrl(keys, sp);
 
   const set = (next: Record<string, string>) => setUrl(next, { scroll: false });
 
-  return { sp, page, sort, dir, apiQuery: apiQuery.toString(), set };
+  return { sp, page, sort, dir, query, apiQuery: new URLSearchParams(query).toString(), set };
 }
 
 /**

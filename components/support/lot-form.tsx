@@ -4,6 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
 import { lotBody, type LotOptions, type LotView } from "@/lib/api/operations/support";
 import type { LotInput } from "@/lib/lots/input";
 import { Button } from "@/components/ui/button";
@@ -20,7 +21,7 @@ export function LotForm({ options }: { options: LotOptions | undefined }) {
     mutationFn: (v: LotInput) => apiFetch<{ lot: LotView }>("/api/v1/lots", { method: "POST", json: v }),
     onSuccess: () => {
       form.reset({ producedOn: form.getValues("producedOn"), line: form.getValues("line") });
-      void qc.invalidateQueries({ queryKey: ["lots"] });
+      void qc.invalidateQueries({ queryKey: operationKey("listLots") });
     },
     onError: (err) => showServerIssues(form, err),
   });

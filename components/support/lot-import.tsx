@@ -3,6 +3,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useId, useState } from "react";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
 import type { ImportResult } from "@/lib/api/operations/support";
 import { LOT_CSV_COLUMNS } from "@/lib/lots/input";
 import { Button } from "@/components/ui/button";
@@ -21,7 +22,7 @@ export function LotImport() {
     mutationFn: ({ dryRun }: { dryRun: boolean }) =>
       apiFetch<ImportResult>(`/api/v1/lots/import?dryRun=${String(dryRun)}`, { method: "POST", body: text ?? "", headers: { "content-type": "text/csv" } }),
     onSuccess: (r) => {
-      if (!r.dryRun && r.committed > 0) void qc.invalidateQueries({ queryKey: ["lots"] });
+      if (!r.dryRun && r.committed > 0) void qc.invalidateQueries({ queryKey: operationKey("listLots") });
     },
   });
   const r = run.data;

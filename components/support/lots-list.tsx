@@ -3,6 +3,8 @@
 import { useQuery } from "@tanstack/react-query";
 import { useUrlParams } from "@/components/ui/use-url-params";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
+import { LOT_FILTERS, pagedQueryFromUrl } from "@/lib/api/screen-queries";
 import type { LotOptions, LotView } from "@/lib/api/operations/support";
 import { formText } from "@/components/ui/form-data";
 import { Button } from "@/components/ui/button";
@@ -20,14 +22,10 @@ const SORTS = [
 
 export function LotsList({ options }: { options: LotOptions | undefined }) {
   const { sp, set: setParams } = useUrlParams();
-  const page = Math.max(1, Number(sp.get("page") ?? "1") || 1);
-  const qs = new URLSearchParams();
-  for (const k of ["board", "build", "code", "sort", "dir"]) {
-    const v = sp.get(k);
-    if (v) qs.set(k, v);
-  }
-  qs.set("page", String(page));
-  const q = useQuery({ queryKey: ["lots", qs.toString()], queryFn: () => apiFetch<{ items: LotView[]; hasMore: boolean }>(`/api/v1/lots?${qs.toString()}`) });
+  // The same reading of the URL the page made on the server for the first page it rendered.
+  const query = pagedQueryFromUrl(LOT_FILTERS, sp);
+  const page = Number(query.page);
+  const q = useQuery({ queryKey: operationKey("listLots", { query }), queryFn: () => apiFetch<{ items: LotView[]; hasMore: boolean }>(`/api/v1/lots?${new URLSearchParams(query).toString()}`) });
   const builds = (options?.boardModels ?? []).flatMap((m) => m.builds.map((b) => ({ ...b, model: m.name })));
 
 

@@ -1,6 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { ROLES } from "./access/types";
 import { ACCOUNTS, signInPage } from "./support/accounts";
+import { UsersAdmin } from "./pages/admin";
 
 test.describe("sign-in", () => {
   for (const role of ROLES) {
@@ -43,23 +44,18 @@ test.describe("sign-in", () => {
 
   test("a disabled user is shut out, including an open session", async ({ browser }) => {
     const email = `temp-${Date.now()}@tarnwell.example`;
-    const admin = await browser.newPage();
-    await signInPage(admin, ACCOUNTS.admin);
-    await admin.goto("/admin/users");
-    await admin.getByLabel("Name").fill("Temporary Tester");
-    await admin.getByLabel("E-mail").fill(email);
-    await admin.getByLabel("Role", { exact: true }).selectOption("viewer");
-    await admin.getByLabel("First password").fill("temporary-password-1");
-    await admin.getByRole("button", { name: "Create user" }).click();
-    await expect(admin.getByRole("cell", { name: email })).toBeVisible();
+    const adminPage = await browser.newPage();
+    await signInPage(adminPage, ACCOUNTS.admin);
+    const admin = await new UsersAdmin(adminPage).goto();
+    await admin.add({ name: "Temporary Tester", email, role: "viewer", password: "temporary-password-1" });
+    await expect(adminPage.getByRole("cell", { name: email })).toBeVisible();
 
     const user = await browser.newPage();
     await signInPage(user, email, "temporary-password-1");
     await expect(user.getByRole("heading", { name: "Dashboard" })).toBeVisible();
 
-    const row = admin.getByRole("row").filter({ hasText: email });
-    await row.getByRole("button", { name: /Disable/ }).click();
-    await expect(row.getByText("disabled")).toBeVisible();
+    await admin.disable(email);
+    await expect(admin.row(email).getByText("disabled")).toBeVisible();
 
     // The open session stops working at its next request.
     await user.goto("/account");

@@ -3,6 +3,8 @@
 import { useQuery } from "@tanstack/react-query";
 import { useMemo } from "react";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
+import { ALL_COOLERS } from "@/lib/api/screen-queries";
 import type { ProfileDetailView } from "@/lib/api/operations/profile-schemas";
 import type { ComponentView, CoolerModelView } from "@/lib/api/operations/registry-schemas";
 import type { ComponentFields, CoolerFields } from "@/lib/registry/hardware-context";
@@ -28,7 +30,7 @@ interface ServerPage<T> {
  * component list.
  */
 export function useCoolerChoices(detail: Pick<ProfileDetailView, "cooler" | "fan" | "pump">): { choices: CoolerChoice[]; loadError: boolean } {
-  const coolers = useQuery({ queryKey: ["cooler-models", "all"], queryFn: () => apiFetch<ServerPage<CoolerModelView>>("/api/v1/cooler-models?pageSize=100&sort=name") });
+  const coolers = useQuery({ queryKey: operationKey("listCoolerModels", { query: ALL_COOLERS }), queryFn: () => apiFetch<ServerPage<CoolerModelView>>(`/api/v1/cooler-models?${new URLSearchParams(ALL_COOLERS).toString()}`) });
   const parts = useQuery({ queryKey: ["components", "all"], queryFn: () => apiFetch<ServerPage<ComponentView>>("/api/v1/components?pageSize=100") });
   const { cooler, fan, pump } = detail;
   const choices = useMemo(() => {

@@ -6,6 +6,7 @@ import { useEffect, useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
 import { publishBody, type VersionView } from "@/lib/api/operations/profile-schemas";
 import type { VersionSuggestion } from "@/lib/engine";
 import { Button } from "@/components/ui/button";
@@ -44,7 +45,7 @@ export function PublishPanel({
     onSuccess: () => {
       form.reset({ version: suggested, changelog: "", boardRange: form.getValues("boardRange") });
       setFollowSuggestion(true);
-      void qc.invalidateQueries({ queryKey: ["profile", profileId] });
+      void qc.invalidateQueries({ queryKey: operationKey("getProfile", { params: { id: profileId } }) });
     },
     onError: (err) => showServerIssues(form, err),
   });

@@ -5,6 +5,7 @@ import dynamic from "next/dynamic";
 import Link from "next/link";
 import { memo, useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
 import { apiFetch } from "@/lib/api/client";
+import { operationKey } from "@/lib/api/query-key";
 import type { ProfileDetailView, VersionWithDocumentView } from "@/lib/api/operations/profile-schemas";
 import { suggestNextVersion, type CoolingProfile } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
@@ -42,7 +43,7 @@ declare global {
 const NO_ISSUES: never[] = [];
 
 export function ProfileWorkspace({ id, canWrite }: { id: string; canWrite: boolean }) {
-  const q = useQuery({ queryKey: ["profile", id], queryFn: () => apiFetch<ProfileDetailView>(`/api/v1/profiles/${id}`) });
+  const q = useQuery({ queryKey: operationKey("getProfile", { params: { id } }), queryFn: () => apiFetch<ProfileDetailView>(`/api/v1/profiles/${id}`) });
   if (q.isPending) return <div className="h-96 animate-pulse rounded-md bg-white shadow-panel" aria-label="Loading the profile" />;
   if (q.isError)
     return (

@@ -1,6 +1,11 @@
 import type { Metadata } from "next";
+import { HydrationBoundary } from "@tanstack/react-query";
 import { notFound } from "next/navigation";
 import { requirePageActor } from "@/lib/platform/auth/page-guard";
+import { prefetchScreen, screenQuery } from "@/lib/platform/screens/prefetch";
+import { getDb } from "@/db/client";
+import { getBuild } from "@/lib/api/operations/builds";
+import { buildDetail } from "@/lib/use-cases/builds/detail";
 import { BuildPage } from "@/components/builds/build-page";
 
 export const metadata: Metadata = { title: "Build" };
@@ -11,5 +16,10 @@ export default async function BuildDetailPage({ params }: { params: Promise<{ id
   const actor = await requirePageActor("read");
   const { id } = await params;
   if (!UUID_RE.test(id)) notFound();
-  return <BuildPage id={id} viewer={{ userId: actor.userId, role: actor.role }} />;
+  const state = await prefetchScreen(actor, [screenQuery(getBuild, { params: { id } }, ({ params: parsed }) => buildDetail(getDb(), parsed))]);
+  return (
+    <HydrationBoundary state={state}>
+      <BuildPage id={id} viewer={{ userId: actor.userId, role: actor.role }} />
+    </HydrationBoundary>
+  );
 }

@@ -1,6 +1,11 @@
 import type { Metadata } from "next";
+import { HydrationBoundary } from "@tanstack/react-query";
 import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { can } from "@/lib/auth/roles";
+import { prefetchScreen, screenQuery } from "@/lib/platform/screens/prefetch";
+import { getDb } from "@/db/client";
+import { getProfile } from "@/lib/api/operations/profiles";
+import { profileDetail } from "@/lib/use-cases/profiles/read";
 import { PageHeader } from "@/components/ui/panel";
 import { ProfileWorkspace } from "@/components/profiles/editor/workspace";
 
@@ -9,10 +14,13 @@ export const metadata: Metadata = { title: "Profile editor" };
 export default async function ProfileEditorPage({ params }: { params: Promise<{ id: string }> }) {
   const actor = await requirePageActor("read");
   const { id } = await params;
+  const state = await prefetchScreen(actor, [screenQuery(getProfile, { params: { id } }, ({ params: parsed }) => profileDetail(getDb(), parsed))]);
   return (
     <>
       <PageHeader title="Profile editor" subtitle="Edit the JSON; problems, plots and memory update as you type. Drafts save themselves." />
-      <ProfileWorkspace id={id} canWrite={can(actor.role, "registry:write")} />
+      <HydrationBoundary state={state}>
+        <ProfileWorkspace id={id} canWrite={can(actor.role, "registry:write")} />
+      </HydrationBoundary>
     </>
   );
 }
