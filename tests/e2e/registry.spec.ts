@@ -87,9 +87,9 @@ test.describe("registry, as a viewer", () => {
     await expect(page.getByText("Import .json")).toHaveCount(0);
 
     // Filtered: earlier runs leave other profiles that can push it to a later page.
-    const list = await new ProfilesList(page).goto({ q: "Hush" });
-    await expect(list.link("Hush")).toBeVisible();
-    await list.expectNoButton("Create and open the editor");
+    const profiles = await new ProfilesList(page).goto({ q: "Hush" });
+    await expect(profiles.link("Hush")).toBeVisible();
+    await profiles.expectNoButton("Create and open the editor");
 
     const text = `${JSON.stringify({ formatVersion: 1 })}\n`;
     expect((await page.request.put(`/api/v1/profiles/${hush.id}/draft`, { data: { text } })).status()).toBe(403);
