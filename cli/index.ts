@@ -1,39 +1,42 @@
 import { EngineInputError } from "../lib/engine";
-import { UsageError } from "./args";
-import { BANK_USAGE, bankCommand } from "./commands/bank";
-import { EVALUATE_USAGE, evaluateCommand } from "./commands/evaluate";
-import { INSPECT_USAGE, inspectCommand } from "./commands/inspect";
-import { TACH_USAGE, tachCommand } from "./commands/tach";
-import { VALIDATE_USAGE, validateCommand } from "./commands/validate";
-import type { CommandResult } from "./io";
+import { EXIT_CODES, UsageError, wantsHelp, wantsJson } from "./args";
+import { COMMANDS } from "./commands";
 
-const COMMANDS: Record<string, (argv: readonly string[]) => CommandResult> = {
-  validate: validateCommand,
-  evaluate: evaluateCommand,
-  bank: bankCommand,
-  inspect: inspectCommand,
-  tach: tachCommand,
-};
-
-const USAGE = ["Usage: loopkeeper <command> …", ...[VALIDATE_USAGE, EVALUATE_USAGE, BANK_USAGE, INSPECT_USAGE, TACH_USAGE].map((u) => `  ${u}`), "Exit codes: 0 valid, 1 invalid input, 2 usage error."].join("\n");
+const USAGE = [
+  "Usage: loopkeeper <command> [arguments] [options]",
+  "",
+  "Commands:",
+  ...(() => {
+    const width = Math.max(...COMMANDS.map((c) => c.name.length)) + 2;
+    return COMMANDS.map((c) => `  ${c.name.padEnd(width)}${c.summary}`);
+  })(),
+  "",
+  "Run loopkeeper <command> --help for a command's options and an example.",
+  EXIT_CODES,
+].join("\n");
 
 /** Runs one command; returns the exit code. Prints no stack traces. */
 export function run(argv: readonly string[]): number {
   const [name, ...rest] = argv;
-  const json = rest.includes("--json");
+  const json = wantsJson(rest);
+  const command = COMMANDS.find((c) => c.name === name);
   const fail = (code: 1 | 2, message: string): number => {
     if (json) process.stdout.write(`${JSON.stringify({ ok: false, error: message, exitCode: code })}\n`);
-    else process.stderr.write(`${message}\n${code === 2 ? `\n${USAGE}\n` : ""}`);
+    else process.stderr.write(`${message}\n${code === 2 ? `\n${command ? `Usage: ${command.usage}\nRun loopkeeper ${command.name} --help for its options and an example.` : USAGE}\n` : ""}`);
     return code;
   };
   if (!name || name === "help" || name === "--help" || name === "-h") {
-    process.stdout.write(`${USAGE}\n`);
+    const topic = name === "help" ? COMMANDS.find((c) => c.name === rest[0]) : undefined;
+    process.stdout.write(`${topic ? topic.help : USAGE}\n`);
     return name ? 0 : 2;
   }
-  const command = COMMANDS[name];
-  if (!command) return fail(2, `Unknown command "${name}".`);
+  if (!command) return fail(2, `Unknown command "${name}". Commands: ${COMMANDS.map((c) => c.name).join(", ")}.`);
+  if (wantsHelp(rest)) {
+    process.stdout.write(`${command.help}\n`);
+    return 0;
+  }
   try {
-    const result = command(rest);
+    const result = command.run(rest);
     if (json) process.stdout.write(`${JSON.stringify(result.json, null, 2)}\n`);
     else (result.exitCode === 0 ? process.stdout : process.stderr).write(`${result.human}\n`);
     return result.exitCode;

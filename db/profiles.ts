@@ -55,7 +55,7 @@ export async function createProfile(db: Database, actor: AuditActor & { userId: 
     const draft = starterProfile({ name: input.name, description: input.description, pumpMinDutyPct: hw.pump.minDutyPct, fanMinDutyPct: hw.fan.minDutyPct });
     const [row] = await tx
       .insert(profiles)
-      .values({ ...input, ownerUserId: actor.userId, draftDocument: draft, draftUpdatedAt: new Date() })
+      .values({ ...input, ownerUserId: actor.userId, draftText: documentText(draft), draftUpdatedAt: new Date() })
       .returning();
     if (!row) throw new AppError("internal", "The profile was not created.");
     await recordAudit(tx, actor, { action: "profile.create", entityType: "profile", entityId: row.id, after: { ...input, ownerUserId: actor.userId } });
@@ -80,9 +80,12 @@ export async function getCoolerHardware(db: Executor, { coolerModelId }: { coole
   return { ...row, revisions };
 }
 
-function draftTextOf(draft: unknown): string | null {
+/** The draft as its author typed it; rows saved before drafts were kept as text fall back to their parsed JSON. */
+function draftTextOf(p: { draftText: string | null; draftDocument: unknown }): string | null {
+  if (p.draftText !== null) return p.draftText;
+  const draft = p.draftDocument;
   if (draft === null || draft === undefined) return null;
-  // An unfinished draft that was not valid JSON is kept verbatim as a JSON string.
+  // An unfinished draft that was not valid JSON was kept verbatim as a JSON string.
   return typeof draft === "string" ? draft : documentText(draft);
 }
 
@@ -99,7 +102,7 @@ export async function getProfileDetail(db: Executor, { id }: { id: string }) {
   const versions = await listVersionsOfProfile(db, { profileId: id });
   const p = row.profile;
   return {
-    profile: { id: p.id, name: p.name, description: p.description, ownerName: row.ownerName, draftText: draftTextOf(p.draftDocument), draftUpdatedAt: p.draftUpdatedAt?.toISOString() ?? null },
+    profile: { id: p.id, name: p.name, description: p.description, ownerName: row.ownerName, draftText: draftTextOf(p), draftUpdatedAt: p.draftUpdatedAt?.toISOString() ?? null },
     cooler: {
       id: hw.cooler.id,
       name: hw.cooler.name,
@@ -115,17 +118,11 @@ export async function getProfileDetail(db: Executor, { id }: { id: string }) {
   };
 }
 
-/** Saves the working draft: parsed JSON when the text parses, else the text itself so nothing typed is lost. */
+/** Saves the working draft as the exact text typed (even when it is not valid JSON yet), so nothing typed is lost or reordered. */
 export async function saveDraft(db: Database, actor: AuditActor, { id, text }: { id: string; text: string }) {
-  let doc: unknown;
-  try {
-    doc = JSON.parse(text);
-  } catch {
-    doc = text;
-  }
   return db.transaction(async (tx) => {
     const now = new Date();
-    const res = await tx.update(profiles).set({ draftDocument: doc, draftUpdatedAt: now, updatedAt: now }).where(eq(profiles.id, id)).returning({ id: profiles.id });
+    const res = await tx.update(profiles).set({ draftText: text, draftDocument: null, draftUpdatedAt: now, updatedAt: now }).where(eq(profiles.id, id)).returning({ id: profiles.id });
     if (res.length === 0) throw new AppError("not_found", "No such profile.");
     // The draft itself is not repeated in the log: autosave runs on every pause in typing.
     await recordAudit(tx, actor, { action: "profile.draft_save", entityType: "profile", entityId: id, after: { bytes: text.length } });

@@ -193,7 +193,9 @@ export const profiles = pgTable(
     name: text("name").notNull(),
     description: text("description").notNull().default(""),
     ownerUserId: uuid("owner_user_id").notNull().references(() => users.id),
-    /** The working copy the editor autosaves; published versions are separate and immutable. */
+    /** The working copy the editor autosaves, exactly as typed (key order, spacing, even broken JSON); published versions are separate and immutable. */
+    draftText: text("draft_text"),
+    /** Earlier drafts were kept as parsed JSON, which reorders keys; read only when draftText is empty. */
     draftDocument: jsonb("draft_document"),
     draftUpdatedAt: timestamp("draft_updated_at", { withTimezone: true }),
     ...timestamps,

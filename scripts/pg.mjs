@@ -1,8 +1,9 @@
 #!/usr/bin/env node
 // Private PostgreSQL cluster for development and tests, on 127.0.0.1 only.
-// Usage: node scripts/pg.mjs up [dbname...] | down | url [dbname]
+// Usage: node scripts/pg.mjs up [dbname...] | down | url [dbname] | where | check | remove
 // Idempotent: safe to run twice. When DATABASE_URL is set, nothing is started.
 import { execFileSync, spawnSync } from "node:child_process";
+import { createHash } from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
@@ -10,8 +11,6 @@ import { log, fail } from "./log.mjs";
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
 const dataRoot = path.join(root, ".data");
-const pgData = path.join(dataRoot, "postgres");
-const runDir = path.join(dataRoot, "pg-run");
 const port = Number(process.env.LOOPKEEPER_PG_PORT || 54329);
 export const PG_USER = "loopkeeper";
 export const PG_PASSWORD = process.env.LOOPKEEPER_PG_PASSWORD || "loopkeeper-local-only";
@@ -55,22 +54,57 @@ function ensureInstalled() {
 function runPg(bin, tool, args, opts = {}) {
   const exe = path.join(bin, tool);
   const [cmd, argv] = isRoot() ? ["runuser", ["-u", "postgres", "--", exe, ...args]] : [exe, args];
-  return spawnSync(cmd, argv, { encoding: "utf8", ...opts });
+  // From "/", so postgres does not warn about a working directory it cannot enter.
+  return spawnSync(cmd, argv, { encoding: "utf8", ...(isRoot() ? { cwd: "/" } : {}), ...opts });
+}
+
+const inTree = { pgData: path.join(dataRoot, "postgres"), runDir: path.join(dataRoot, "pg-run"), outside: false };
+
+/**
+ * As root the server runs as the postgres user, which cannot enter a clone under /root or
+ * any mode-0700 parent. Such a checkout keeps its cluster under the postgres user's home
+ * instead, in a directory named after the checkout's absolute path (so two clones never
+ * share one) and readable by postgres (and root) only.
+ */
+const outsideBase = "/var/lib/postgresql/loopkeeper";
+const outsideDir = path.join(outsideBase, `${path.basename(root).replace(/[^\w.-]/g, "_").slice(0, 40)}-${createHash("sha256").update(root).digest("hex").slice(0, 16)}`);
+const outsideTree = { pgData: path.join(outsideDir, "postgres"), runDir: path.join(outsideDir, "run"), outside: true };
+
+const hasCluster = (where) => fs.existsSync(path.join(where.pgData, "PG_VERSION"));
+
+function postgresCanEnter(dir) {
+  return spawnSync("runuser", ["-u", "postgres", "--", "test", "-x", dir]).status === 0;
+}
+
+let located;
+/** Where this checkout's cluster lives: in `.data/` when the server's user can reach it, else outside (see above). */
+function location() {
+  if (located) return located;
+  if (!isRoot() || hasCluster(inTree)) return (located = inTree);
+  if (hasCluster(outsideTree)) return (located = outsideTree);
+  fs.mkdirSync(dataRoot, { recursive: true });
+  // postgres must be able to reach the data directory through the work tree.
+  fs.chmodSync(dataRoot, 0o755);
+  return (located = postgresCanEnter(dataRoot) ? inTree : outsideTree);
 }
 
 function ensureDirs() {
-  fs.mkdirSync(pgData, { recursive: true, mode: 0o700 });
-  fs.mkdirSync(runDir, { recursive: true });
-  if (isRoot()) {
-    execFileSync("chown", ["-R", "postgres:postgres", pgData, runDir]);
-    // postgres must be able to reach the data directory through the work tree.
-    fs.chmodSync(dataRoot, 0o755);
+  const { pgData, runDir, outside } = location();
+  if (outside) {
+    fs.mkdirSync(outsideBase, { recursive: true, mode: 0o711 });
+    fs.mkdirSync(outsideDir, { recursive: true, mode: 0o700 });
+    fs.writeFileSync(path.join(outsideDir, "checkout"), `${root}\n`);
+    log(`The postgres user cannot enter ${root}; this checkout's cluster lives in ${outsideDir} (private to postgres).`);
   }
+  fs.mkdirSync(pgData, { recursive: true, mode: 0o700 });
+  fs.mkdirSync(runDir, { recursive: true, mode: 0o700 });
+  if (isRoot()) execFileSync("chown", ["-R", "postgres:postgres", ...(outside ? [outsideDir] : [pgData, runDir])]);
 }
 
 function initCluster(bin) {
+  const { pgData, runDir } = location();
   if (fs.existsSync(path.join(pgData, "PG_VERSION"))) return;
-  log(`Creating a private PostgreSQL cluster in ${path.relative(root, pgData)}…`);
+  log(`Creating a private PostgreSQL cluster in ${pgData}…`);
   const pwFile = path.join(runDir, "pwfile");
   fs.writeFileSync(pwFile, PG_PASSWORD + "\n", { mode: 0o600 });
   if (isRoot()) execFileSync("chown", ["postgres:postgres", pwFile]);
@@ -83,10 +117,12 @@ function initCluster(bin) {
 }
 
 function isRunning(bin) {
+  const { pgData } = location();
   return runPg(bin, "pg_ctl", ["-D", pgData, "status"]).status === 0;
 }
 
 function start(bin) {
+  const { pgData, runDir } = location();
   if (isRunning(bin)) {
     log(`PostgreSQL already running on 127.0.0.1:${port}.`);
     return;
@@ -101,6 +137,7 @@ function start(bin) {
 }
 
 function ensureDatabases(bin, names) {
+  const { runDir } = location();
   for (const db of names) {
     const q = runPg(bin, "psql", ["-h", runDir, "-p", String(port), "-U", PG_USER, "-d", "postgres", "-tAc", `SELECT 1 FROM pg_database WHERE datname='${db}'`]);
     if (q.status !== 0) fail(`Could not query PostgreSQL: ${q.stderr}`);
@@ -125,10 +162,30 @@ export function up(databases = ["loopkeeper"]) {
 
 export function down() {
   const bin = findBinDir();
+  const { pgData } = location();
   if (!bin || !fs.existsSync(path.join(pgData, "PG_VERSION"))) return;
   if (!isRunning(bin)) return;
   log("Stopping PostgreSQL…");
   runPg(bin, "pg_ctl", ["-D", pgData, "-m", "fast", "-w", "stop"]);
+}
+
+/** Connects as the app does (TCP on 127.0.0.1 with the password) and runs one query. */
+export function check(db = "loopkeeper") {
+  const psql = pgBin("psql");
+  const r = spawnSync(psql, ["-h", "127.0.0.1", "-p", String(port), "-U", PG_USER, "-d", db, "-tAc", "SELECT current_setting('data_directory')"], {
+    encoding: "utf8",
+    env: { ...process.env, PGPASSWORD: PG_PASSWORD, PGCONNECT_TIMEOUT: "10" },
+  });
+  if (r.status !== 0) fail(`Could not connect to 127.0.0.1:${port}/${db} with the local password: ${r.stderr}`);
+  return r.stdout.trim();
+}
+
+/** Stops the cluster and deletes its data (a throw-away clone's cluster only). */
+export function remove() {
+  down();
+  const { pgData, runDir, outside } = location();
+  fs.rmSync(outside ? outsideDir : pgData, { recursive: true, force: true });
+  if (!outside) fs.rmSync(runDir, { recursive: true, force: true });
 }
 
 export function pgBin(tool) {
@@ -142,5 +199,8 @@ if (process.argv[1] === fileURLToPath(import.meta.url)) {
   if (cmd === "up") up(rest.length ? rest : ["loopkeeper"]);
   else if (cmd === "down") down();
   else if (cmd === "url") console.log(localUrl(rest[0] || "loopkeeper"));
-  else fail(`Unknown command ${cmd}. Use: up [db...] | down | url [db]`);
+  else if (cmd === "where") console.log(location().pgData);
+  else if (cmd === "check") console.log(check(rest[0] || "loopkeeper"));
+  else if (cmd === "remove") remove();
+  else fail(`Unknown command ${cmd}. Use: up [db...] | down | url [db] | where | check [db] | remove`);
 }

@@ -3,6 +3,7 @@
 // lint, typecheck, unit, integration (real PostgreSQL) and end-to-end tests (Debian's chromium).
 import { execFileSync } from "node:child_process";
 import fs from "node:fs";
+import { firstRunCheck } from "./first-run-check.mjs";
 import { log, fail } from "./log.mjs";
 import { prepare, run } from "./prepare.mjs";
 
@@ -17,7 +18,9 @@ function ensureChromium() {
   execFileSync("apt-get", ["install", "-y", "-qq", "chromium"], { stdio: "inherit", env: { ...process.env, DEBIAN_FRONTEND: "noninteractive" } });
 }
 
-const only = process.argv[2]; // optional: lint | unit | integration | e2e
+const only = process.argv[2]; // optional: first-run | lint | unit | integration | e2e
+if (!only || only === "first-run") await firstRunCheck();
+if (only === "first-run") process.exit(0);
 const env = await prepare({ database: "loopkeeper_test", port: E2E_PORT });
 const testEnv = { ...env, LOOPKEEPER_LOG: "silent", NEXT_DIST_DIR: ".next-test" };
 

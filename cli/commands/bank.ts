@@ -1,10 +1,8 @@
 import { writeFileSync } from "node:fs";
 import { contentHashHex, encodeBank, writeIntelHex, type BankSlotInput } from "../../lib/engine";
-import { parseArgs, UsageError } from "../args";
+import { defineCommand, UsageError } from "../args";
 import { formatIssues, readText, type CommandResult } from "../io";
 import { loadHardware, loadProfile } from "./load";
-
-export const BANK_USAGE = "bank <profile.json>... --hardware hw.json --out bank.bin [--hex bank.hex] [--versions 1.0.0,1.1.0] [--json]";
 
 function write(file: string, data: Uint8Array | string): void {
   try {
@@ -15,14 +13,22 @@ function write(file: string, data: Uint8Array | string): void {
 }
 
 /** `bank`: encode profiles into a bank image for the board revision, optionally as Intel HEX too. */
-export function bankCommand(argv: readonly string[]): CommandResult {
-  const args = parseArgs(argv, ["hardware", "out", "hex", "versions"], ["json"]);
-  const files = args.positionals;
-  if (files.length === 0) throw new UsageError(`Give at least one profile file: ${BANK_USAGE}`);
-  const hwFile = args.options.get("hardware");
-  const out = args.options.get("out");
-  if (!hwFile || !out) throw new UsageError(`--hardware and --out are required: ${BANK_USAGE}`);
-  const versions = args.options.get("versions")?.split(",") ?? files.map(() => "1.0.0");
+export const bankCommand = defineCommand({
+  name: "bank",
+  summary: "encode profiles, one per slot in the order given, into a bank image for the board revision of the hardware context.",
+  positionals: { name: "<profile.json>...", description: "profile documents, slot 1 first", min: 1, max: Infinity },
+  options: {
+    hardware: { kind: "text", value: "hw.json", description: "hardware context whose board revision sets memory size, slot count and base address", required: true },
+    out: { kind: "text", value: "bank.bin", description: "file the binary bank image is written to", required: true },
+    hex: { kind: "text", value: "bank.hex", description: "also write the image as Intel HEX at the board's base address" },
+    versions: { kind: "text", value: "v1,v2,…", description: "one semver version per profile, comma-separated, in order", defaultText: "1.0.0 for each" },
+  },
+  examples: ["bank examples/quiet.profile.json examples/performance.profile.json --hardware examples/cooler-360.hardware.json --out bank.bin --hex bank.hex --versions 1.0.0,2.3.1"],
+  run: (args) => bank(args.positionals, { hwFile: args.text("hardware")!, out: args.text("out")!, hexFile: args.text("hex"), versionList: args.text("versions") }),
+});
+
+function bank(files: string[], { hwFile, out, hexFile, versionList }: { hwFile: string; out: string; hexFile: string | undefined; versionList: string | undefined }): CommandResult {
+  const versions = versionList?.split(",") ?? files.map(() => "1.0.0");
   if (versions.length !== files.length) throw new UsageError(`--versions lists ${versions.length} versions for ${files.length} profiles; give one per profile, in order.`);
 
   const hw = loadHardware(hwFile);
@@ -43,7 +49,6 @@ export function bankCommand(argv: readonly string[]): CommandResult {
     return { exitCode: 1, human: encoded.errors.map((e) => `error ${e.code}: ${e.message}`).join("\n"), json: { ok: false, errors: encoded.errors } };
   }
   write(out, encoded.bytes);
-  const hexFile = args.options.get("hex");
   if (hexFile) write(hexFile, writeIntelHex(encoded.bytes, board.baseAddress));
   const bytes = encoded.bytes;
   const crc = new DataView(bytes.buffer, bytes.byteOffset).getUint32(bytes.length - 4, true);

@@ -1,26 +1,39 @@
-import { COOLANTS, evaluateCurves, loadSweep, operatingPoint } from "../../lib/engine";
-import { numberOption, parseArgs, UsageError } from "../args";
+import { COOLANTS, type Coolant, evaluateCurves, loadSweep, operatingPoint } from "../../lib/engine";
+import { defineCommand, UsageError } from "../args";
 import { fmtDb, formatIssues, jsonSafe, type CommandResult } from "../io";
 import { loadHardware, loadProfile } from "./load";
 
-export const EVALUATE_USAGE = "evaluate <profile.json> --hardware hw.json [--load W] [--ambient C] [--distance m] [--coolant water|pg30] [--json]";
-
 const DISCLAIMER = "Estimates from a lumped model; a release still needs lab measurement on real hardware.";
 
-/** `evaluate`: speeds and noise against liquid temperature, and the operating point at a heat load. */
-export function evaluateCommand(argv: readonly string[]): CommandResult {
-  const args = parseArgs(argv, ["hardware", "load", "ambient", "distance", "coolant"], ["json"]);
-  if (args.positionals.length !== 1) throw new UsageError(`Give one profile file: ${EVALUATE_USAGE}`);
-  const hwFile = args.options.get("hardware");
-  if (!hwFile) throw new UsageError(`--hardware is required: ${EVALUATE_USAGE}`);
-  const heatLoadW = numberOption(args, "load", 200)!;
-  const ambientC = numberOption(args, "ambient", 25)!;
-  const distanceM = numberOption(args, "distance", 1)!;
-  const coolantKey = args.options.get("coolant") ?? "water";
-  if (!(coolantKey in COOLANTS)) throw new UsageError(`--coolant must be one of ${Object.keys(COOLANTS).join(", ")}.`);
-  const coolant = COOLANTS[coolantKey as keyof typeof COOLANTS];
+const DEFAULTS = { heatLoadW: 200, ambientC: 25, distanceM: 1, coolant: "water" } as const;
 
-  const file = args.positionals[0]!;
+/** `evaluate`: speeds and noise against liquid temperature, and the operating point at a heat load. */
+export const evaluateCommand = defineCommand({
+  name: "evaluate",
+  summary: "estimate pump and fan speeds and noise against liquid temperature, and the operating point at a heat load.",
+  positionals: { name: "<profile.json>", description: "the profile document to evaluate", min: 1, max: 1 },
+  options: {
+    hardware: { kind: "text", value: "hw.json", description: "hardware context (board revision, pump, fans, radiator)", required: true },
+    load: { kind: "number", value: "W", description: "heat load on the cold plate in watts", defaultText: `${DEFAULTS.heatLoadW}` },
+    ambient: { kind: "number", value: "°C", description: "ambient air temperature", defaultText: `${DEFAULTS.ambientC}` },
+    distance: { kind: "number", value: "m", description: "listener distance for the noise estimate", defaultText: `${DEFAULTS.distanceM}` },
+    coolant: { kind: "text", value: Object.keys(COOLANTS).join("|"), description: "coolant in the loop", defaultText: DEFAULTS.coolant },
+  },
+  examples: ["evaluate examples/performance.profile.json --hardware examples/cooler-360.hardware.json --load 250 --ambient 30"],
+  notes: [DISCLAIMER],
+  run(args) {
+    const coolantKey = args.text("coolant") ?? DEFAULTS.coolant;
+    if (!(coolantKey in COOLANTS)) throw new UsageError(`--coolant must be one of ${Object.keys(COOLANTS).join(", ")}, got "${coolantKey}".`);
+    return evaluate(args.positionals[0]!, args.text("hardware")!, {
+      heatLoadW: args.number("load") ?? DEFAULTS.heatLoadW,
+      ambientC: args.number("ambient") ?? DEFAULTS.ambientC,
+      distanceM: args.number("distance") ?? DEFAULTS.distanceM,
+      coolant: COOLANTS[coolantKey as keyof typeof COOLANTS],
+    });
+  },
+});
+
+function evaluate(file: string, hwFile: string, { heatLoadW, ambientC, distanceM, coolant }: { heatLoadW: number; ambientC: number; distanceM: number; coolant: Coolant }): CommandResult {
   const hw = loadHardware(hwFile);
   if (!hw.ok || !hw.value) return { exitCode: 1, human: formatIssues(hw.file, hw.issues), json: { ok: false, hardware: { file: hw.file, issues: hw.issues } } };
   const profile = loadProfile(file, hw.value);
@@ -36,10 +49,10 @@ export function evaluateCommand(argv: readonly string[]): CommandResult {
   }
   lines.push(
     "",
-    `Operating point at ${heatLoadW} W, ${ambientC} °C ambient, ${coolant.name}:`,
+    `Operating point at ${heatLoadW} W heat load, ${ambientC} °C ambient air, coolant ${coolant.name} (properties at ${coolant.propertiesAtTempC} °C):`,
     `  liquid ${op.liquidTempC.toFixed(2)} °C${op.holdsBelowCritical ? "" : `  ← at or above the critical ${profile.value.criticalTempC} °C: this curve cannot hold the load`}${op.onFanStopStep ? "  (fans cycle around their stop temperature)" : ""}`,
     `  pump ${op.pump.rpm.toFixed(0)} RPM, ${op.pumpFlowLpm.toFixed(2)} L/min, coolant rise across the cold plate ${op.coolantRiseK.toFixed(2)} K`,
-    `  fans ${op.fans.stopped ? "stopped" : `${op.fans.rpm.toFixed(0)} RPM`}, noise ${fmtDb(op.noise.totalDbA1m)} at 1 m, ${fmtDb(op.noise.totalDbAAtDistance)} at ${distanceM} m`,
+    `  fans ${op.fans.stopped ? "stopped" : `${op.fans.rpm.toFixed(0)} RPM`}, noise ${fmtDb(op.noise.totalDbA1m)} at 1 m${distanceM === 1 ? "" : `, ${fmtDb(op.noise.totalDbAAtDistance)} at ${distanceM} m`}`,
   );
   const failing = sweep.find((p) => !p.holdsBelowCritical);
   lines.push(failing ? `Load sweep 50–350 W: above the critical temperature from ${failing.heatLoadW} W.` : "Load sweep 50–350 W: stays below the critical temperature.");

@@ -1,59 +1,87 @@
-import { decodeBank, identifySlots, readIntelHex, type HexStartRecord, type KnownProfileVersion, type SlotIdentity } from "../../lib/engine";
-import { parseArgs, UsageError } from "../args";
+import { decodeBank, looksLikeIntelHex, readIntelHex, reportDump, type DumpReport, type RegistryBuild, type RegistryVersion } from "../../lib/engine";
+import { defineCommand, UsageError } from "../args";
 import { readBytes, readText, type CommandResult } from "../io";
 
-export const INSPECT_USAGE = "inspect <dump.bin|dump.hex> [--known known.json] [--json]";
+const KNOWN_SHAPE = `{ "profileVersions": [{ "profileVersionId", "version", "contentHash", "document" }, …], "builds": [{ "buildId", "version", "stage", "bankSha256" }, …] }`;
 
-function loadKnown(file: string): KnownProfileVersion[] {
+const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
+const strings = (v: Record<string, unknown>, fields: readonly string[]): boolean => fields.every((f) => typeof v[f] === "string");
+
+/** The registry's published versions (with their stored documents) and builds (with their bank SHA-256), as exported for offline use. */
+function loadKnown(file: string): { known: RegistryVersion[]; builds: RegistryBuild[] } {
   let parsed: unknown;
   try {
     parsed = JSON.parse(readText(file));
   } catch {
-    throw new UsageError(`${file}: not JSON; expected [{ "profileVersionId", "contentHashPrefix", "version" }, …].`);
+    throw new UsageError(`${file}: not JSON; expected ${KNOWN_SHAPE}.`);
   }
-  const ok = Array.isArray(parsed) && parsed.every((k) => typeof k === "object" && k !== null && ["profileVersionId", "contentHashPrefix", "version"].every((f) => typeof (k as Record<string, unknown>)[f] === "string"));
-  if (!ok) throw new UsageError(`${file}: expected [{ "profileVersionId", "contentHashPrefix", "version" }, …] with string values.`);
-  return parsed as KnownProfileVersion[];
+  const versions: unknown = Array.isArray(parsed) ? parsed : isRecord(parsed) ? parsed.profileVersions : undefined;
+  const builds: unknown = isRecord(parsed) ? (parsed.builds ?? []) : [];
+  const versionsOk = Array.isArray(versions) && versions.every((k) => isRecord(k) && strings(k, ["profileVersionId", "version", "contentHash"]) && isRecord(k.document));
+  const buildsOk = Array.isArray(builds) && builds.every((b) => isRecord(b) && strings(b, ["buildId", "version", "stage", "bankSha256"]));
+  if (!versionsOk || !buildsOk) {
+    throw new UsageError(`${file}: expected ${KNOWN_SHAPE}; each profile version needs its stored document, because a slot is "exact" only when its bytes equal that document's encoding.`);
+  }
+  return { known: versions as RegistryVersion[], builds: builds as RegistryBuild[] };
 }
 
-const hex4 = (n: number): string => n.toString(16).toUpperCase().padStart(4, "0");
-const describeStartRecord = (r: HexStartRecord): string =>
-  r.type === 3 ? `execution starts at CS:IP ${hex4(r.segment ?? 0)}:${hex4(r.offset ?? 0)}` : `execution starts at 0x${(r.linearAddress ?? 0).toString(16).toUpperCase().padStart(8, "0")}`;
+const MATCH_TEXT = { exact: "exact", altered: "ALTERED", unknown: "unknown to the registry", undecodable: "UNDECODABLE" } as const;
 
-const looksLikeHex = (file: string, bytes: Uint8Array): boolean => /\.(hex|ihx)$/i.test(file) || bytes[0] === 0x3a;
-
-/** `inspect`: decode a bank image or memory dump (.bin or Intel HEX), check its CRC, list and identify slots. */
-export function inspectCommand(argv: readonly string[]): CommandResult {
-  const args = parseArgs(argv, ["known"], ["json"]);
-  if (args.positionals.length !== 1) throw new UsageError(`Give one dump file: ${INSPECT_USAGE}`);
-  const file = args.positionals[0]!;
-  const known = args.options.get("known");
-  const knownList = known ? loadKnown(known) : undefined;
-  let bytes = readBytes(file);
-  let startAddress: number | undefined;
-  let startRecords: HexStartRecord[] = [];
-  if (looksLikeHex(file, bytes)) {
-    const hex = readIntelHex(new TextDecoder().decode(bytes));
-    if (!hex.ok) {
-      return { exitCode: 1, human: hex.errors.map((e) => `${file}:${e.line}: error ${e.code}: ${e.message}`).join("\n"), json: { ok: false, file, hexErrors: hex.errors } };
-    }
-    bytes = hex.bytes;
-    startAddress = hex.startAddress;
-    startRecords = hex.startRecords;
-  }
-  const d = decodeBank(bytes);
-  const ids: SlotIdentity[] | undefined = knownList ? identifySlots(d.slots, knownList) : undefined;
+function describe(file: string, r: DumpReport, withKnown: boolean): string[] {
   const lines: string[] = [];
-  if (startAddress !== undefined) lines.push(`${file}: Intel HEX, data from 0x${startAddress.toString(16).toUpperCase().padStart(8, "0")}, ${bytes.length} bytes.`);
-  for (const r of startRecords) lines.push(`${file}:${r.line}: start-address record (type 0${r.type}): ${describeStartRecord(r)}; it places no data.`);
-  if (d.byteLength !== undefined) lines.push(`Bank format ${d.formatVersion}, ${d.slotCount} slots, ${d.byteLength} bytes.`);
-  if (d.crc) lines.push(`CRC-32 stored 0x${d.crc.stored.toString(16).toUpperCase().padStart(8, "0")}, computed 0x${d.crc.computed.toString(16).toUpperCase().padStart(8, "0")}: ${d.crc.stored === d.crc.computed ? "match" : "MISMATCH"}.`);
-  for (const s of d.slots) {
-    const id = ids?.find((i) => i.slotIndex === s.index);
-    const who = id ? (id.match === "exact" ? ` = ${id.profileVersionId}` : id.match === "hash_only" ? ` content of ${id.profileVersionId} (registry has v${id.knownVersion})` : " unknown profile version") : "";
-    const st = s.settings;
-    lines.push(`  slot ${s.index}: v${s.version} hash ${s.contentHashPrefix}${who}; critical ${st.criticalTempC} °C, sensor loss ${st.sensorLossDutyPct} %, pump ${st.pump.points.length} points, fans ${st.fans.points.length} points${st.fans.stopBelowTempC !== undefined ? `, fans stop below ${st.fans.stopBelowTempC} °C` : ""}`);
+  if (r.hex) {
+    lines.push(`${file}: Intel HEX, ${r.hex.recordCount} records${r.hex.startAddress !== undefined ? `, data from 0x${r.hex.startAddress.toString(16).toUpperCase().padStart(8, "0")}` : ""}.`);
+    for (const s of r.hex.startRecords) lines.push(`${file}:${s.line}: start-address record (type 0${s.type}): execution starts at ${s.address}; it places no data.`);
   }
-  for (const e of d.errors) lines.push(`${file}${e.offset !== undefined ? ` @ byte ${e.offset}` : ""}: error ${e.code}: ${e.message}`);
-  return { exitCode: d.ok ? 0 : 1, human: lines.join("\n"), json: { ...d, file, startAddress: startAddress ?? null, startRecords, identities: ids ?? null } };
+  if (r.slotCount !== undefined) lines.push(`Bank, ${r.slotCount} slots${r.imageSha256 ? `, SHA-256 ${r.imageSha256}` : ""}.`);
+  if (r.crc) lines.push(`CRC-32 stored ${r.crc.stored}, computed ${r.crc.computed}: ${r.crc.ok ? "match" : "MISMATCH"}.`);
+  if (r.build) lines.push(`This is the bank of build ${r.build.version}${r.build.boardModelName ? ` (${r.build.boardModelName})` : ""}, stage ${r.build.stage}.`);
+  else if (withKnown && r.imageSha256) lines.push("No build in the registry has this exact bank.");
+  for (const s of r.slots) {
+    if (s.match === "undecodable") {
+      lines.push(`  slot ${s.slotIndex} @ byte ${s.offset}: UNDECODABLE: ${s.reason ?? ""}`);
+      continue;
+    }
+    const who = !withKnown ? "" : s.profileVersionId ? `: ${MATCH_TEXT[s.match]} ${s.coolerName ? `${s.coolerName} · ` : ""}${s.profileName ?? s.profileVersionId} v${s.knownVersion}` : `: ${MATCH_TEXT[s.match]}`;
+    lines.push(`  slot ${s.slotIndex}: v${s.version} label ${s.contentHashPrefix}${who}`);
+    for (const d of s.differences) lines.push(`    differs: ${d}`);
+    for (const f of s.findings) lines.push(`    ${f.severity === "error" ? "FAULT" : "warning"} ${f.code}: ${f.message}`);
+  }
+  return lines;
+}
+
+/**
+ * `inspect`: decode a bank image or memory dump (.bin or Intel HEX), check it, and with
+ * `--known` identify every slot by content, as the support page and the API do.
+ */
+export const inspectCommand = defineCommand({
+  name: "inspect",
+  summary: "decode a bank image or memory dump (.bin or Intel HEX), check it strictly, run the safety rules on every slot and, with --known, identify each slot by content.",
+  positionals: { name: "<dump.bin|dump.hex>", description: "bank image or memory dump; Intel HEX when named .hex/.ihx or starting with ':'", min: 1, max: 1 },
+  options: {
+    known: { kind: "text", value: "registry.json", description: `the registry's versions and builds to identify by: ${KNOWN_SHAPE}` },
+  },
+  examples: ["inspect bank.hex", "inspect returned-board.bin --known registry.json --json"],
+  notes: ["A slot is exact only when its bytes equal the registry's encoding of the version it names; otherwise altered (with the differing fields), unknown or undecodable. Exit 1 when the image is damaged, a slot is altered or undecodable, or a slot breaks a safety rule."],
+  run: (args) => inspect(args.positionals[0]!, args.text("known")),
+});
+
+function inspect(file: string, knownFile: string | undefined): CommandResult {
+  const registry = knownFile ? loadKnown(knownFile) : { known: [], builds: [] };
+  const bytes = readBytes(file);
+  const asHex = /\.(hex|ihx)$/i.test(file) || looksLikeIntelHex(bytes);
+  if (asHex && !looksLikeIntelHex(bytes)) {
+    return { exitCode: 1, human: `${file}:1: error hex.no_start_code: the file is named as Intel HEX but does not start with a ":" record.`, json: { ok: false, file } };
+  }
+  const report = reportDump({ bytes, fileName: file, ...registry });
+  if (report.hex && !report.hex.ok) {
+    const hex = readIntelHex(new TextDecoder().decode(bytes));
+    return { exitCode: 1, human: hex.errors.map((e) => `${file}:${e.line}: error ${e.code}: ${e.message}`).join("\n"), json: { ok: false, file, hexErrors: hex.errors, report } };
+  }
+  const decoded = decodeBank(report.hex ? readIntelHex(new TextDecoder().decode(bytes)).bytes : bytes);
+  const lines = describe(file, report, knownFile !== undefined);
+  for (const e of decoded.errors) lines.push(`${file}${e.offset !== undefined ? ` @ byte ${e.offset}` : ""}: error ${e.code}: ${e.message}`);
+  for (const f of report.faults) lines.push(`FAULT: ${f}`);
+  const ok = report.status === "ok" && report.faults.length === 0;
+  return { exitCode: ok ? 0 : 1, human: lines.join("\n"), json: { ...decoded, file, report } };
 }

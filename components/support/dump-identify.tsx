@@ -11,7 +11,8 @@ import { Panel } from "@/components/ui/panel";
 import { Table, Td, Th } from "@/components/ui/table";
 import { ErrorNotice } from "@/components/ui/error-notice";
 
-const MATCH_LABEL = { exact: "Known version", hash_only: "Known content, other version", unknown: "Unknown" } as const;
+const MATCH_LABEL = { exact: "Exact registry version", altered: "Altered", unknown: "Unknown to the registry", undecodable: "Cannot be read" } as const;
+const MATCH_TONE = { exact: "ok", altered: "fault", unknown: "neutral", undecodable: "fault" } as const;
 
 export function DumpIdentify() {
   const id = useId();
@@ -50,7 +51,7 @@ export function DumpIdentify() {
       {identify.error && <div className="mt-3"><ErrorNotice error={identify.error} /></div>}
       {r && (
         <div className="mt-4 space-y-3" data-testid="dump-result">
-          {r.status === "ok" && <Notice tone="ok" role="status" title="Dump is intact">CRC-32 {r.crc?.stored} matches; {r.slots.length} slot(s) read.</Notice>}
+          {r.status === "ok" && r.faults.length === 0 && <Notice tone="ok" role="status" title="Dump is intact">CRC-32 {r.crc?.stored} matches; {r.slots.length} slot(s) read, every one checked by content.</Notice>}
           {r.status === "corrupt" && (
             <Notice tone="fault" role="alert" title="Dump is corrupt">
               {r.errors[0]?.message ?? r.hex?.errors[0]?.message ?? "The image is damaged."} Slots that could still be read are listed below.
@@ -59,6 +60,20 @@ export function DumpIdentify() {
           {r.status === "unreadable" && (
             <Notice tone="fault" role="alert" title="Not a readable profile bank">{r.errors[0]?.message ?? "The file holds no profile bank."}</Notice>
           )}
+          {r.faults.length > 0 && (
+            <Notice tone="fault" role="alert" title={`${r.faults.length} fault(s) in what the board holds`}>
+              <ul className="list-disc pl-5" data-testid="dump-faults">
+                {r.faults.map((f) => <li key={f}>{f}</li>)}
+              </ul>
+            </Notice>
+          )}
+          {r.build ? (
+            <Notice tone="ok" role="status" title={`This is the bank of build ${r.build.version}`}>
+              The whole image equals, byte for byte (SHA-256), the bank of build {r.build.version}{r.build.boardModelName ? ` for ${r.build.boardModelName}` : ""}, stage {r.build.stage}.
+            </Notice>
+          ) : r.imageSha256 ? (
+            <p className="text-sm text-ink-700">No build in the registry has exactly this bank (SHA-256 <code className="text-xs">{r.imageSha256.slice(0, 16)}…</code>).</p>
+          ) : null}
           <p className="text-xs text-ink-600">
             {r.fileName ?? "Upload"}: {r.format === "hex" ? "Intel HEX" : "binary"}, {r.sizeBytes} bytes
             {r.crc && <>; CRC-32 stored {r.crc.stored}, computed {r.crc.computed}</>}
@@ -70,18 +85,37 @@ export function DumpIdentify() {
                   <Th>Slot</Th>
                   <Th>Stored version</Th>
                   <Th>Content hash</Th>
-                  <Th>Identified as</Th>
+                  <Th>Identified by content</Th>
+                  <Th>Differences and findings</Th>
                 </tr>
               </thead>
               <tbody>
                 {r.slots.map((s) => (
                   <tr key={s.slotIndex}>
                     <Td>{s.slotIndex}</Td>
-                    <Td className="tabular-nums">{s.version}</Td>
-                    <Td><code className="text-xs">{s.contentHashPrefix}</code></Td>
+                    <Td className="tabular-nums">{s.version ?? "—"}</Td>
+                    <Td>{s.contentHashPrefix ? <code className="text-xs">{s.contentHashPrefix}</code> : "—"}</Td>
                     <Td>
-                      <Badge tone={s.match === "exact" ? "ok" : s.match === "hash_only" ? "warn" : "neutral"}>{MATCH_LABEL[s.match]}</Badge>{" "}
-                      {s.profileName && <span>{s.coolerName} · {s.profileName} {s.knownVersion ?? s.version}</span>}
+                      <Badge tone={MATCH_TONE[s.match]}>{MATCH_LABEL[s.match]}</Badge>{" "}
+                      {s.profileName && <span>{s.coolerName} · {s.profileName} v{s.knownVersion}</span>}
+                    </Td>
+                    <Td>
+                      {s.reason && <p>{s.reason}</p>}
+                      {s.differences.length > 0 && (
+                        <ul className="list-disc pl-5">
+                          {s.differences.map((d) => <li key={d}>{d}</li>)}
+                        </ul>
+                      )}
+                      {s.findings.length > 0 && (
+                        <ul className="mt-1 space-y-0.5">
+                          {s.findings.map((f) => (
+                            <li key={`${f.code}${f.message}`}>
+                              <Badge tone={f.severity === "error" ? "fault" : "warn"}>{f.severity === "error" ? "Fault" : "Warning"}</Badge> {f.message}
+                            </li>
+                          ))}
+                        </ul>
+                      )}
+                      {s.match === "exact" && s.findings.length === 0 && <span className="text-ink-600">Bytes equal the registry&apos;s encoding.</span>}
                     </Td>
                   </tr>
                 ))}

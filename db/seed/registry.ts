@@ -126,7 +126,7 @@ export async function seedRegistry(db: Database): Promise<void> {
     const last = p.versions[p.versions.length - 1]!;
     await db
       .insert(profiles)
-      .values({ coolerModelId: cooler.id, name: p.name, description: p.description, ownerUserId: owner.id, draftDocument: last.document, draftUpdatedAt: new Date() })
+      .values({ coolerModelId: cooler.id, name: p.name, description: p.description, ownerUserId: owner.id, draftText: documentText(last.document), draftUpdatedAt: new Date() })
       .onConflictDoNothing();
     const [profile] = await db.select().from(profiles).where(and(eq(profiles.coolerModelId, cooler.id), eq(profiles.name, p.name)));
     if (!profile) throw new Error(`demo profile ${p.name} missing`);

@@ -113,7 +113,7 @@ function readSlot(bytes: Uint8Array, offset: number, limit: number, index: numbe
  */
 export function decodeBank(bytes: Uint8Array): DecodeBankResult {
   const errors: BankIssue[] = [];
-  const result: DecodeBankResult = { ok: false, slots: [], errors };
+  const result: DecodeBankResult = { ok: false, slots: [], undecodable: [], errors };
   if (!(bytes instanceof Uint8Array)) {
     errors.push({ code: "bank.not_bytes", message: "Expected the image as bytes (Uint8Array)." });
     return result;
@@ -172,11 +172,18 @@ export function decodeBank(bytes: Uint8Array): DecodeBankResult {
   let at = HEADER_BYTES;
   for (let i = 0; i < result.slotCount; i++) {
     if (at >= crcAt) {
-      errors.push({ code: "bank.slot_truncated", message: `The header gives ${result.slotCount} slots but only ${i} fit before the CRC.`, offset: at });
+      const message = `The header gives ${result.slotCount} slots but only ${i} fit before the CRC.`;
+      errors.push({ code: "bank.slot_truncated", message, offset: at });
+      for (let j = i; j < result.slotCount; j++) result.undecodable.push({ index: j, offset: at, code: "bank.slot_truncated", reason: `Slot ${j} does not fit before the CRC: ${message}` });
       break;
     }
+    const before = errors.length;
     const { slot, next } = readSlot(bytes, at, crcAt, i, errors);
     if (slot) result.slots.push(slot);
+    else {
+      const first = errors[before];
+      result.undecodable.push({ index: i, offset: at, code: first?.code ?? "bank.bad_slot", reason: first?.message ?? `Slot ${i} could not be read.` });
+    }
     at = next;
   }
   if (errors.length === 0 && at !== crcAt) {

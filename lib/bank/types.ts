@@ -36,6 +36,15 @@ export interface DecodedSlot {
   settings: ProfileSettings;
 }
 
+/** A slot the header announces but whose bytes cannot be read as a slot. */
+export interface UndecodableSlot {
+  index: number;
+  /** Byte offset where the slot was expected. */
+  offset: number;
+  code: string;
+  reason: string;
+}
+
 export type EncodeBankResult = { ok: true; bytes: Uint8Array } | { ok: false; errors: BankIssue[] };
 
 export interface DecodeBankResult {
@@ -48,5 +57,7 @@ export interface DecodeBankResult {
   crc?: { stored: number; computed: number };
   /** Slots that could be read (also when the CRC does not match, to help support). */
   slots: DecodedSlot[];
+  /** Slots the header announces that could not be read, each with why. */
+  undecodable: UndecodableSlot[];
   errors: BankIssue[];
 }

@@ -73,14 +73,17 @@ export { quantise } from "../bank/quantise";
 export { encodeBank, versionBytes } from "../bank/encode";
 /** Decode a bank image or memory dump; never throws. */
 export { decodeBank } from "../bank/decode";
-/** Match decoded slots to known profile versions by content hash prefix and version. */
-export { identifySlots } from "../bank/identify";
-/** A registry entry to match against, and the match of one slot (exact / hash_only / unknown). */
-export type { KnownProfileVersion, SlotIdentity } from "../bank/identify";
+/** Identify slots by content: exact only when the bytes equal the registry's encoding; differences in the trade's units; authoring rules on every slot. */
+export { identifySlots, registrySlotBytes, slotDifferences, slotFindings, dumpKeys, imageSha256 } from "../bank/identify";
+/** A registry version and build to match against, and the report of one slot (exact / altered / unknown / undecodable). */
+export type { RegistryVersion, RegistryBuild, SlotReport, SlotMatch, SlotFinding, DumpKeys } from "../bank/identify";
+/** The whole dump report the command line, the API and the support page show. */
+export { reportDump, looksLikeIntelHex } from "../bank/dump-report";
+export type { DumpReport } from "../bank/dump-report";
 /** Image size of a set of slots, and the format constants. */
 export { bankBytes, slotBytes, BANK_MAGIC, BANK_FORMAT_VERSION, TEMP_STEP_C, DUTY_STEP_PCT } from "../bank/layout";
 /** Encoder input and results, decoded slots, and issues with code, offset, expected/actual. */
-export type { BankIssue, BankSlotInput, DecodedSlot, EncodeBankResult, DecodeBankResult } from "../bank/types";
+export type { BankIssue, BankSlotInput, DecodedSlot, EncodeBankResult, DecodeBankResult, UndecodableSlot } from "../bank/types";
 
 // ── Checksums and Intel HEX ──────────────────────────────────────────────────
 /** CRC-32/ISO-HDLC (zlib): check "123456789" → 0xCBF43926. */

@@ -1,12 +1,14 @@
 /** Density and specific heat of a coolant. */
 export interface Coolant {
   name: string;
+  /** Temperature the density and specific heat below are taken at, °C. */
+  propertiesAtTempC: number;
   densityKgPerM3: number;
   specificHeatJPerKgK: number;
 }
 
 /** Water at 25 °C: ρ = 997.05 kg/m³, c_p = 4181.3 J/kg·K (IAPWS-95). */
-export const WATER_25C: Coolant = { name: "water, 25 °C", densityKgPerM3: 997.05, specificHeatJPerKgK: 4181.3 };
+export const WATER_25C: Coolant = { name: "water", propertiesAtTempC: 25, densityKgPerM3: 997.05, specificHeatJPerKgK: 4181.3 };
 
 /**
  * Propylene glycol / water, 30 % by mass, 20 °C: ρ ≈ 1028 kg/m³,
@@ -14,7 +16,8 @@ export const WATER_25C: Coolant = { name: "water, 25 °C", densityKgPerM3: 997.0
  * Properties of Secondary Coolants").
  */
 export const PROPYLENE_GLYCOL_30: Coolant = {
-  name: "propylene glycol 30 % / water, 20 °C",
+  name: "propylene glycol 30 % / water",
+  propertiesAtTempC: 20,
   densityKgPerM3: 1028,
   specificHeatJPerKgK: 3850,
 };

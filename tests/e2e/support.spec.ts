@@ -1,3 +1,4 @@
+import zlib from "node:zlib";
 import { expect, request as playwrightRequest, test, type APIRequestContext } from "@playwright/test";
 import { Client } from "pg";
 import { writeIntelHex } from "../../lib/engine";
@@ -71,8 +72,20 @@ test.describe("support lookup", () => {
     const lookup = await new LookupPage(page).goto();
     const result = await lookup.identify({ name: "returned-board.hex", mimeType: "text/plain", buffer: Buffer.from(writeIntelHex(new Uint8Array(bytes), baseAddress)) });
     await expect(result.getByText("Dump is intact")).toBeVisible();
-    await expect(result.getByText("Known version")).toHaveCount(2);
-    await expect(result.getByText(/Quiet 1\.0\.0/)).toBeVisible();
+    await expect(result.getByText("Exact registry version")).toHaveCount(2);
+    await expect(result.getByText(/Quiet v1\.0\.0/)).toBeVisible();
+    await expect(result.getByText("This is the bank of build 3.0.0")).toBeVisible();
+
+    // A curve byte changed and the CRC-32 written again: intact bytes, but not the registry's version.
+    const altered = Buffer.from(bytes);
+    const at = 8 + 19 + 2 * 1 + 1; // slot 0, pump point 2 duty (docs/bank-format.md)
+    altered[at] = altered[at]! + 4;
+    altered.writeUInt32LE(zlib.crc32(altered.subarray(0, altered.length - 4)), altered.length - 4);
+    await file.setInputFiles({ name: "altered.bin", mimeType: "application/octet-stream", buffer: altered });
+    await page.getByRole("button", { name: "Identify" }).click();
+    await expect(result.getByText("Altered", { exact: true })).toBeVisible();
+    await expect(result.getByText("Exact registry version")).toHaveCount(1);
+    await expect(result.getByTestId("dump-faults")).toContainText(`pump point 2: ${altered[at] / 2} % here, ${bytes[at]! / 2} % in v1.0.0`);
 
     const corrupted = Buffer.from(bytes);
     corrupted[20] = corrupted[20]! ^ 0xff;

@@ -2,9 +2,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { and, eq, sql } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "./support/db";
 import { createLot, importLots } from "@/db/lots";
-import { findLotBySerial, listKnownProfileVersions } from "@/db/lookup";
-import { identifyDumpBytes } from "@/lib/use-cases/support/identify-dump";
-import { writeIntelHex } from "@/lib/engine";
+import { findLotBySerial } from "@/db/lookup";
 import { boardModels, builds, productionLots } from "@/db/schema";
 import { parseLotsCsv } from "@/lib/lots/csv";
 import { lookupSerial } from "@/lib/use-cases/support/lookup";
@@ -111,38 +109,5 @@ describe("serial lookup", () => {
     expect(quiet).toMatchObject({ fromVersion: "1.1.0", toVersion: "1.2.0", kind: "changed" });
     expect(quiet?.changes).toContain("pump: 45 °C 60 % → 75 %");
     expect(r?.pump.pulsesPerRev).toBe(4);
-  });
-});
-
-describe("memory dump identification", () => {
-  async function image(version: string) {
-    const db = getDb();
-    const [board] = await db.select().from(boardModels).where(eq(boardModels.serialPrefix, "TC1"));
-    const [build] = await db.select().from(builds).where(and(eq(builds.boardModelId, board!.id), eq(builds.version, version)));
-    return build!.bankImage!;
-  }
-
-  it("identifies every slot of a demo build's image, as .bin and as Intel HEX", async () => {
-    const known = await listKnownProfileVersions(getDb());
-    const bytes = await image("3.0.0");
-    const bin = identifyDumpBytes({ bytes, fileName: "a.bin", known });
-    expect(bin).toMatchObject({ status: "ok", format: "bin", crc: { ok: true } });
-    expect(bin.slots.map((s) => [s.match, s.profileName, s.version])).toEqual([
-      ["exact", "Quiet", "1.0.0"],
-      ["exact", "Performance", "1.0.0"],
-    ]);
-    const hex = identifyDumpBytes({ bytes: new TextEncoder().encode(writeIntelHex(bytes, 0x0800f000)), fileName: "a.hex", known });
-    expect(hex).toMatchObject({ status: "ok", format: "hex" });
-    expect(hex.slots).toHaveLength(2);
-  });
-
-  it("reports a flipped byte as corrupt and a foreign file as unreadable", async () => {
-    const known = await listKnownProfileVersions(getDb());
-    const bytes = Uint8Array.from(await image("3.0.0"));
-    bytes[20] = bytes[20]! ^ 0xff;
-    const bad = identifyDumpBytes({ bytes, fileName: null, known });
-    expect(bad.status).toBe("corrupt");
-    expect(bad.crc?.ok).toBe(false);
-    expect(identifyDumpBytes({ bytes: new TextEncoder().encode("hello world, not a bank"), fileName: null, known }).status).toBe("unreadable");
   });
 });

@@ -13,7 +13,11 @@ export const createProfileBody = z.strictObject({
 export type CreateProfileBody = z.infer<typeof createProfileBody>;
 
 export const saveDraftBody = z.strictObject({
-  text: z.string().max(MAX_PROFILE_BYTES, "The draft is larger than 256 KiB."),
+  text: z
+    .string()
+    .max(MAX_PROFILE_BYTES, "The draft is larger than 256 KiB.")
+    // The draft is stored as typed, and PostgreSQL text cannot hold U+0000.
+    .refine((t) => !t.includes("\u0000"), "The draft contains a NUL character (U+0000); remove it (in JSON write it as \\u0000 if you mean it)."),
 });
 export type SaveDraftBody = z.infer<typeof saveDraftBody>;
 

@@ -155,34 +155,14 @@ export const listRecentLookups = defineOperation({
 
 export const MAX_DUMP_BYTES = 256 * 1024;
 
-export interface DumpSlotView {
-  slotIndex: number;
-  version: string;
-  contentHashPrefix: string;
-  match: "exact" | "hash_only" | "unknown";
-  profileVersionId?: string;
-  profileName?: string;
-  coolerName?: string;
-  knownVersion?: string;
-}
-
-export interface DumpIdentifyResult {
-  fileName: string | null;
-  format: "bin" | "hex";
-  sizeBytes: number;
-  hex?: { ok: boolean; startAddress?: number; recordCount: number; errors: { line: number; message: string }[] };
-  status: "ok" | "corrupt" | "unreadable";
-  crc?: { stored: string; computed: string; ok: boolean };
-  slotCount?: number;
-  slots: DumpSlotView[];
-  errors: { code: string; message: string }[];
-}
+/** The dump report (lib/bank/dump-report.ts): the command line and this operation give the same one. */
+export type { DumpReport as DumpIdentifyResult, SlotReport as DumpSlotView } from "@/lib/engine";
 
 export const identifyDump = defineOperation({
   id: "identifyDump",
   method: "POST",
   path: "/api/v1/dumps/identify",
-  summary: "Identify a memory dump (.bin or Intel .hex) read back from a board: CRC, slots, matching profile versions",
+  summary: "Identify a memory dump (.bin or Intel .hex) read back from a board by content: CRC, each slot exact/altered (with the differing fields)/unknown/undecodable, safety findings, and the build whose bank it is",
   tag: "Support",
   access: "support",
   rawBody: { contentTypes: ["application/octet-stream", "text/plain", "multipart/form-data"], maxBytes: MAX_DUMP_BYTES },

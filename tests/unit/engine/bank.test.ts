@@ -1,7 +1,7 @@
 import zlib from "node:zlib";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { bankBytes, contentHashHex, decodeBank, encodeBank, identifySlots, quantise, readIntelHex, writeIntelHex, type CoolingProfile, type ProfileSettings } from "@/lib/engine";
+import { bankBytes, contentHashHex, decodeBank, encodeBank, quantise, readIntelHex, writeIntelHex, type CoolingProfile, type ProfileSettings } from "@/lib/engine";
 import { demoBankImages } from "./demo-images";
 import { anyInRangeProfileArb, performanceProfile, quietProfile, validProfileArb } from "./fixtures";
 
@@ -135,23 +135,6 @@ describe("bank image", () => {
       { numRuns: 1000 },
     );
     expect(decodeBank("LKPB" as unknown as Uint8Array).errors[0]!.code).toBe("bank.not_bytes");
-  });
-});
-
-describe("identify", () => {
-  it("matches slots by hash prefix and version", () => {
-    const quiet = quietProfile();
-    const perf = performanceProfile();
-    const bytes = encodeOk([{ profile: quiet, version: "1.0.0" }, { profile: perf, version: "2.0.0" }, { profile: { ...quiet, name: "Other" }, version: "1.0.0" }]);
-    const ids = identifySlots(decodeBank(bytes).slots, [
-      { profileVersionId: "pv-quiet-1", contentHashPrefix: contentHashHex(quiet).toUpperCase(), version: "1.0.0" },
-      { profileVersionId: "pv-perf-1", contentHashPrefix: contentHashHex(perf).slice(0, 16), version: "1.9.0" },
-    ]);
-    expect(ids.map((i) => i.match)).toEqual(["exact", "hash_only", "unknown"]);
-    expect(ids[0]!.profileVersionId).toBe("pv-quiet-1");
-    expect(ids[1]!.knownVersion).toBe("1.9.0");
-    // Malformed registry entries are skipped, not fatal.
-    expect(identifySlots(decodeBank(bytes).slots, [null, { profileVersionId: "x" }] as never).map((i) => i.match)).toEqual(["unknown", "unknown", "unknown"]);
   });
 });
 

@@ -3,7 +3,8 @@ import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { decodeBank, readIntelHex } from "@/lib/engine";
+import { COMMANDS } from "@/cli/commands";
+import { contentHashHex, decodeBank, readIntelHex, type CoolingProfile } from "@/lib/engine";
 import { examplePath } from "./fixtures";
 
 const root = path.resolve(__dirname, "../../..");
@@ -31,6 +32,46 @@ const tmp = (name: string, content?: string | Uint8Array): string => {
 
 beforeAll(() => {
   dir = mkdtempSync(path.join(tmpdir(), "loopkeeper-cli-"));
+});
+
+describe("cli help and usage", { timeout: 120_000 }, () => {
+  it("--help and -h exit 0 for every command, with its options and an example", () => {
+    expect(COMMANDS.map((c) => c.name)).toEqual(expect.arrayContaining(["validate", "evaluate", "bank", "inspect", "tach"]));
+    for (const command of COMMANDS) {
+      const r = cli(command.name, "--help");
+      expect(r.code, `${command.name} --help`).toBe(0);
+      expect(r.stdout).toContain(`Usage: loopkeeper ${command.name}`);
+      expect(r.stdout).toMatch(/Options:\n(\s+--\S+.*\n)+/);
+      expect(r.stdout).toMatch(new RegExp(`Examples?:\\n  loopkeeper ${command.name} `));
+      expect(r.stderr).toBe("");
+    }
+    expect(cli("bank", "-h").code).toBe(0);
+  });
+
+  it("--help wins over other mistakes on the same line", () => {
+    const r = cli("tach", "--pulses", "2.5", "--bogus", "--help");
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/--host-pulses/);
+  });
+
+  it("unknown options name the option and what the command takes (exit 2)", () => {
+    const r = cli("validate", quiet, "--bogus");
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/^Unknown option --bogus\. validate takes --hardware, --json, --help/);
+    expect(r.stderr).toContain("Usage: loopkeeper validate <profile.json>");
+    noStack(r.stderr);
+    const j = cli("evaluate", perf, "--hardware", hw, "--speed", "3", "--json");
+    expect(j.code).toBe(2);
+    expect(JSON.parse(j.stdout)).toMatchObject({ ok: false, exitCode: 2, error: expect.stringMatching(/Unknown option --speed/) });
+  });
+
+  it("no command lists the commands (exit 2); help lists them (exit 0)", () => {
+    const none = cli();
+    expect(none.code).toBe(2);
+    const help = cli("--help");
+    expect(help.code).toBe(0);
+    for (const command of COMMANDS) expect(help.stdout).toContain(`  ${command.name} `);
+  });
 });
 
 describe("cli validate", { timeout: 60_000 }, () => {
@@ -81,11 +122,23 @@ describe("cli evaluate", { timeout: 60_000 }, () => {
     const r = cli("evaluate", perf, "--hardware", hw, "--load", "250", "--ambient", "25", "--distance", "2");
     expect(r.code).toBe(0);
     expect(r.stdout).toMatch(/Operating point at 250 W/);
+    // Each thing once: the coolant's name and its property temperature are not two readings.
+    expect(r.stdout).toContain("coolant water (properties at 25 °C)");
+    expect(r.stdout).toMatch(/noise \d+\.\d dB\(A\) at 1 m, \d+\.\d dB\(A\) at 2 m/);
+    const oneMetre = cli("evaluate", perf, "--hardware", hw);
+    const noiseLine = oneMetre.stdout.split("\n").find((l) => l.startsWith("  fans "));
+    expect(noiseLine).toMatch(/noise \d+\.\d dB\(A\) at 1 m$/);
     expect(r.stdout).toMatch(/lab measurement/);
     const j = JSON.parse(cli("evaluate", perf, "--hardware", hw, "--json").stdout);
     expect(j.curve).toHaveLength(51);
     expect(j.sweep).toHaveLength(31);
     expect(j.operatingPoint.heatLoadW).toBe(200);
+  });
+
+  it("a negative ambient is a value, not an option", () => {
+    const r = cli("evaluate", perf, "--hardware", hw, "--ambient", "-10");
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain("-10 °C ambient air");
   });
 
   it("bad numbers and a missing --hardware are usage errors; negative load is invalid input", () => {
@@ -129,10 +182,16 @@ describe("cli bank and inspect", { timeout: 60_000 }, () => {
   it("identifies slots against a known list", () => {
     const b = tmp("bank-known.bin");
     expect(cli("bank", quiet, "--hardware", hw, "--out", b).code).toBe(0);
-    const slotHash = decodeBank(new Uint8Array(readFileSync(b))).slots[0]!.contentHashPrefix;
-    const known = tmp("known.json", JSON.stringify([{ profileVersionId: "pv-hush-1", contentHashPrefix: slotHash, version: "1.0.0" }]));
+    const document = JSON.parse(readFileSync(quiet, "utf8")) as CoolingProfile;
+    const known = tmp("known.json", JSON.stringify({ profileVersions: [{ profileVersionId: "pv-hush-1", version: "1.0.0", contentHash: contentHashHex(document), document }] }));
     const r = cli("inspect", b, "--known", known, "--json");
-    expect(JSON.parse(r.stdout).identities[0]).toMatchObject({ match: "exact", profileVersionId: "pv-hush-1" });
+    expect(r.code).toBe(0);
+    expect(JSON.parse(r.stdout).report.slots[0]).toMatchObject({ match: "exact", profileVersionId: "pv-hush-1" });
+    // The old label-only list cannot prove content, so it is refused with the expected shape.
+    const labels = tmp("labels.json", JSON.stringify([{ profileVersionId: "pv-hush-1", contentHashPrefix: contentHashHex(document).slice(0, 16), version: "1.0.0" }]));
+    const old = cli("inspect", b, "--known", labels);
+    expect(old.code).toBe(2);
+    expect(old.stderr).toMatch(/needs its stored document/);
   });
 
   it("refuses a profile that breaks the board's limits, and bad --versions", () => {
@@ -188,9 +247,15 @@ describe("cli tach", { timeout: 60_000 }, () => {
   it("bad input", () => {
     expect(cli("tach", "--reading", "5600").code).toBe(2);
     expect(cli("tach", "--reading", "abc", "--pulses", "4").code).toBe(2);
-    const zero = cli("tach", "--reading", "5600", "--pulses", "0");
-    expect(zero.code).toBe(1);
-    expect(zero.stderr).toMatch(/motorPulsesPerRev/);
+    // Pulses per revolution are whole numbers 1–8, as tachPulsesPerRev in schemas/hardware-context.schema.json.
+    for (const pulses of ["0", "2.5", "9", "-1", "two"]) {
+      const bad = cli("tach", "--reading", "5600", "--pulses", pulses);
+      expect(bad.code, pulses).toBe(2);
+      expect(bad.stderr).toContain(`--pulses is the motor's pulses per revolution: a whole number from 1 to 8, got "${pulses}"`);
+    }
+    expect(cli("tach", "--hz", "50", "--host-pulses", "1.5").code).toBe(2);
+    expect(cli("tach", "--reading", "5600", "--pulses", "8").code).toBe(0);
+    expect(cli("tach", "--reading", "5600", "--pulses", "1").code).toBe(0);
     const j = cli("tach", "--json");
     expect(j.code).toBe(2);
     expect(JSON.parse(j.stdout)).toMatchObject({ ok: false, exitCode: 2 });

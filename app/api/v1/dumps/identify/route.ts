@@ -1,7 +1,6 @@
 import { apiRoute } from "@/lib/platform/http/api-route";
 import { identifyDump, MAX_DUMP_BYTES } from "@/lib/api/operations/support";
 import { getDb } from "@/db/client";
-import { listKnownProfileVersions } from "@/db/lookup";
 import { AppError } from "@/lib/api/errors";
 import { firstFormFile, readRawBody } from "@/lib/platform/http/raw-body";
 import { identifyDumpBytes } from "@/lib/use-cases/support/identify-dump";
@@ -19,6 +18,5 @@ export const POST = apiRoute(identifyDump, async ({ req }) => {
   }
   if (file.bytes.length === 0) throw new AppError("bad_request", "The dump is empty; attach the .bin or .hex file read back from the board.");
   if (file.bytes.length > MAX_DUMP_BYTES) throw new AppError("payload_too_large", `The dump is larger than ${MAX_DUMP_BYTES / 1024} KiB; a profile bank is far smaller.`);
-  const known = await listKnownProfileVersions(getDb());
-  return identifyDumpBytes({ bytes: new Uint8Array(file.bytes), fileName: file.name, known });
+  return identifyDumpBytes(getDb(), { bytes: new Uint8Array(file.bytes), fileName: file.name });
 });

@@ -6,7 +6,6 @@ import * as profiles from "@/db/profiles";
 import { auditActor } from "@/lib/platform/auth/actor";
 import { readTextBody } from "@/lib/platform/http/read-text";
 import { validateProfileText } from "@/lib/engine";
-import { documentText } from "@/lib/registry/starter-profile";
 
 export const POST = apiRoute(importDraft, async ({ actor, params, req, requestId }) => {
   const db = getDb();
@@ -20,6 +19,7 @@ export const POST = apiRoute(importDraft, async ({ actor, params, req, requestId
       issues: issues.map((i) => ({ path: i.range ? `${i.path} (line ${i.range.start.line})` : i.path, message: i.message })),
     });
   }
-  const saved = await profiles.saveDraft(db, auditActor(actor, requestId), { id: params.id, text: documentText(result.value) });
+  // The file's text is kept as written (key order, spacing), like a typed draft.
+  const saved = await profiles.saveDraft(db, auditActor(actor, requestId), { id: params.id, text });
   return { ...saved, warnings: result.issues.length };
 });

@@ -1,0 +1,9 @@
+import type { CliCommand } from "../args";
+import { bankCommand } from "./bank";
+import { evaluateCommand } from "./evaluate";
+import { inspectCommand } from "./inspect";
+import { tachCommand } from "./tach";
+import { validateCommand } from "./validate";
+
+/** Every command, in the order `loopkeeper --help` lists them. A new command is added here. */
+export const COMMANDS: readonly CliCommand[] = [validateCommand, evaluateCommand, bankCommand, inspectCommand, tachCommand];
