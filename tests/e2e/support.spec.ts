@@ -81,8 +81,7 @@ test.describe("support lookup", () => {
     const at = 8 + 19 + 2 * 1 + 1; // slot 0, pump point 2 duty (docs/bank-format.md)
     altered[at] = altered[at]! + 4;
     altered.writeUInt32LE(zlib.crc32(altered.subarray(0, altered.length - 4)), altered.length - 4);
-    await file.setInputFiles({ name: "altered.bin", mimeType: "application/octet-stream", buffer: altered });
-    await page.getByRole("button", { name: "Identify" }).click();
+    await lookup.identify({ name: "altered.bin", mimeType: "application/octet-stream", buffer: altered });
     await expect(result.getByText("Altered", { exact: true })).toBeVisible();
     await expect(result.getByText("Exact registry version")).toHaveCount(1);
     await expect(result.getByTestId("dump-faults")).toContainText(`pump point 2: ${altered[at] / 2} % here, ${bytes[at]! / 2} % in v1.0.0`);

@@ -29,7 +29,7 @@ export function screenQuery<Q extends z.ZodType, B extends z.ZodType, P extends 
   load: (parsed: { params: Parsed<P>; query: Parsed<Q> }) => Promise<unknown>,
 ): ScreenQuery {
   return {
-    op: op as unknown as Operation,
+    op,
     key: operationKey(op, input),
     run: () => {
       const params = op.params ? op.params.safeParse(input.params ?? {}) : undefined;
