@@ -16,6 +16,7 @@ export default tseslint.config(
       "test-results/**",
       "playwright-report/**",
       "next-env.d.ts",
+      "tests/integration/generated/**",
     ],
   },
   js.configs.recommended,
@@ -56,6 +57,14 @@ export default tseslint.config(
     ignores: ["lib/platform/**", "lib/use-cases/**"],
     rules: {
       "no-restricted-imports": ["error", { patterns: [{ group: ["@/db", "@/db/*", "pg", "drizzle-orm", "drizzle-orm/*"], message: "Only db/, lib/platform and lib/use-cases reach PostgreSQL." }] }],
+    },
+  },
+  {
+    // Screens talk to the API through the typed client only, and its errors are already AppError.
+    files: ["components/**/*.{ts,tsx}", "app/**/*.tsx"],
+    rules: {
+      "no-restricted-globals": ["error", { name: "fetch", message: "Call the API with apiCall/apiQuery from @/lib/api/client." }],
+      "no-restricted-syntax": ["error", { selector: "TSAsExpression > TSTypeReference[typeName.name='AppError']", message: "Query and mutation errors are typed AppError already; do not cast." }],
     },
   },
 );

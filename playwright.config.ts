@@ -1,4 +1,5 @@
 import { defineConfig } from "@playwright/test";
+import { requestStatsFile } from "./tests/e2e/support/request-stats";
 
 const port = Number(process.env.E2E_PORT || 3100);
 
@@ -20,7 +21,8 @@ export default defineConfig({
   },
   webServer: {
     command: `node scripts/serve.mjs`,
-    env: { PORT: String(port), HOST: "127.0.0.1", NODE_ENV: "production" },
+    // Request stats: statements and session lookups per request, for the query-count spec.
+    env: { PORT: String(port), HOST: "127.0.0.1", NODE_ENV: "production", LOOPKEEPER_REQUEST_STATS: requestStatsFile(port) },
     url: `http://127.0.0.1:${port}/api/health`,
     reuseExistingServer: false,
     timeout: 120_000,

@@ -24,6 +24,21 @@ interface Doc {
 
 const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)]!;
 
+interface Summary {
+  n: number;
+  median: number;
+  p95: number;
+  min: number;
+  max: number;
+}
+function summary(samples: number[]): Summary {
+  const sorted = [...samples].sort((a, b) => a - b);
+  if (sorted.length === 0) return { n: 0, median: NaN, p95: NaN, min: NaN, max: NaN };
+  return { n: sorted.length, median: percentile(sorted, 50), p95: percentile(sorted, 95), min: sorted[0]!, max: sorted[sorted.length - 1]! };
+}
+const verdict = (s: Summary) => (s.median <= 16 && s.p95 <= 33 ? "met (median ≤ 16, p95 ≤ 33)" : `not met (median ≤ 16, p95 ≤ 33)`);
+const row = (what: string, s: Summary) => `| ${what} | ${s.n} | ${s.median.toFixed(1)} | ${s.p95.toFixed(1)} | ${s.min.toFixed(1)} | ${s.max.toFixed(1)} | ${verdict(s)} |`;
+
 async function waitForHealth(url: string, ms = 60_000) {
   const until = Date.now() + ms;
   while (Date.now() < until) {
@@ -68,6 +83,7 @@ async function main() {
   });
   try {
     await waitForHealth(`${base}/api/health`);
+    const loadBefore = os.loadavg()[0]!;
     const page = await browser.newPage({ baseURL: base, viewport: { width: 1600, height: 1000 } });
     await page.goto("/sign-in");
     await page.getByLabel("E-mail").fill("engineer@tarnwell.example");
@@ -81,8 +97,9 @@ async function main() {
     const doc = JSON.parse(detail.profile.draftText) as Doc;
     if (doc.fans.points.length !== 16) throw new Error(`expected a 16-point draft, found ${doc.fans.points.length}`);
     await page.goto(`/profiles/${surge.id}`);
-    await page.waitForFunction(() => Boolean(window.__loopkeeperEditor));
-    await page.getByTestId("curve-chart").waitFor();
+    // Monaco loads on demand; on a busy shared machine that can take well over the default 30 s.
+    await page.waitForFunction(() => Boolean(window.__loopkeeperEditor), undefined, { timeout: 180_000 });
+    await page.getByTestId("curve-chart").waitFor({ timeout: 180_000 });
 
     const samples: number[] = [];
     for (let i = 0; i < WARMUP + EDITS; i++) {
@@ -106,9 +123,60 @@ async function main() {
       })(${JSON.stringify(text)})`);
       if (i >= WARMUP) samples.push(ms);
     }
-    const sorted = [...samples].sort((a, b) => a - b);
-    const median = percentile(sorted, 50);
-    const p95 = percentile(sorted, 95);
+    const typing = summary(samples);
+
+    // Waits for the next "drag step → text, markers and plots committed" measure; null when
+    // the step changed nothing (the handle stayed on the same 0.5 % step).
+    const nextDragMeasure = () =>
+      page.evaluate<number | null>(`new Promise((resolve) => {
+        const until = performance.now() + 400;
+        const poll = () => {
+          const found = performance.getEntriesByName("lk-drag-to-update", "measure")[0];
+          if (found) resolve(found.duration);
+          else if (performance.now() > until) resolve(null);
+          else setTimeout(poll, 1);
+        };
+        poll();
+      })`);
+    const clearDrag = () => page.evaluate(`performance.clearMeasures("lk-drag-to-update"); performance.clearMarks("lk-drag")`);
+
+    // Drag: fan point 9 (40 °C, 72 % between 68 % and 76 %) held and moved up and down by a few pixels,
+    // measured from the pointer event's own timestamp.
+    const handle = page.getByRole("slider", { name: "fan point 9", exact: true });
+    const box = await handle.boundingBox();
+    if (!box) throw new Error("fan point 9 handle not on screen");
+    const cx = box.x + box.width / 2;
+    const cy = box.y + box.height / 2;
+    await page.mouse.move(cx, cy);
+    await page.mouse.down();
+    const dragSamples: number[] = [];
+    let unchanged = 0;
+    for (let i = 0; dragSamples.length < EDITS && i < (WARMUP + EDITS) * 3; i++) {
+      await clearDrag();
+      await page.mouse.move(cx, cy + (i % 2 === 0 ? -4 : 0));
+      const ms = await nextDragMeasure();
+      if (ms === null) unchanged++;
+      else if (i >= WARMUP) dragSamples.push(ms);
+    }
+    await page.mouse.up();
+    const dragging = summary(dragSamples);
+
+    // Keyboard: the same handle focused, ArrowUp / ArrowDown (0.5 % each), one undo step per press.
+    await handle.focus();
+    const keySamples: number[] = [];
+    for (let i = 0; i < WARMUP + EDITS; i++) {
+      await clearDrag();
+      await page.keyboard.press(i % 2 === 0 ? "ArrowUp" : "ArrowDown");
+      const ms = await nextDragMeasure();
+      if (ms !== null && i >= WARMUP) keySamples.push(ms);
+    }
+    const keys = summary(keySamples);
+    // BENCH_SCREENSHOT=file.png keeps a picture of the editor after the cases, to look at the plot.
+    if (process.env.BENCH_SCREENSHOT) await page.screenshot({ path: process.env.BENCH_SCREENSHOT, fullPage: true });
+    // Leave the demo draft as it was.
+    await page.evaluate(`window.__loopkeeperEditor.setText(${JSON.stringify(detail.profile.draftText)})`);
+    await page.waitForTimeout(1500);
+    const loadAfter = os.loadavg()[0]!;
 
     const bundles = bundleRows(distDir);
     const heavy = new Set(["/profiles/[id]", "/profiles/[id]/compare"]);
@@ -124,13 +192,23 @@ async function main() {
       "",
       `Machine: Node ${process.version}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? "cpu"}, load average ${os.loadavg()[0]!.toFixed(1)}. Run ${new Date().toISOString().slice(0, 10)}.`,
       "",
-      `### Edit → markers and plots updated (${EDITS} edits after ${WARMUP} warm-up)`,
+      `### Edit → markers and plots updated (one run; ${WARMUP} warm-up steps per case not counted)`,
       "",
-      "Measured in the page: from just before a programmatic edit of the Monaco model (one fan point's duty) to the editor's `lk-edit-to-update` measure, taken in the effect that runs after the engine's validation, the Monaco markers and the recharts plots are committed.",
+      "All three cases come from the same run on the same page, so they compare with each other; figures from other runs on this shared machine (2 cores, up to 8 people building and testing at once) do not compare well.",
       "",
-      "| median ms | p95 ms | min ms | max ms | target |",
-      "|---:|---:|---:|---:|---|",
-      `| ${median.toFixed(1)} | ${p95.toFixed(1)} | ${sorted[0]!.toFixed(1)} | ${sorted[sorted.length - 1]!.toFixed(1)} | within one 16 ms frame |`,
+      "- **Typing**: from just before a programmatic edit of the Monaco model (one fan point's duty) to the editor's `lk-edit-to-update` measure, taken in the effect that runs after the engine's validation, the Monaco markers and the plot are committed.",
+      "- **Drag step**: the mouse holds fan point 9 on the plot and moves a few pixels; from the pointer event's timestamp to `lk-drag-to-update` (text edit through Monaco, validation, markers, plot and points table committed).",
+      `- **Key step**: the same handle focused, ArrowUp/ArrowDown (0.5 % a press, one undo step each); from the key handler to the same measure.${unchanged ? ` (${unchanged} drag moves stayed on the same 0.5 % step and wrote nothing; not counted.)` : ""}`,
+      "",
+      "| case | samples | median ms | p95 ms | min ms | max ms | target (16 ms frame) |",
+      "|---|---:|---:|---:|---:|---:|---|",
+      row("typing", typing),
+      row("drag step", dragging),
+      row("key step", keys),
+      "",
+      `Load average (1 min) ${loadBefore.toFixed(1)} at the start and ${loadAfter.toFixed(1)} after the cases.`,
+      "",
+      "The live editor plot is a small SVG component of our own (components/profiles/charts/live-curve-plot.tsx): React updates only the `d` attributes of the series that changed. recharts stays for the compare, sweep, lookup and lab plots. The previous run with recharts on the editor plot measured a median 25.6 ms, p95 48.4 ms for typing (an earlier run on a differently loaded machine; kept for history only).",
       "",
       "### First-load JS per page route",
       "",

@@ -3,6 +3,7 @@ import { and, eq } from "drizzle-orm";
 import { buildReviews, builds, buildTransitions, type Build, type BuildStage } from "./schema";
 import type { Database, Tx } from "./client";
 import { recordAudit, type AuditActor } from "./audit";
+import { signBuildBank } from "./bank-signatures";
 import { enqueueMail } from "./mail";
 import { AppError } from "@/lib/api/errors";
 import type { OutgoingMail } from "@/lib/release/mail";
@@ -51,6 +52,8 @@ export async function transitionBuild(db: Database, actor: Actor, input: Transit
     if (input.to === "withdrawn") patch.withdrawnReason = input.reason ?? null;
     if (input.to === "production") patch.releaseNotes = input.releaseNotes ?? null;
     await tx.update(builds).set(patch).where(eq(builds.id, build.id));
+    // The bank a pilot run flashes is signed now, in the same transaction as the move.
+    if (input.to === "pilot") await signBuildBank(tx, build);
     const [transition] = await tx
       .insert(buildTransitions)
       .values({ buildId: build.id, fromStage: build.stage, toStage: input.to, actorUserId: actor.userId, reason: input.reason ?? input.releaseNotes ?? null })
@@ -67,21 +70,65 @@ export async function transitionBuild(db: Database, actor: Actor, input: Transit
   });
 }
 
-/** A reviewer's verdict, with its audit event and the mail to the author, in one transaction. */
-export async function addReview(
-  db: Database,
-  actor: Actor,
-  input: { buildId: string; verdict: "approve" | "request_changes"; comment: string; profileAuthorIds: (tx: Tx) => Promise<string[]>; mails: (tx: Tx, build: Build) => Promise<OutgoingMail[]> },
-) {
+type ReviewInput = {
+  buildId: string;
+  verdict: "approve" | "request_changes";
+  comment: string;
+  /** Why the reviewer may not review this build (judged with the build locked), or null. */
+  ineligible: (tx: Tx, build: Build) => Promise<string | null>;
+  mails: (tx: Tx, build: Build) => Promise<OutgoingMail[]>;
+};
+
+async function lockForReview(tx: Tx, actor: Actor, input: ReviewInput) {
+  const build = await lockBuild(tx, { id: input.buildId });
+  if (build.stage !== "review") throw new AppError("conflict", `Reviews are taken while a build is in review; this one is in ${build.stage}.`);
+  const why = await input.ineligible(tx, build);
+  if (why) throw new AppError("forbidden", why);
+  const [existing] = await tx.select().from(buildReviews).where(and(eq(buildReviews.buildId, build.id), eq(buildReviews.reviewerUserId, actor.userId))).limit(1);
+  return { build, existing };
+}
+
+const verdictWords = (v: "approve" | "request_changes") => (v === "approve" ? "approved" : "requested changes on");
+
+/**
+ * A reviewer's first verdict, with its audit event and the mail to the author, in one
+ * transaction. A second one from the same reviewer is refused (409): changing a verdict
+ * is the explicit update below; the unique index on (build, reviewer) is the last guard.
+ */
+export async function addReview(db: Database, actor: Actor, input: ReviewInput) {
   return db.transaction(async (tx) => {
-    const build = await lockBuild(tx, { id: input.buildId });
-    if (build.stage !== "review") throw new AppError("conflict", `Reviews are taken while a build is in review; this one is in ${build.stage}.`);
-    if (build.authorUserId === actor.userId) throw new AppError("forbidden", "You created this build; someone else must review it.");
-    if ((await input.profileAuthorIds(tx)).includes(actor.userId)) {
-      throw new AppError("forbidden", "You wrote a profile version in this build; someone who wrote none of it must review it.");
+    const { build, existing } = await lockForReview(tx, actor, input);
+    if (existing) {
+      throw new AppError(
+        "conflict",
+        `You already ${verdictWords(existing.verdict)} this build on ${existing.updatedAt.toISOString().slice(0, 10)}; one review per reviewer. To change your verdict, use "Change my verdict".`,
+      );
     }
     const [review] = await tx.insert(buildReviews).values({ buildId: build.id, reviewerUserId: actor.userId, verdict: input.verdict, comment: input.comment }).returning();
     await recordAudit(tx, actor, { action: `build.review.${input.verdict}`, entityType: "build", entityId: build.id, after: { reviewId: review!.id, verdict: input.verdict, comment: input.comment } });
+    await enqueueMail(tx, await input.mails(tx, build));
+    return review!;
+  });
+}
+
+/** The reviewer changes their own verdict: the same row, updated, audited with before and after. */
+export async function changeReview(db: Database, actor: Actor, input: ReviewInput & { reviewId: string }) {
+  return db.transaction(async (tx) => {
+    const { build, existing } = await lockForReview(tx, actor, input);
+    if (!existing || existing.id !== input.reviewId) throw new AppError("not_found", "You have no review with that id on this build; send a new review instead.");
+    if (existing.verdict === input.verdict && existing.comment === input.comment) throw new AppError("conflict", `Your review already says that (${verdictWords(existing.verdict)}); nothing changed.`);
+    const [review] = await tx
+      .update(buildReviews)
+      .set({ verdict: input.verdict, comment: input.comment, updatedAt: new Date(), resolvedAt: null })
+      .where(eq(buildReviews.id, existing.id))
+      .returning();
+    await recordAudit(tx, actor, {
+      action: "build.review.change",
+      entityType: "build",
+      entityId: build.id,
+      before: { reviewId: existing.id, verdict: existing.verdict, comment: existing.comment },
+      after: { reviewId: existing.id, verdict: input.verdict, comment: input.comment },
+    });
     await enqueueMail(tx, await input.mails(tx, build));
     return review!;
   });

@@ -1,7 +1,7 @@
 import "server-only";
 import { alias } from "drizzle-orm/pg-core";
 import { asc, desc, eq, inArray } from "drizzle-orm";
-import { boardModels, boardRevisions, buildReviews, builds, buildSlots, buildTransitions, components, coolerModels, profiles, profileVersions, uploads, users, type BuildStage } from "./schema";
+import { boardModels, buildReviews, builds, buildSlots, buildTransitions, components, coolerModels, profiles, profileVersions, uploads, users, type BuildStage } from "./schema";
 import type { Database, Executor } from "./client";
 import { recordAudit, type AuditActor } from "./audit";
 import { AppError } from "@/lib/api/errors";
@@ -24,6 +24,7 @@ const buildSummary = {
   bankBytes: builds.bankBytes,
   bankSha256: builds.bankSha256,
   bankCrc32: builds.bankCrc32,
+  bankSignatureKeyId: builds.bankSignatureKeyId,
   releaseNotes: builds.releaseNotes,
   waiverReason: builds.waiverReason,
   withdrawnReason: builds.withdrawnReason,
@@ -55,17 +56,15 @@ export async function getBuild(db: Executor, { id }: { id: string }) {
   return row;
 }
 
-export async function getBuildImage(db: Executor, { id }: { id: string }) {
-  const [row] = await db.select({ bankImage: builds.bankImage, version: builds.version, boardModelId: builds.boardModelId, revisionRange: builds.revisionRange }).from(builds).where(eq(builds.id, id)).limit(1);
+/** The build's own row (without joins), as gates judge it. */
+export async function getBuildRow(db: Executor, { id }: { id: string }) {
+  const [row] = await db.select().from(builds).where(eq(builds.id, id)).limit(1);
   return row;
 }
 
-export async function listBoardModels(db: Executor) {
-  return db.select({ id: boardModels.id, name: boardModels.name }).from(boardModels).orderBy(asc(boardModels.name));
-}
-
-export async function listRevisions(db: Executor, { boardModelId }: { boardModelId: string }) {
-  return db.select().from(boardRevisions).where(eq(boardRevisions.boardModelId, boardModelId)).orderBy(asc(boardRevisions.revision));
+export async function getBuildImage(db: Executor, { id }: { id: string }) {
+  const [row] = await db.select({ bankImage: builds.bankImage, bankSignature: builds.bankSignature, bankSignatureKeyId: builds.bankSignatureKeyId, version: builds.version, boardModelId: builds.boardModelId, revisionRange: builds.revisionRange }).from(builds).where(eq(builds.id, id)).limit(1);
+  return row;
 }
 
 export async function listBuildSlots(db: Executor, { buildId }: { buildId: string }) {
@@ -151,7 +150,20 @@ export async function loadSlotFacts(db: Executor, { ids, boardModelId }: { ids: 
 
 export async function listReviews(db: Executor, { buildId }: { buildId: string }) {
   return db
-    .select({ id: buildReviews.id, reviewerUserId: buildReviews.reviewerUserId, reviewerName: users.name, reviewerEmail: users.email, verdict: buildReviews.verdict, comment: buildReviews.comment, resolvedAt: buildReviews.resolvedAt, createdAt: buildReviews.createdAt })
+    .select({
+      id: buildReviews.id,
+      reviewerUserId: buildReviews.reviewerUserId,
+      reviewerName: users.name,
+      reviewerEmail: users.email,
+      // The reviewer's account as it is now: the gate counts only active reviewers who still may review.
+      reviewerRole: users.role,
+      reviewerDisabledAt: users.disabledAt,
+      verdict: buildReviews.verdict,
+      comment: buildReviews.comment,
+      resolvedAt: buildReviews.resolvedAt,
+      createdAt: buildReviews.createdAt,
+      updatedAt: buildReviews.updatedAt,
+    })
     .from(buildReviews)
     .innerJoin(users, eq(users.id, buildReviews.reviewerUserId))
     .where(eq(buildReviews.buildId, buildId))

@@ -15,13 +15,19 @@ import {
 } from "./schema";
 import type { Database, Executor } from "./client";
 
+const fan = alias(components, "fan");
+const pump = alias(components, "pump");
+
 /**
- * The serial lookup's hot query, prepared once per database handle under a fixed
- * name so PostgreSQL plans it once per connection. The inner select walks the btree
- * (board_model_id, serial_from) backwards to the last lot starting at or below the
- * serial (LIMIT 1 keeps the planner from sorting); the caller checks serial_to.
+ * The serial lookup's hot path in one round trip, prepared once per database handle under a
+ * fixed name so PostgreSQL plans it once per connection. The inner select walks the btree
+ * (board_model_id, serial_from) backwards to the last lot starting at or below the serial
+ * (LIMIT 1 keeps the planner from sorting; the caller checks serial_to). Joined to it: the
+ * board revision, and every build that matters for the answer (the shipped one, and the
+ * board model's production builds, newer ones picked in code by semver) with their slots,
+ * profiles and hardware. Left joins keep the lot when a build has no slots.
  */
-function buildLotBySerial(db: Database) {
+function buildLookupBySerial(db: Database) {
   const lot = db
     .select({
       id: productionLots.id,
@@ -54,6 +60,7 @@ function buildLotBySerial(db: Database) {
         producedOn: lot.producedOn,
         line: lot.line,
         boardModelId: lot.boardModelId,
+        buildId: lot.buildId,
       },
       revision: {
         id: boardRevisions.id,
@@ -72,23 +79,6 @@ function buildLotBySerial(db: Database) {
         revisionRange: builds.revisionRange,
         withdrawnReason: builds.withdrawnReason,
       },
-    })
-    .from(lot)
-    .innerJoin(boardRevisions, eq(boardRevisions.id, lot.boardRevisionId))
-    .innerJoin(builds, eq(builds.id, lot.buildId))
-    .prepare("support_lot_by_serial");
-}
-
-const fan = alias(components, "fan");
-const pump = alias(components, "pump");
-
-function buildSlotsForLookup(db: Database) {
-  return db
-    .select({
-      buildId: builds.id,
-      buildVersion: builds.version,
-      buildStage: builds.stage,
-      revisionRange: builds.revisionRange,
       slotIndex: buildSlots.slotIndex,
       profileVersionId: profileVersions.id,
       version: profileVersions.version,
@@ -126,44 +116,38 @@ function buildSlotsForLookup(db: Database) {
         flowAtMaxRpmLpm: pump.flowAtMaxRpmLpm,
       },
     })
-    .from(builds)
-    .innerJoin(buildSlots, eq(buildSlots.buildId, builds.id))
-    .innerJoin(profileVersions, eq(profileVersions.id, buildSlots.profileVersionId))
-    .innerJoin(profiles, eq(profiles.id, profileVersions.profileId))
-    .innerJoin(coolerModels, eq(coolerModels.id, profiles.coolerModelId))
-    .innerJoin(fan, eq(fan.id, coolerModels.fanComponentId))
-    .innerJoin(pump, eq(pump.id, coolerModels.pumpComponentId))
-    // The shipped build, and every production build of the board model (newer ones are picked in code by semver).
-    .where(or(eq(builds.id, sql.placeholder("buildId")), and(eq(builds.boardModelId, sql.placeholder("boardModelId")), eq(builds.stage, "production"))))
+    .from(lot)
+    .innerJoin(boardRevisions, eq(boardRevisions.id, lot.boardRevisionId))
+    .innerJoin(builds, or(eq(builds.id, lot.buildId), and(eq(builds.boardModelId, lot.boardModelId), eq(builds.stage, "production"))))
+    .leftJoin(buildSlots, eq(buildSlots.buildId, builds.id))
+    .leftJoin(profileVersions, eq(profileVersions.id, buildSlots.profileVersionId))
+    .leftJoin(profiles, eq(profiles.id, profileVersions.profileId))
+    .leftJoin(coolerModels, eq(coolerModels.id, profiles.coolerModelId))
+    .leftJoin(fan, eq(fan.id, coolerModels.fanComponentId))
+    .leftJoin(pump, eq(pump.id, coolerModels.pumpComponentId))
     .orderBy(builds.id, buildSlots.slotIndex)
-    .prepare("support_lookup_slots");
+    .prepare("support_lookup_by_serial");
 }
 
-const prepared = new WeakMap<Database, { lotBySerial: ReturnType<typeof buildLotBySerial>; slots: ReturnType<typeof buildSlotsForLookup> }>();
+const prepared = new WeakMap<Database, ReturnType<typeof buildLookupBySerial>>();
 
-function statements(db: Database) {
-  let s = prepared.get(db);
-  if (!s) {
-    s = { lotBySerial: buildLotBySerial(db), slots: buildSlotsForLookup(db) };
-    prepared.set(db, s);
+export type LookupRow = Awaited<ReturnType<ReturnType<typeof buildLookupBySerial>["execute"]>>[number];
+
+/**
+ * The lot holding this serial of the board model with this prefix, its revision, and the
+ * rows of the builds that matter for the answer (one per slot; one with null slot fields
+ * for a build without slots). Undefined when no lot holds the serial.
+ */
+export async function findLookupBySerial(db: Database, { prefix, serialNumber }: { prefix: string; serialNumber: number }): Promise<LookupRow[] | undefined> {
+  let statement = prepared.get(db);
+  if (!statement) {
+    statement = buildLookupBySerial(db);
+    prepared.set(db, statement);
   }
-  return s;
-}
-
-export type LotBySerial = NonNullable<Awaited<ReturnType<typeof findLotBySerial>>>;
-
-/** The lot holding this serial of the board model with this prefix, with its revision and build; undefined when none does. */
-export async function findLotBySerial(db: Database, { prefix, serialNumber }: { prefix: string; serialNumber: number }) {
-  const [row] = await statements(db).lotBySerial.execute({ prefix, serial: serialNumber });
-  if (!row || row.lot.serialTo < serialNumber) return undefined;
-  return row;
-}
-
-export type LookupSlotRow = Awaited<ReturnType<typeof findLookupSlots>>[number];
-
-/** Slots of the shipped build and of every production build of the board model, with the hardware to plot them on. */
-export async function findLookupSlots(db: Database, { buildId, boardModelId }: { buildId: string; boardModelId: string }) {
-  return statements(db).slots.execute({ buildId, boardModelId });
+  const rows = await statement.execute({ prefix, serial: serialNumber });
+  const first = rows[0];
+  if (!first || first.lot.serialTo < serialNumber) return undefined;
+  return rows;
 }
 
 export async function recordLookup(db: Executor, { userId, serial, found }: { userId: string; serial: string; found: boolean }): Promise<void> {

@@ -1,4 +1,5 @@
 import "server-only";
+import { sortRevisions } from "./boards";
 import { and, asc, count, desc, eq, inArray, sql, sum, type SQL } from "drizzle-orm";
 import { boardModels, boardRevisions, builds, productionLots, type ProductionLot } from "./schema";
 import type { Database, Executor } from "./client";
@@ -242,10 +243,8 @@ export async function listLots(db: Executor, f: LotFilter) {
 /** Board models with their revisions and the builds a lot may name, for the lot form and filters. */
 export async function lotOptions(db: Executor) {
   const models = await db.select({ id: boardModels.id, name: boardModels.name, serialPrefix: boardModels.serialPrefix }).from(boardModels).orderBy(asc(boardModels.name));
-  const revisions = await db
-    .select({ boardModelId: boardRevisions.boardModelId, revision: boardRevisions.revision })
-    .from(boardRevisions)
-    .orderBy(asc(boardRevisions.revision));
+  // Semantic-version order (2.0.0 before 10.0.0), the same as every other revision list.
+  const revisions = sortRevisions(await db.select({ boardModelId: boardRevisions.boardModelId, revision: boardRevisions.revision }).from(boardRevisions));
   const buildRows = await db
     .select({ id: builds.id, boardModelId: builds.boardModelId, version: builds.version, stage: builds.stage, revisionRange: builds.revisionRange })
     .from(builds)

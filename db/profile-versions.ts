@@ -7,6 +7,8 @@ import { recordAudit, type AuditActor } from "./audit";
 import { getCoolerHardware } from "./profiles";
 import { AppError } from "@/lib/api/errors";
 import { buildVersionImage } from "@/lib/registry/version-image";
+import { publishRefusal } from "@/lib/registry/ownership";
+import type { Role } from "@/lib/auth/roles";
 
 /**
  * Publishes an immutable profile version. In one transaction: the profile row is
@@ -17,7 +19,7 @@ import { buildVersionImage } from "@/lib/registry/version-image";
  */
 export async function publishVersion(
   db: Database,
-  actor: AuditActor & { userId: string },
+  actor: AuditActor & { userId: string; role: Role },
   input: { profileId: string; version: string; changelog: string; boardRange: string; text: string },
 ) {
   const parsed = semver.parse(input.version);
@@ -26,6 +28,9 @@ export async function publishVersion(
     return await db.transaction(async (tx) => {
       const [profile] = await tx.select().from(profiles).where(eq(profiles.id, input.profileId)).for("update");
       if (!profile) throw new AppError("not_found", "No such profile.");
+      const [owner] = await tx.select({ name: users.name }).from(users).where(eq(users.id, profile.ownerUserId));
+      const refusal = publishRefusal(actor, { ownerUserId: profile.ownerUserId, ownerName: owner?.name ?? "another user", name: profile.name });
+      if (refusal) throw new AppError("forbidden", refusal);
       const existing = await tx.select({ version: profileVersions.version }).from(profileVersions).where(eq(profileVersions.profileId, profile.id));
       const highest = existing.map((e) => e.version).sort(semver.rcompare)[0];
       if (highest && !semver.gt(input.version, highest)) {
@@ -60,7 +65,9 @@ export async function publishVersion(
       if (!row) throw new AppError("internal", "The version was not created.");
       await tx.update(profiles).set({ updatedAt: new Date() }).where(eq(profiles.id, profile.id));
       const { document: _doc, ...summary } = row;
-      await recordAudit(tx, actor, { action: "profile_version.publish", entityType: "profile_version", entityId: row.id, after: summary });
+      // An administrator publishing into someone else's profile leaves that intent on record.
+      const onBehalf = profile.ownerUserId !== actor.userId ? { onBehalfOfOwnerUserId: profile.ownerUserId } : {};
+      await recordAudit(tx, actor, { action: "profile_version.publish", entityType: "profile_version", entityId: row.id, after: { ...summary, ...onBehalf } });
       const [author] = await tx.select({ name: users.name }).from(users).where(eq(users.id, actor.userId));
       return { ...summary, authorName: author?.name ?? actor.label, createdAt: row.createdAt.toISOString() };
     });

@@ -8,6 +8,7 @@ import { likeText, orderFor, pageWindow } from "./list-helpers";
 import { listRevisionsOfModel } from "./boards";
 import { AppError } from "@/lib/api/errors";
 import { documentText, starterProfile } from "@/lib/registry/starter-profile";
+import { validateProfileText } from "@/lib/engine";
 
 const SORT_COLUMNS = { name: profiles.name, coolerModel: coolerModels.name, updatedAt: profiles.updatedAt };
 
@@ -55,7 +56,7 @@ export async function createProfile(db: Database, actor: AuditActor & { userId: 
     const draft = starterProfile({ name: input.name, description: input.description, pumpMinDutyPct: hw.pump.minDutyPct, fanMinDutyPct: hw.fan.minDutyPct });
     const [row] = await tx
       .insert(profiles)
-      .values({ ...input, ownerUserId: actor.userId, draftText: documentText(draft), draftUpdatedAt: new Date() })
+      .values({ ...input, ownerUserId: actor.userId, draftText: documentText(draft), draftDocument: draft, draftUpdatedAt: new Date() })
       .returning();
     if (!row) throw new AppError("internal", "The profile was not created.");
     await recordAudit(tx, actor, { action: "profile.create", entityType: "profile", entityId: row.id, after: { ...input, ownerUserId: actor.userId } });
@@ -80,6 +81,15 @@ export async function getCoolerHardware(db: Executor, { coolerModelId }: { coole
   return { ...row, revisions };
 }
 
+/**
+ * The last draft text that passed the schema, only while the current draft does not (the
+ * editor plots it greyed, so a broken draft still shows its curves); null otherwise.
+ */
+function lastPlottableDraftOf(p: { draftText: string | null; draftDocument: unknown }): string | null {
+  if (p.draftText === null || typeof p.draftDocument !== "object" || p.draftDocument === null) return null;
+  return validateProfileText(p.draftText).value ? null : documentText(p.draftDocument);
+}
+
 /** The draft as its author typed it; rows saved before drafts were kept as text fall back to their parsed JSON. */
 function draftTextOf(p: { draftText: string | null; draftDocument: unknown }): string | null {
   if (p.draftText !== null) return p.draftText;
@@ -102,7 +112,7 @@ export async function getProfileDetail(db: Executor, { id }: { id: string }) {
   const versions = await listVersionsOfProfile(db, { profileId: id });
   const p = row.profile;
   return {
-    profile: { id: p.id, name: p.name, description: p.description, ownerName: row.ownerName, draftText: draftTextOf(p), draftUpdatedAt: p.draftUpdatedAt?.toISOString() ?? null },
+    profile: { id: p.id, name: p.name, description: p.description, ownerName: row.ownerName, draftText: draftTextOf(p), lastPlottableDraftText: lastPlottableDraftOf(p), draftUpdatedAt: p.draftUpdatedAt?.toISOString() ?? null, draftRevision: p.draftRevision },
     cooler: {
       id: hw.cooler.id,
       name: hw.cooler.name,
@@ -118,15 +128,41 @@ export async function getProfileDetail(db: Executor, { id }: { id: string }) {
   };
 }
 
-/** Saves the working draft as the exact text typed (even when it is not valid JSON yet), so nothing typed is lost or reordered. */
-export async function saveDraft(db: Database, actor: AuditActor, { id, text }: { id: string; text: string }) {
+/**
+ * Saves the working draft as the exact text typed (even when it is not valid JSON yet), so
+ * nothing typed is lost or reordered. When the text passes the schema it is also kept as the
+ * draft's last plottable document, which the editor plots (greyed) while the text is broken.
+ * Optimistic concurrency: the caller says which draft revision its text is based on; if
+ * someone saved since, the save is refused (409) naming who, so nobody overwrites another's
+ * work unseen. `baseRevision` undefined replaces the draft outright (an explicit import).
+ */
+export async function saveDraft(db: Database, actor: AuditActor & { userId: string }, { id, text, baseRevision }: { id: string; text: string; baseRevision?: number }) {
+  const plottable = validateProfileText(text).value;
   return db.transaction(async (tx) => {
+    const [current] = await tx
+      .select({ draftRevision: profiles.draftRevision, draftUpdatedAt: profiles.draftUpdatedAt, savedBy: users.name })
+      .from(profiles)
+      .leftJoin(users, eq(users.id, profiles.draftSavedByUserId))
+      .where(eq(profiles.id, id))
+      .for("update", { of: profiles });
+    if (!current) throw new AppError("not_found", "No such profile.");
+    if (baseRevision !== undefined && baseRevision !== current.draftRevision) {
+      const who = current.savedBy ?? "Someone";
+      const when = current.draftUpdatedAt ? ` at ${current.draftUpdatedAt.toISOString().slice(11, 16)} UTC` : "";
+      throw new AppError(
+        "conflict",
+        `${who} saved this draft${when} after you loaded it (draft revision ${current.draftRevision}, yours is based on ${baseRevision}). Compare your text with theirs or reload it before saving again.`,
+      );
+    }
     const now = new Date();
-    const res = await tx.update(profiles).set({ draftText: text, draftDocument: null, draftUpdatedAt: now, updatedAt: now }).where(eq(profiles.id, id)).returning({ id: profiles.id });
-    if (res.length === 0) throw new AppError("not_found", "No such profile.");
+    const draftRevision = current.draftRevision + 1;
+    await tx
+      .update(profiles)
+      .set({ draftText: text, ...(plottable ? { draftDocument: plottable } : {}), draftUpdatedAt: now, updatedAt: now, draftRevision, draftSavedByUserId: actor.userId })
+      .where(eq(profiles.id, id));
     // The draft itself is not repeated in the log: autosave runs on every pause in typing.
-    await recordAudit(tx, actor, { action: "profile.draft_save", entityType: "profile", entityId: id, after: { bytes: text.length } });
-    return { draftUpdatedAt: now.toISOString() };
+    await recordAudit(tx, actor, { action: "profile.draft_save", entityType: "profile", entityId: id, after: { bytes: text.length, draftRevision } });
+    return { draftUpdatedAt: now.toISOString(), draftRevision };
   });
 }
 

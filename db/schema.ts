@@ -195,15 +195,23 @@ export const profiles = pgTable(
     ownerUserId: uuid("owner_user_id").notNull().references(() => users.id),
     /** The working copy the editor autosaves, exactly as typed (key order, spacing, even broken JSON); published versions are separate and immutable. */
     draftText: text("draft_text"),
-    /** Earlier drafts were kept as parsed JSON, which reorders keys; read only when draftText is empty. */
+    /**
+     * The last draft that passed the schema, as parsed JSON (key order not kept): the editor
+     * plots it while the draft text is broken. Rows from before draftText hold the draft here.
+     */
     draftDocument: jsonb("draft_document"),
     draftUpdatedAt: timestamp("draft_updated_at", { withTimezone: true }),
+    /** Bumped on every draft save: a save based on an older number is refused (optimistic concurrency). */
+    draftRevision: integer("draft_revision").notNull().default(0),
+    /** Who saved the draft last, so a refused stale save can say who saved in between. */
+    draftSavedByUserId: uuid("draft_saved_by_user_id").references(() => users.id),
     ...timestamps,
   },
   (t) => [
     uniqueIndex("profiles_cooler_name_key").on(t.coolerModelId, t.name),
     index("profiles_cooler_idx").on(t.coolerModelId),
     index("profiles_owner_idx").on(t.ownerUserId),
+    index("profiles_draft_saved_by_idx").on(t.draftSavedByUserId),
   ],
 );
 
@@ -273,6 +281,9 @@ export const builds = pgTable(
     bankBytes: integer("bank_bytes"),
     bankSha256: text("bank_sha256"),
     bankCrc32: bigint("bank_crc32", { mode: "number" }),
+    /** Ed25519 signature of bank_image, made when the build enters pilot (docs/bank-format.md). */
+    bankSignature: bytea("bank_signature"),
+    bankSignatureKeyId: text("bank_signature_key_id"),
     releaseNotes: text("release_notes"),
     waiverReason: text("waiver_reason"),
     withdrawnReason: text("withdrawn_reason"),
@@ -287,6 +298,24 @@ export const builds = pgTable(
     index("builds_lab_report_idx").on(t.labReportUploadId),
     index("builds_measurements_idx").on(t.measurementsUploadId),
     check("builds_withdrawn_has_reason", sql`${t.stage} <> 'withdrawn' or ${t.withdrawnReason} is not null`),
+    check("builds_signature_has_key", sql`(${t.bankSignature} is null) = (${t.bankSignatureKeyId} is null)`),
+  ],
+);
+
+/** Public keys that bank signatures of a board model verify with; a rotated key keeps its row, closed by valid_until. */
+export const bankSigningKeys = pgTable(
+  "bank_signing_keys",
+  {
+    boardModelId: uuid("board_model_id").notNull().references(() => boardModels.id),
+    keyId: text("key_id").notNull(),
+    publicKeyPem: text("public_key_pem").notNull(),
+    validFrom: timestamp("valid_from", { withTimezone: true }).notNull().defaultNow(),
+    validUntil: timestamp("valid_until", { withTimezone: true }),
+  },
+  (t) => [
+    primaryKey({ columns: [t.boardModelId, t.keyId] }),
+    index("bank_signing_keys_board_idx").on(t.boardModelId),
+    check("bank_signing_keys_key_id_hex", sql`${t.keyId} ~ '^[0-9a-f]{16}$'`),
   ],
 );
 
@@ -313,8 +342,15 @@ export const buildReviews = pgTable(
     /** A change request stays open until the author resolves it. */
     resolvedAt: timestamp("resolved_at", { withTimezone: true }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    /** Set when the reviewer changes their verdict (an explicit update, never a second row). */
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index("build_reviews_build_idx").on(t.buildId), index("build_reviews_reviewer_idx").on(t.reviewerUserId)],
+  (t) => [
+    index("build_reviews_build_idx").on(t.buildId),
+    index("build_reviews_reviewer_idx").on(t.reviewerUserId),
+    // One review per reviewer per build: a second approval is a mistake, not a second vote.
+    uniqueIndex("build_reviews_build_reviewer_key").on(t.buildId, t.reviewerUserId),
+  ],
 );
 
 export const buildTransitions = pgTable(

@@ -53,38 +53,41 @@ export async function findActiveToken(db: Executor, { tokenHash }: { tokenHash: 
   return row;
 }
 
-export interface CountedToken {
+export interface TokenActorRow {
   tokenId: string;
   lastUsedAt: Date | null;
+  expiresAt: Date;
   user: Pick<User, "id" | "email" | "name" | "role">;
-  rate: { count: number; retryAfterSec: number };
 }
 
-/**
- * The live token with this hash and its user, and in the same round trip one request
- * counted against the token's rate-limit window: the API's hot path makes one query here.
- */
-export async function findActiveTokenCounting(db: Executor, { tokenHash }: { tokenHash: string }): Promise<CountedToken | undefined> {
-  const res = await db.execute<{ token_id: string; last_used_at: string | Date | null; user_id: string; email: string; name: string; role: User["role"]; count: number; retry_after: number }>(sql`
-    with t as (
-      select a.id as token_id, a.last_used_at, u.id as user_id, u.email, u.name, u.role
-      from api_tokens a join users u on u.id = a.user_id
-      where a.token_hash = ${tokenHash} and a.revoked_at is null and a.expires_at > now() and u.disabled_at is null
-    ), rl as (
-      insert into rate_limits (key, window_start, count)
-      select 'token:' || t.token_id, date_trunc('minute', now()), 1 from t
-      on conflict (key, window_start) do update set count = rate_limits.count + 1
-      returning count, greatest(1, ceil(extract(epoch from (window_start + interval '1 minute' - now()))))::int as retry_after
-    )
-    select t.*, rl.count, rl.retry_after from t cross join rl`);
-  const r = res.rows[0];
-  if (!r) return undefined;
-  return {
-    tokenId: r.token_id,
-    lastUsedAt: r.last_used_at ? new Date(r.last_used_at) : null,
-    user: { id: r.user_id, email: r.email, name: r.name, role: r.role },
-    rate: { count: Number(r.count), retryAfterSec: Number(r.retry_after) },
-  };
+// The API's hot path: prepared once per database handle under a fixed name, so each
+// connection plans it once.
+function buildTokenActor(db: Database) {
+  return db
+    .select({
+      tokenId: apiTokens.id,
+      lastUsedAt: apiTokens.lastUsedAt,
+      expiresAt: apiTokens.expiresAt,
+      user: { id: users.id, email: users.email, name: users.name, role: users.role },
+    })
+    .from(apiTokens)
+    .innerJoin(users, eq(users.id, apiTokens.userId))
+    .where(and(eq(apiTokens.tokenHash, sql.placeholder("tokenHash")), isNull(apiTokens.revokedAt), gt(apiTokens.expiresAt, sql`now()`), isNull(users.disabledAt)))
+    .limit(1)
+    .prepare("auth_token_actor");
+}
+
+const prepared = new WeakMap<Database, ReturnType<typeof buildTokenActor>>();
+
+/** The live token with this hash and the fields of its user a request needs; undefined when revoked, expired or the user is disabled. */
+export async function findTokenActor(db: Database, { tokenHash }: { tokenHash: string }): Promise<TokenActorRow | undefined> {
+  let statement = prepared.get(db);
+  if (!statement) {
+    statement = buildTokenActor(db);
+    prepared.set(db, statement);
+  }
+  const [row] = await statement.execute({ tokenHash });
+  return row;
 }
 
 /** Records use, at most once a minute per token so hot clients do not write on every call. */

@@ -2,7 +2,7 @@
 // Everything `npm start` and `npm test` need before the app runs: dependencies, a secret,
 // PostgreSQL on loopback, migrations and the demo data. Safe to run any number of times.
 import { execFileSync, spawnSync } from "node:child_process";
-import { randomBytes } from "node:crypto";
+import { generateKeyPairSync, randomBytes } from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
@@ -27,6 +27,26 @@ function localSecret() {
   return fs.readFileSync(file, "utf8").trim();
 }
 
+/**
+ * The demo bank-signing key (Ed25519, PKCS #8 PEM), generated once per checkout into the ignored
+ * .data folder (the same file the app's non-production fallback uses). The production server
+ * only signs with a key from the environment, so the scripts pass this one in as that setting;
+ * a real deployment sets BANK_SIGNING_KEY itself (docs/bank-format.md).
+ */
+function localBankSigningKey() {
+  const file = path.join(root, ".data", "bank-signing-key.pem");
+  fs.mkdirSync(path.dirname(file), { recursive: true });
+  if (!fs.existsSync(file)) {
+    const pem = generateKeyPairSync("ed25519").privateKey.export({ format: "pem", type: "pkcs8" }).toString();
+    try {
+      fs.writeFileSync(file, pem, { mode: 0o600, flag: "wx" });
+    } catch (e) {
+      if (e?.code !== "EEXIST") throw e;
+    }
+  }
+  return fs.readFileSync(file, "utf8");
+}
+
 /** The environment the app and its scripts run with; values already set win. */
 export async function appEnv({ database = "loopkeeper", port = 3000 } = {}) {
   const { localUrl } = await import("./pg.mjs");
@@ -36,6 +56,7 @@ export async function appEnv({ database = "loopkeeper", port = 3000 } = {}) {
     // Tests that stop and restart PostgreSQL only run against the private cluster.
     LOOPKEEPER_LOCAL_CLUSTER: process.env.DATABASE_URL ? "0" : "1",
     NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET ?? localSecret(),
+    BANK_SIGNING_KEY: process.env.BANK_SIGNING_KEY ?? localBankSigningKey(),
     NEXTAUTH_URL: process.env.NEXTAUTH_URL ?? `http://127.0.0.1:${port}`,
     PLAYWRIGHT_SKIP_BROWSER_DOWNLOAD: "1",
     NEXT_TELEMETRY_DISABLED: "1",

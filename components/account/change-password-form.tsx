@@ -3,8 +3,8 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm } from "react-hook-form";
 import { useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import { changePasswordBody, type ChangePasswordBody } from "@/lib/api/operations/account";
+import { apiCall } from "@/lib/api/client";
+import { changePassword, changePasswordBody, type ChangePasswordBody } from "@/lib/api/operations/account";
 import { Button } from "@/components/ui/button";
 import { Field, Input, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -22,7 +22,7 @@ export function ChangePasswordForm() {
     setDone(false);
     setServerError(null);
     try {
-      await apiFetch("/api/v1/me/password", { method: "POST", json: values });
+      await apiCall(changePassword, { body: values });
       reset();
       setDone(true);
     } catch (err) {

@@ -5,8 +5,8 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
 import { useState } from "react";
 import type { z } from "zod";
-import { apiFetch } from "@/lib/api/client";
-import { createTokenBody, type TokenView } from "@/lib/api/operations/account";
+import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
+import { createToken, createTokenBody, listTokens, revokeToken, type TokenView } from "@/lib/api/operations/account";
 import { Button } from "@/components/ui/button";
 import { Field, Input, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -28,23 +28,23 @@ function tokenState(t: TokenView): { label: string; tone: "ok" | "neutral" | "fa
 export function TokenManager() {
   const qc = useQueryClient();
   const [secret, setSecret] = useState<string | null>(null);
-  const tokens = useQuery({ queryKey: ["tokens"], queryFn: () => apiFetch<{ items: TokenView[] }>("/api/v1/tokens") });
+  const tokens = useQuery(apiQuery(listTokens, {}));
   const form = useForm<z.input<typeof createTokenBody>, unknown, z.output<typeof createTokenBody>>({
     resolver: zodResolver(createTokenBody),
     defaultValues: { name: "", expiresInDays: 90 },
   });
   const create = useMutation({
-    mutationFn: (values: z.output<typeof createTokenBody>) => apiFetch<{ secret: string }>("/api/v1/tokens", { method: "POST", json: values }),
+    mutationFn: (values: z.output<typeof createTokenBody>) => apiCall(createToken, { body: values }),
     onSuccess: (res) => {
       setSecret(res.secret);
       form.reset({ name: "", expiresInDays: 90 });
-      void qc.invalidateQueries({ queryKey: ["tokens"] });
+      void qc.invalidateQueries({ queryKey: operationKey(listTokens) });
     },
     onError: (err) => showServerIssues(form, err),
   });
   const revoke = useMutation({
-    mutationFn: (id: string) => apiFetch(`/api/v1/tokens/${id}`, { method: "DELETE" }),
-    onSuccess: () => void qc.invalidateQueries({ queryKey: ["tokens"] }),
+    mutationFn: (id: string) => apiCall(revokeToken, { params: { id } }),
+    onSuccess: () => void qc.invalidateQueries({ queryKey: operationKey(listTokens) }),
   });
   const { errors } = form.formState;
 

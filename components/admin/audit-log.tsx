@@ -2,11 +2,10 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { useUrlParams } from "@/components/ui/use-url-params";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
+import { apiQuery, queryFromUrl } from "@/lib/api/client";
 import { AUDIT_FILTERS, pagedQueryFromUrl } from "@/lib/api/screen-queries";
 import { formText } from "@/components/ui/form-data";
-import type { AuditEventView } from "@/lib/api/operations/admin";
+import { auditQuery, listAudit } from "@/lib/api/operations/admin";
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
@@ -22,12 +21,9 @@ const FILTERS = [
 export function AuditLog() {
   const { sp, set: setParams } = useUrlParams();
   // The same reading of the URL the page made on the server for the first page it rendered.
-  const query = pagedQueryFromUrl(AUDIT_FILTERS, sp);
-  const page = Number(query.page);
-  const q = useQuery({
-    queryKey: operationKey("listAudit", { query }),
-    queryFn: () => apiFetch<{ items: AuditEventView[]; hasMore: boolean }>(`/api/v1/audit?${new URLSearchParams(query).toString()}`),
-  });
+  const raw = pagedQueryFromUrl(AUDIT_FILTERS, sp);
+  const page = Number(raw.page);
+  const q = useQuery(apiQuery(listAudit, { query: queryFromUrl(auditQuery, raw) }));
 
 
   return (

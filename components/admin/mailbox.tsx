@@ -2,8 +2,8 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { useSearchParams } from "next/navigation";
-import { apiFetch } from "@/lib/api/client";
-import type { MailboxMessage } from "@/lib/api/operations/builds";
+import { apiQuery } from "@/lib/api/client";
+import { listMailbox } from "@/lib/api/operations/builds";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { Pager } from "@/components/ui/pager";
@@ -12,8 +12,7 @@ export function Mailbox() {
   const sp = useSearchParams();
   const page = Math.max(1, Number(sp.get("page") ?? "1") || 1);
   const q = useQuery({
-    queryKey: ["mailbox", page],
-    queryFn: () => apiFetch<{ items: MailboxMessage[]; hasMore: boolean }>(`/api/v1/mailbox?page=${page}`),
+    ...apiQuery(listMailbox, { query: { page } }),
     refetchInterval: 5000,
   });
   return (

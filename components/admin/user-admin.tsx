@@ -3,9 +3,8 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
-import { createUserBody, type CreateUserBody, type UpdateUserBody, type UserView } from "@/lib/api/operations/admin";
+import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
+import { createUser, createUserBody, listUsers, updateUser, type CreateUserBody, type UpdateUserBody } from "@/lib/api/operations/admin";
 import { ROLES, ROLE_LABELS, type Role } from "@/lib/auth/roles";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
@@ -18,19 +17,19 @@ import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 
 export function UserAdmin({ currentUserId }: { currentUserId: string }) {
   const qc = useQueryClient();
-  const users = useQuery({ queryKey: operationKey("listUsers"), queryFn: () => apiFetch<{ items: UserView[] }>("/api/v1/users") });
+  const users = useQuery(apiQuery(listUsers, {}));
   const form = useForm<CreateUserBody>({ resolver: zodResolver(createUserBody), defaultValues: { role: "viewer" } });
   const create = useMutation({
-    mutationFn: (v: CreateUserBody) => apiFetch("/api/v1/users", { method: "POST", json: v }),
+    mutationFn: (v: CreateUserBody) => apiCall(createUser, { body: v }),
     onError: (err) => showServerIssues(form, err),
     onSuccess: () => {
       form.reset({ email: "", name: "", password: "", role: "viewer" });
-      void qc.invalidateQueries({ queryKey: operationKey("listUsers") });
+      void qc.invalidateQueries({ queryKey: operationKey(listUsers) });
     },
   });
   const update = useMutation({
-    mutationFn: ({ id, ...patch }: UpdateUserBody & { id: string }) => apiFetch(`/api/v1/users/${id}`, { method: "PATCH", json: patch }),
-    onSettled: () => void qc.invalidateQueries({ queryKey: operationKey("listUsers") }),
+    mutationFn: ({ id, ...patch }: UpdateUserBody & { id: string }) => apiCall(updateUser, { params: { id }, body: patch }),
+    onSettled: () => void qc.invalidateQueries({ queryKey: operationKey(listUsers) }),
   });
   const { errors } = form.formState;
 

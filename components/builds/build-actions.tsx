@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { BuildDetail, TransitionBody } from "@/lib/api/operations/builds";
+import { apiCall } from "@/lib/api/client";
+import { transitionBuild, type BuildDetail, type TransitionBody } from "@/lib/api/operations/builds";
 import { can, type Role } from "@/lib/auth/roles";
 import { STAGE_LABELS } from "@/lib/release/stages";
 import { capabilityFor, nextStage, WITHDRAWABLE } from "@/lib/release/transitions";
@@ -23,7 +23,7 @@ export function BuildActions({ detail, role }: { detail: BuildDetail; role: Role
   const { build } = detail;
   const [notes, setNotes] = useState("");
   const [reason, setReason] = useState("");
-  const move = useBuildMutation(build.id, (body: TransitionBody) => apiFetch(`/api/v1/builds/${build.id}/transitions`, { method: "POST", json: body }));
+  const move = useBuildMutation(build.id, (body: TransitionBody) => apiCall(transitionBuild, { params: { id: build.id }, body }));
   const next = nextStage(build.stage);
   const canPromote = next !== null && can(role, capabilityFor(next));
   const canWithdraw = WITHDRAWABLE.includes(build.stage) && can(role, "build:withdraw");

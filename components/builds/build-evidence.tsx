@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { BuildDetail, UploadView, WaiverBody } from "@/lib/api/operations/builds";
+import { apiCall } from "@/lib/api/client";
+import { recordWaiver, uploadEvidence, type BuildDetail, type UploadView, type WaiverBody } from "@/lib/api/operations/builds";
 import { can, type Role } from "@/lib/auth/roles";
 import { UPLOAD_LABELS } from "@/lib/release/upload-check";
 import { Button } from "@/components/ui/button";
@@ -40,11 +40,13 @@ export function BuildEvidence({ detail, role }: { detail: BuildDetail; role: Rol
   const { build, uploads, comparison } = detail;
   const [waiver, setWaiver] = useState("");
   const upload = useBuildMutation(build.id, ({ kind, file }: { kind: "lab_report" | "measurements"; file: File }) =>
-    apiFetch(`/api/v1/builds/${build.id}/evidence?kind=${kind}&name=${encodeURIComponent(file.name)}`, { method: "POST", body: file, headers: { "content-type": "application/octet-stream" } }),
+    apiCall(uploadEvidence, { params: { id: build.id }, query: { kind, name: file.name }, raw: { data: file, contentType: "application/octet-stream" } }),
   );
-  const waive = useBuildMutation(build.id, (body: WaiverBody) => apiFetch(`/api/v1/builds/${build.id}/waiver`, { method: "POST", json: body }));
+  const waive = useBuildMutation(build.id, (body: WaiverBody) => apiCall(recordWaiver, { params: { id: build.id }, body }));
   const mayAttach = can(role, "build:promote") && EVIDENCE_STAGES.includes(build.stage);
   const outside = comparison.state === "ok" ? comparison.rows.filter((r) => !r.withinTolerance).length : 0;
+  const tooClose = comparison.state === "ok" ? comparison.rows.filter((r) => r.status === "too_close_to_background").length : 0;
+  const compared = comparison.state === "ok" ? comparison.rows.length - tooClose : 0;
 
   return (
     <>
@@ -65,29 +67,38 @@ export function BuildEvidence({ detail, role }: { detail: BuildDetail; role: Rol
         </Table>
         {mayAttach && (
           <div className="mt-3 grid gap-3 border-t border-ink-200 pt-3 sm:grid-cols-2">
-            {(["lab_report", "measurements"] as const).map((kind) => (
-              <Field key={kind} id={`evidence-${kind}`} label={UPLOAD_LABELS[kind]} hint={kind === "measurements" ? "Header: liquid_temp_c,pump_rpm,fan_rpm,sound_dba" : "The signed lab report."}>
-                <input
-                  id={`evidence-${kind}`}
-                  type="file"
-                  accept={kind === "lab_report" ? ".pdf,application/pdf" : ".csv,text/csv"}
-                  aria-describedby={`evidence-${kind}-hint`}
-                  className="block text-sm"
-                  disabled={upload.isPending}
-                  onChange={(e) => {
-                    const file = e.target.files?.[0];
-                    if (file) upload.mutate({ kind, file });
-                    e.target.value = "";
-                  }}
-                />
-              </Field>
-            ))}
+            {(["lab_report", "measurements"] as const).map((kind) => {
+              // The refusal (with each bad row) is shown at the input it is about.
+              const failed = upload.variables?.kind === kind && upload.error ? upload.error : null;
+              const attached = upload.variables?.kind === kind && upload.isSuccess ? upload.variables.file.name : null;
+              return (
+                <Field key={kind} id={`evidence-${kind}`} label={UPLOAD_LABELS[kind]} hint={kind === "measurements" ? "Header: liquid_temp_c,pump_rpm,fan_rpm,sound_dba and optionally background_dba (per row, or once on the first row)" : "The signed lab report."}>
+                  <input
+                    id={`evidence-${kind}`}
+                    type="file"
+                    accept={kind === "lab_report" ? ".pdf,application/pdf" : ".csv,text/csv"}
+                    aria-describedby={failed ? `evidence-${kind}-refusal` : `evidence-${kind}-hint`}
+                    aria-invalid={failed ? true : undefined}
+                    className="block text-sm"
+                    disabled={upload.isPending}
+                    onChange={(e) => {
+                      const file = e.target.files?.[0];
+                      if (file) upload.mutate({ kind, file });
+                      e.target.value = "";
+                    }}
+                  />
+                  {failed && (
+                    <div id={`evidence-${kind}-refusal`} role="alert" className="text-xs text-signal-fault">
+                      <p className="font-medium">{failed.message}</p>
+                      {failed.issues && failed.issues.length > 0 && <ul className="list-disc pl-5">{failed.issues.map((i, n) => <li key={n}>{i.message}</li>)}</ul>}
+                    </div>
+                  )}
+                  {attached && <p role="status" className="text-xs text-signal-ok">Attached {attached}.</p>}
+                </Field>
+              );
+            })}
           </div>
         )}
-        <div className="mt-2">
-          <ErrorNotice error={upload.error} />
-          {upload.isSuccess && <Notice tone="ok" role="status">File attached.</Notice>}
-        </div>
       </Panel>
 
       <Panel title="Measured against estimated sound">
@@ -101,7 +112,14 @@ export function BuildEvidence({ detail, role }: { detail: BuildDetail; role: Rol
           <div className="space-y-3">
             <p className="text-sm text-ink-700">
               Estimate for the {comparison.coolerModel} (first slot&apos;s cooler) at the measured pump and fan speeds, 1 m. Tolerance ±{comparison.toleranceDb} dB:{" "}
-              {outside === 0 ? <strong className="text-signal-ok">every point within it.</strong> : <strong className="text-signal-fault">{outside} of {comparison.rows.length} points outside it.</strong>}
+              {compared === 0 ? (
+                <strong className="text-signal-fault">no point is far enough above the room&apos;s background to compare; measure in a quieter room or record a waiver.</strong>
+              ) : outside === 0 ? (
+                <strong className="text-signal-ok">no compared point is louder than the estimate by more than that.</strong>
+              ) : (
+                <strong className="text-signal-fault">{outside} of {compared} compared points louder than the estimate by more than that.</strong>
+              )}
+              {tooClose > 0 && ` ${tooClose} point${tooClose === 1 ? " is" : "s are"} too close to background to compare.`}
             </p>
             <SoundPlot rows={comparison.rows} />
             <Table caption="Measured and estimated sound levels">
@@ -111,28 +129,46 @@ export function BuildEvidence({ detail, role }: { detail: BuildDetail; role: Rol
                   <Th>Pump RPM</Th>
                   <Th>Fan RPM</Th>
                   <Th>Measured dB(A)</Th>
+                  <Th>Background dB(A)</Th>
+                  <Th>Corrected dB(A)</Th>
                   <Th>Estimated dB(A)</Th>
                   <Th>Difference dB</Th>
                 </tr>
               </thead>
               <tbody>
-                {comparison.rows.length === 0 && <EmptyRow colSpan={6}>No rows.</EmptyRow>}
+                {comparison.rows.length === 0 && <EmptyRow colSpan={8}>No rows.</EmptyRow>}
                 {comparison.rows.map((r, i) => (
                   <tr key={i}>
                     <Td className="tabular-nums">{r.liquidTempC}</Td>
                     <Td className="tabular-nums">{r.pumpRpm}</Td>
                     <Td className="tabular-nums">{r.fanRpm}</Td>
                     <Td className="tabular-nums">{r.soundDbA.toFixed(1)}</Td>
+                    <Td className="tabular-nums">{r.backgroundDbA === null ? "—" : r.backgroundDbA.toFixed(1)}</Td>
+                    <Td className="tabular-nums">
+                      {r.correctedDbA === null ? "—" : r.correctedDbA.toFixed(1)}
+                      {r.correctionDb !== null && r.correctionDb > 0 && <span className="block text-xs text-ink-600">K1 {r.correctionDb.toFixed(2)} dB</span>}
+                    </Td>
                     <Td className="tabular-nums">{Number.isFinite(r.estimatedDbA) ? r.estimatedDbA.toFixed(1) : "—"}</Td>
-                    <Td className={`tabular-nums ${r.withinTolerance ? "" : "font-semibold text-signal-fault"}`}>{Number.isFinite(r.deltaDb) ? (r.deltaDb > 0 ? "+" : "") + r.deltaDb.toFixed(1) : "—"}</Td>
+                    <Td className={`tabular-nums ${r.status === "above_tolerance" ? "font-semibold text-signal-fault" : ""}`}>
+                      {r.status === "too_close_to_background" ? (
+                        <span className="text-ink-600">Not comparable — too close to background</span>
+                      ) : r.deltaDb !== null && Number.isFinite(r.deltaDb) ? (
+                        (r.deltaDb > 0 ? "+" : "") + r.deltaDb.toFixed(1)
+                      ) : (
+                        "—"
+                      )}
+                    </Td>
                   </tr>
                 ))}
               </tbody>
             </Table>
+            <p className="text-xs text-ink-600">
+              Background correction per ISO 3744:2010 §8.2.3: none at 15 dB or more above the room, K1 = −10·log10(1 − 10^(−0.1·ΔL)) from 6 to 15 dB, not comparable below 6 dB. A point fails only when the cooler is louder than estimated by more than the tolerance.
+            </p>
           </div>
         )}
         {build.waiverReason && <div className="mt-3"><Notice tone="warn" title="Waiver recorded">{build.waiverReason}</Notice></div>}
-        {build.stage === "validation" && can(role, "build:promote") && !build.waiverReason && outside > 0 && (
+        {build.stage === "validation" && can(role, "build:promote") && !build.waiverReason && (outside > 0 || (comparison.state === "ok" && compared === 0)) && (
           <form
             className="mt-3 space-y-2 border-t border-ink-200 pt-3"
             onSubmit={(e) => {

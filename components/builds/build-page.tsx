@@ -1,7 +1,7 @@
 "use client";
 
 import type { Role } from "@/lib/auth/roles";
-import { STAGE_LABELS, type Stage } from "@/lib/release/stages";
+import { STAGE_LABELS } from "@/lib/release/stages";
 import { EstimateCaution, Notice } from "@/components/ui/notice";
 import { PageHeader, Panel } from "@/components/ui/panel";
 import { Table, Td, Th } from "@/components/ui/table";
@@ -12,7 +12,7 @@ import { StageBadge } from "@/components/ui/stage-badge";
 import { useBuild } from "./use-build";
 import { ErrorNotice } from "@/components/ui/error-notice";
 
-const hex32 = (n: number) => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
+import { hex32 } from "@/lib/hex/address";
 
 export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string; role: Role } }) {
   const q = useBuild(id);
@@ -51,12 +51,15 @@ export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string
                 <dd className="font-mono">{build.bankCrc32 !== null ? hex32(build.bankCrc32) : "—"}</dd>
                 <dt className="text-ink-600">SHA-256 (.bin)</dt>
                 <dd className="break-all font-mono text-xs" data-testid="bank-sha256">{build.bankSha256 ?? "—"}</dd>
+                <dt className="text-ink-600">Ed25519 signature</dt>
+                <dd data-testid="bank-signature">{build.bankSignatureKeyId ? <>signed by key <code className="text-xs">{build.bankSignatureKeyId}</code></> : "not signed yet (signed when the build enters pilot)"}</dd>
               </dl>
               <div className="mt-3 flex flex-wrap gap-2 text-sm">
                 <a href={`/api/v1/builds/${build.id}/bank?format=bin`} download>Download .bin</a>
+                {build.bankSignatureKeyId && <a href={`/api/v1/builds/${build.id}/bank?format=sig`} download>Download .sig</a>}
                 {hexRevisions.map((r) => (
                   <a key={r.revision} href={`/api/v1/builds/${build.id}/bank?format=hex&revision=${encodeURIComponent(r.revision)}`} download>
-                    Download .hex at 0x{r.baseAddress.toString(16).toUpperCase()} (revision {r.revision})
+                    Download .hex at {hex32(r.baseAddress)} (revision {r.revision})
                   </a>
                 ))}
               </div>
@@ -99,7 +102,7 @@ export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string
                 </li>
                 {detail.transitions.map((t) => (
                   <li key={t.id}>
-                    <span className="font-medium">{STAGE_LABELS[t.toStage as Stage]}</span> · {t.actorName}{" "}
+                    <span className="font-medium">{STAGE_LABELS[t.toStage]}</span> · {t.actorName}{" "}
                     <span className="text-xs text-ink-500">{t.createdAt.slice(0, 16).replace("T", " ")}</span>
                     {t.reason && <p className="text-xs text-ink-700">{t.reason}</p>}
                   </li>

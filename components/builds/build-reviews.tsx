@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { BuildDetail, ReviewBody } from "@/lib/api/operations/builds";
+import { apiCall } from "@/lib/api/client";
+import { resolveReview, reviewBuild, type BuildDetail, type ReviewBody } from "@/lib/api/operations/builds";
 import { can, type Role } from "@/lib/auth/roles";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
@@ -14,8 +14,8 @@ import { useBuildMutation } from "./use-build";
 export function BuildReviews({ detail, viewer }: { detail: BuildDetail; viewer: { userId: string; role: Role } }) {
   const { build } = detail;
   const [comment, setComment] = useState("");
-  const review = useBuildMutation(build.id, (body: ReviewBody) => apiFetch(`/api/v1/builds/${build.id}/reviews`, { method: "POST", json: body }));
-  const resolve = useBuildMutation(build.id, (reviewId: string) => apiFetch(`/api/v1/builds/${build.id}/reviews/${reviewId}/resolve`, { method: "POST" }));
+  const review = useBuildMutation(build.id, (body: ReviewBody) => apiCall(reviewBuild, { params: { id: build.id }, body }));
+  const resolve = useBuildMutation(build.id, (reviewId: string) => apiCall(resolveReview, { params: { id: build.id, reviewId } }));
   const isAuthor = build.authorUserId === viewer.userId;
   const mayReview = build.stage === "review" && can(viewer.role, "build:review") && !isAuthor;
 

@@ -5,8 +5,9 @@ import { useRouter } from "next/navigation";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery } from "@tanstack/react-query";
 import { useForm, useWatch } from "react-hook-form";
-import { apiFetch } from "@/lib/api/client";
-import { createBuildBody, type BuildOptions, type CreateBuildBody, type UploadView } from "@/lib/api/operations/builds";
+import { apiCall, apiQuery } from "@/lib/api/client";
+import { AppError } from "@/lib/api/errors";
+import { createBuild, createBuildBody, getBuildOptions, uploadFirmware, type CreateBuildBody } from "@/lib/api/operations/builds";
 import { UPLOAD_MAX_BYTES } from "@/lib/release/upload-check";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
@@ -25,19 +26,12 @@ export function NewBuildForm() {
   const [fileError, setFileError] = useState<string>();
   const form = useForm<FormValues>({ resolver: zodResolver(formSchema), defaultValues: { version: "", revisionRange: "", slots: [] } });
   const boardModelId = useWatch({ control: form.control, name: "boardModelId" });
-  const options = useQuery({
-    queryKey: ["build-options", boardModelId ?? ""],
-    queryFn: () => apiFetch<BuildOptions>(`/api/v1/builds/options${boardModelId ? `?boardModelId=${boardModelId}` : ""}`),
-  });
+  const options = useQuery(apiQuery(getBuildOptions, { query: { boardModelId } }));
   const create = useMutation({
     mutationFn: async (values: FormValues) => {
-      if (!file) throw new Error("no file");
-      const up = await apiFetch<{ upload: UploadView }>(`/api/v1/uploads?name=${encodeURIComponent(file.name)}`, {
-        method: "POST",
-        body: file,
-        headers: { "content-type": "application/octet-stream" },
-      });
-      return apiFetch<{ build: { id: string } }>("/api/v1/builds", { method: "POST", json: { ...values, firmwareUploadId: up.upload.id } });
+      if (!file) throw new AppError("validation_failed", "Pick the firmware image file.");
+      const up = await apiCall(uploadFirmware, { query: { name: file.name }, raw: { data: file, contentType: "application/octet-stream" } });
+      return apiCall(createBuild, { body: { ...values, firmwareUploadId: up.upload.id } });
     },
     onSuccess: (r) => router.push(`/builds/${r.build.id}`),
     onError: (err) => showServerIssues(form, err),

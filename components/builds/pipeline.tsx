@@ -2,16 +2,15 @@
 
 import Link from "next/link";
 import { useQuery } from "@tanstack/react-query";
-import { apiFetch } from "@/lib/api/client";
-import type { BuildListItem } from "@/lib/api/operations/builds";
-import { operationKey } from "@/lib/api/query-key";
+import { apiQuery } from "@/lib/api/client";
+import { listBuilds } from "@/lib/api/operations/builds";
 import { STAGE_LABELS, STAGE_ORDER } from "@/lib/release/stages";
 import { ErrorNotice } from "@/components/ui/error-notice";
 
 /** Builds in columns by stage, newest first in each. */
 export function Pipeline() {
   // The page loads the first answer on the server under the same key: no placeholder on first paint.
-  const q = useQuery({ queryKey: operationKey("listBuilds"), queryFn: () => apiFetch<{ items: BuildListItem[] }>("/api/v1/builds") });
+  const q = useQuery(apiQuery(listBuilds, {}));
   if (q.isError) {
     return (
       <ErrorNotice error={q.error} onRetry={() => void q.refetch()} />

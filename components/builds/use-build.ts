@@ -1,14 +1,13 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
-import type { BuildDetail } from "@/lib/api/operations/builds";
+import { apiQuery, operationKey } from "@/lib/api/client";
+import { getBuild } from "@/lib/api/operations/builds";
 
-export const buildKey = (id: string) => operationKey("getBuild", { params: { id } });
+export const buildKey = (id: string) => operationKey(getBuild, { params: { id } });
 
 export function useBuild(id: string) {
-  return useQuery({ queryKey: buildKey(id), queryFn: () => apiFetch<BuildDetail>(`/api/v1/builds/${id}`) });
+  return useQuery(apiQuery(getBuild, { params: { id } }));
 }
 
 /** A write on the build that refreshes the page's data when it settles. */

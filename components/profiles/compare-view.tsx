@@ -4,11 +4,11 @@ import { useQueries, useQuery } from "@tanstack/react-query";
 import dynamic from "next/dynamic";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo } from "react";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
-import type { ProfileDetailView, VersionWithDocumentView } from "@/lib/api/operations/profile-schemas";
+import { apiQuery } from "@/lib/api/client";
+import { getProfile, getVersion } from "@/lib/api/operations/profiles";
 import { evaluateCurves, type CoolingProfile } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
+import { coolingBranchRpm } from "@/lib/registry/editor-evaluation";
 import { documentText } from "@/lib/registry/starter-profile";
 import { Select } from "@/components/ui/field";
 import { EstimateCaution, Notice } from "@/components/ui/notice";
@@ -23,14 +23,13 @@ export function CompareView({ id }: { id: string }) {
   const sp = useSearchParams();
   const router = useRouter();
   const pathname = usePathname();
-  const detail = useQuery({ queryKey: operationKey("getProfile", { params: { id } }), queryFn: () => apiFetch<ProfileDetailView>(`/api/v1/profiles/${id}`) });
+  const detail = useQuery(apiQuery(getProfile, { params: { id } }));
   const versions = detail.data?.versions ?? [];
   const a = sp.get("a") ?? versions[1]?.id ?? "";
   const b = sp.get("b") ?? versions[0]?.id ?? "";
   const docs = useQueries({
     queries: [a, b].map((vid) => ({
-      queryKey: ["profile-version", vid],
-      queryFn: () => apiFetch<{ version: VersionWithDocumentView }>(`/api/v1/profile-versions/${vid}`),
+      ...apiQuery(getVersion, { params: { id: vid } }),
       enabled: Boolean(vid),
     })),
   });
@@ -43,9 +42,22 @@ export function CompareView({ id }: { id: string }) {
     const hw = toHardwareContext({ cooler: d.cooler, fan: d.fan, pump: d.pump, revision: rev });
     const opts = { fromC: 20, toC: 70, stepC: 0.5 };
     try {
+      const docB = vb.document as CoolingProfile;
       const ra = evaluateCurves(va.document as CoolingProfile, hw, opts);
-      const rb = evaluateCurves(vb.document as CoolingProfile, hw, opts);
-      return ra.map((r, i) => ({ tempC: r.tempC, pumpA: Math.round(r.pumpRpm), fanA: Math.round(r.fanRpm), pumpB: Math.round(rb[i]?.pumpRpm ?? 0), fanB: Math.round(rb[i]?.fanRpm ?? 0) }));
+      const rb = evaluateCurves(docB, hw, opts);
+      return ra.map((r, i) => {
+        const pumpB = Math.round(rb[i]?.pumpRpm ?? 0);
+        const fanB = Math.round(rb[i]?.fanRpm ?? 0);
+        return {
+          tempC: r.tempC,
+          pumpA: Math.round(r.pumpRpm),
+          fanA: Math.round(r.fanRpm),
+          pumpB,
+          fanB,
+          pumpBandB: [Math.round(coolingBranchRpm(docB, hw, "pump", r.tempC)), pumpB] as [number, number],
+          fanBandB: [Math.round(coolingBranchRpm(docB, hw, "fans", r.tempC)), fanB] as [number, number],
+        };
+      });
     } catch {
       return [];
     }
@@ -85,7 +97,7 @@ export function CompareView({ id }: { id: string }) {
       {va && vb && (
         <>
           <Panel title={`Curves: ${va.version} (dashed) and ${vb.version} (solid)`}>
-            <CompareChart rows={rows} labelA={va.version} labelB={vb.version} />
+            <CompareChart rows={rows} labelA={va.version} labelB={vb.version} criticalA={(va.document as CoolingProfile).criticalTempC} criticalB={(vb.document as CoolingProfile).criticalTempC} />
           </Panel>
           <Panel title={`Text: ${va.version} → ${vb.version}`}>
             <DiffView original={documentText(va.document)} modified={documentText(vb.document)} />

@@ -6,16 +6,17 @@ import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
-import { ALL_COOLERS, PROFILE_FILTERS } from "@/lib/api/screen-queries";
+import { apiCall, apiQuery, queryFromUrl } from "@/lib/api/client";
+import { PROFILE_FILTERS } from "@/lib/api/screen-queries";
 import { createProfileBody, type CreateProfileBody, type ProfileSummaryView } from "@/lib/api/operations/profile-schemas";
+import { createProfile, listProfiles, profilesQuery } from "@/lib/api/operations/profiles";
+import { ALL_COOLERS, listCoolerModels } from "@/lib/api/operations/registry";
 import type { CoolerModelView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import { Badge } from "@/components/ui/badge";
-import { DataTable, type ServerPage } from "@/components/registry/data-table";
+import { DataTable } from "@/components/registry/data-table";
 import { FilterBar } from "@/components/registry/filter-bar";
 import { useListParams, serverTableProps } from "@/components/registry/use-list-params";
 import { ErrorNotice } from "@/components/ui/error-notice";
@@ -41,12 +42,12 @@ const columns: ColumnDef<ProfileSummaryView>[] = [
 
 export function ProfilesList({ canWrite }: { canWrite: boolean }) {
   const list = useListParams(PROFILE_FILTERS);
-  const coolers = useQuery({ queryKey: operationKey("listCoolerModels", { query: ALL_COOLERS }), queryFn: () => apiFetch<ServerPage<CoolerModelView>>(`/api/v1/cooler-models?${new URLSearchParams(ALL_COOLERS).toString()}`) });
-  const q = useQuery({ queryKey: operationKey("listProfiles", { query: list.query }), queryFn: () => apiFetch<ServerPage<ProfileSummaryView>>(`/api/v1/profiles?${list.apiQuery}`) });
+  const coolers = useQuery(apiQuery(listCoolerModels, { query: ALL_COOLERS }));
+  const q = useQuery(apiQuery(listProfiles, { query: queryFromUrl(profilesQuery, list.query) }));
   return (
     <div className="space-y-5">
       <Panel title="Profiles">
-        <FilterBar fields={["q", "coolerModelId"]} onApply={list.set}>
+        <FilterBar fields={[...PROFILE_FILTERS]} onApply={list.set}>
           <label className="text-sm">
             <span className="mb-1 block font-medium text-ink-800">Name contains</span>
             <Input name="q" defaultValue={list.sp.get("q") ?? ""} className="w-56" />
@@ -74,7 +75,7 @@ function CreateProfileForm({ coolers }: { coolers: CoolerModelView[] }) {
   const router = useRouter();
   const form = useForm<CreateProfileBody>({ resolver: zodResolver(createProfileBody), defaultValues: { description: "" } });
   const create = useMutation({
-    mutationFn: (v: CreateProfileBody) => apiFetch<{ profile: { id: string } }>("/api/v1/profiles", { method: "POST", json: v }),
+    mutationFn: (v: CreateProfileBody) => apiCall(createProfile, { body: v }),
     onSuccess: (res) => router.push(`/profiles/${res.profile.id}`),
     onError: (err) => showServerIssues(form, err),
   });

@@ -4,8 +4,8 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
+import { apiCall, operationKey } from "@/lib/api/client";
+import { createBoardModel, createBoardRevision, getBoardRevision, listBoardModels, updateBoardModel, updateBoardRevision } from "@/lib/api/operations/registry";
 import { boardModelBody, boardRevisionBody, type BoardModelBody, type BoardModelView, type BoardRevisionBody, type BoardRevisionView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
@@ -23,10 +23,10 @@ export function BoardModelForm({ editing, onDone }: { editing?: BoardModelView; 
   });
   const create = useMutation({
     mutationFn: (v: BoardModelBody) =>
-      editing ? apiFetch(`/api/v1/board-models/${editing.id}`, { method: "PUT", json: v }) : apiFetch("/api/v1/board-models", { method: "POST", json: v }),
+      editing ? apiCall(updateBoardModel, { params: { id: editing.id }, body: v }) : apiCall(createBoardModel, { body: v }),
     onSuccess: () => {
       if (!editing) form.reset({ name: "", serialPrefix: "", description: "" });
-      void qc.invalidateQueries({ queryKey: operationKey("listBoardModels") });
+      void qc.invalidateQueries({ queryKey: operationKey(listBoardModels) });
       onDone?.();
     },
     onError: (err) => showServerIssues(form, err),
@@ -64,10 +64,10 @@ export function BoardRevisionForm({ boardModels }: { boardModels: BoardModelView
   const [boardModelId, setBoardModelId] = useState(boardModels[0]?.id ?? "");
   const form = useForm<BoardRevisionBody>({ resolver: zodResolver(boardRevisionBody), defaultValues: REVISION_DEFAULTS });
   const create = useMutation({
-    mutationFn: (v: BoardRevisionBody) => apiFetch(`/api/v1/board-models/${boardModelId}/revisions`, { method: "POST", json: v }),
+    mutationFn: (v: BoardRevisionBody) => apiCall(createBoardRevision, { params: { id: boardModelId }, body: v }),
     onSuccess: () => {
       form.reset(REVISION_DEFAULTS);
-      void qc.invalidateQueries({ queryKey: operationKey("listBoardModels") });
+      void qc.invalidateQueries({ queryKey: operationKey(listBoardModels) });
     },
     onError: (err) => showServerIssues(form, err),
   });
@@ -125,10 +125,10 @@ export function BoardRevisionEditForm({ revision, onDone }: { revision: BoardRev
   const qc = useQueryClient();
   const form = useForm<BoardRevisionBody>({ resolver: zodResolver(boardRevisionBody), defaultValues: revisionBodyOf(revision) });
   const save = useMutation({
-    mutationFn: (v: BoardRevisionBody) => apiFetch(`/api/v1/board-revisions/${revision.id}`, { method: "PUT", json: v }),
+    mutationFn: (v: BoardRevisionBody) => apiCall(updateBoardRevision, { params: { id: revision.id }, body: v }),
     onSuccess: () => {
-      void qc.invalidateQueries({ queryKey: operationKey("getBoardRevision", { params: { id: revision.id } }) });
-      void qc.invalidateQueries({ queryKey: operationKey("listBoardModels") });
+      void qc.invalidateQueries({ queryKey: operationKey(getBoardRevision, { params: { id: revision.id } }) });
+      void qc.invalidateQueries({ queryKey: operationKey(listBoardModels) });
       onDone();
     },
     onError: (err) => showServerIssues(form, err),

@@ -3,18 +3,18 @@
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
-import type { BoardRevisionDetail } from "@/lib/api/operations/registry";
+import { apiQuery } from "@/lib/api/client";
+import { getBoardRevision } from "@/lib/api/operations/registry";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { BoardRevisionEditForm } from "./board-forms";
 import { CompatibilityMatrix } from "./compatibility-matrix";
+import { hex32 } from "@/lib/hex/address";
 import { ErrorNotice } from "@/components/ui/error-notice";
 
 export function BoardRevisionView({ id, canWrite }: { id: string; canWrite: boolean }) {
-  const q = useQuery({ queryKey: operationKey("getBoardRevision", { params: { id } }), queryFn: () => apiFetch<BoardRevisionDetail>(`/api/v1/board-revisions/${id}`) });
+  const q = useQuery(apiQuery(getBoardRevision, { params: { id } }));
   const [editing, setEditing] = useState(false);
   if (q.isPending) return <Panel title="Board revision"><Table caption="Loading"><tbody><SkeletonRows cols={4} rows={4} /></tbody></Table></Panel>;
   if (q.isError)
@@ -26,7 +26,7 @@ export function BoardRevisionView({ id, canWrite }: { id: string; canWrite: bool
   const compatible = compatibility.rows.filter((row) => row.cells[column]?.ok);
   const limits: [string, string][] = [
     ["Profile memory", `${r.memoryBytes} bytes`],
-    ["Base address", `0x${r.baseAddress.toString(16).toUpperCase()}`],
+    ["Base address", hex32(r.baseAddress)],
     ["Profile slots", String(r.slotCount)],
     ["Points per curve", `at most ${r.maxPointsPerCurve}`],
     ["PWM frequency", `${r.pwmFrequencyHz} Hz`],
@@ -44,6 +44,11 @@ export function BoardRevisionView({ id, canWrite }: { id: string; canWrite: bool
             </div>
           ))}
         </dl>
+        <p className="mt-3 max-w-3xl text-sm text-ink-700" data-testid="tach-explanation">
+          Why {r.tachPulsesPerRev} tach pulses: the board&apos;s tach input counts {r.tachPulsesPerRev} pulses per revolution, the 4-wire fan standard (2 per revolution; Intel 4-Wire PWM fan
+          specification rev 1.3, §2.1.4), because the fans it reads give that. A pump motor often gives 4 pulses per revolution (see its part under Components), so the board, and a
+          motherboard reading the pump, show that pump at {r.tachPulsesPerRev === 2 ? "twice" : `${4 / r.tachPulsesPerRev} ×`} its real speed: real = reading × {r.tachPulsesPerRev} ÷ the pump&apos;s pulses. The tach converter on the serial lookup page (support) does this sum.
+        </p>
         {r.notes && <p className="mt-3 text-sm text-ink-700">{r.notes}</p>}
         {canWrite && !editing && (
           <div className="mt-3">

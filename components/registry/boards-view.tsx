@@ -1,21 +1,21 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
+import { hex32 } from "@/lib/hex/address";
 import Link from "next/link";
 import { useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
-import type { BoardModelView } from "@/lib/api/operations/registry-schemas";
+import { apiQuery } from "@/lib/api/client";
+import { listBoardModels } from "@/lib/api/operations/registry";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { BoardModelForm, BoardRevisionForm } from "./board-forms";
+import { BoardSigningKeys } from "./board-signing-keys";
 import { ErrorNotice } from "@/components/ui/error-notice";
 
-const hex = (n: number) => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
 
 export function BoardsView({ canWrite }: { canWrite: boolean }) {
-  const q = useQuery({ queryKey: operationKey("listBoardModels"), queryFn: () => apiFetch<{ items: BoardModelView[] }>("/api/v1/board-models") });
+  const q = useQuery(apiQuery(listBoardModels, {}));
   const [editingId, setEditingId] = useState<string | null>(null);
   return (
     <div className="space-y-5">
@@ -66,7 +66,7 @@ export function BoardsView({ canWrite }: { canWrite: boolean }) {
                     </Link>
                   </Td>
                   <Td className="tabular-nums">{r.memoryBytes} B</Td>
-                  <Td className="font-mono text-xs">{hex(r.baseAddress)}</Td>
+                  <Td className="font-mono text-xs">{hex32(r.baseAddress)}</Td>
                   <Td className="tabular-nums">{r.slotCount}</Td>
                   <Td className="tabular-nums">{r.maxPointsPerCurve}</Td>
                   <Td className="tabular-nums">{r.pwmFrequencyHz / 1000} kHz · {r.tachPulsesPerRev} p/rev</Td>
@@ -75,6 +75,7 @@ export function BoardsView({ canWrite }: { canWrite: boolean }) {
               ))}
             </tbody>
           </Table>
+          <BoardSigningKeys boardModelId={b.id} boardName={b.name} />
         </Panel>
       ))}
       {canWrite && q.data && (

@@ -3,8 +3,8 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
+import { apiCall, operationKey } from "@/lib/api/client";
+import { createComponent, listComponents } from "@/lib/api/operations/registry";
 import { componentBody, type ComponentBody } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
@@ -20,10 +20,10 @@ export function ComponentForm() {
   const qc = useQueryClient();
   const form = useForm<ComponentBody>({ resolver: zodResolver(componentBody), defaultValues: DEFAULTS });
   const create = useMutation({
-    mutationFn: (v: ComponentBody) => apiFetch("/api/v1/components", { method: "POST", json: v }),
+    mutationFn: (v: ComponentBody) => apiCall(createComponent, { body: v }),
     onSuccess: () => {
       form.reset(DEFAULTS);
-      void qc.invalidateQueries({ queryKey: operationKey("listComponents") });
+      void qc.invalidateQueries({ queryKey: operationKey(listComponents) });
     },
     onError: (err) => showServerIssues(form, err),
   });

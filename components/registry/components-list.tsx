@@ -2,14 +2,14 @@
 
 import { useQuery } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
+import { apiQuery, queryFromUrl } from "@/lib/api/client";
+import { componentsQuery, listComponents } from "@/lib/api/operations/registry";
 import { COMPONENT_FILTERS } from "@/lib/api/screen-queries";
 import type { ComponentView } from "@/lib/api/operations/registry-schemas";
 import { Badge } from "@/components/ui/badge";
 import { Input, Select } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import { DataTable, type ServerPage } from "./data-table";
+import { DataTable } from "./data-table";
 import { FilterBar } from "./filter-bar";
 import { useListParams, serverTableProps } from "./use-list-params";
 import { ComponentForm } from "./component-form";
@@ -28,8 +28,7 @@ const columns: ColumnDef<ComponentView>[] = [
 export function ComponentsList({ canWrite }: { canWrite: boolean }) {
   const list = useListParams(COMPONENT_FILTERS);
   const q = useQuery({
-    queryKey: operationKey("listComponents", { query: list.query }),
-    queryFn: () => apiFetch<ServerPage<ComponentView>>(`/api/v1/components?${list.apiQuery}`),
+    ...apiQuery(listComponents, { query: queryFromUrl(componentsQuery, list.query) }),
   });
   return (
     <div className="space-y-5">

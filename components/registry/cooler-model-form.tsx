@@ -3,15 +3,13 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
-import { ALL_COMPONENTS } from "@/lib/api/screen-queries";
-import { coolerModelBody, type BoardModelView, type ComponentView, type CoolerModelBody, type CoolerModelView } from "@/lib/api/operations/registry-schemas";
+import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
+import { ALL_COMPONENTS, createCoolerModel, listBoardModels, listComponents, listCoolerModels, updateCoolerModel } from "@/lib/api/operations/registry";
+import { coolerModelBody, type CoolerModelBody, type CoolerModelView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
-import type { ServerPage } from "./data-table";
 import { NumberField } from "./number-field";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
@@ -30,15 +28,15 @@ const bodyOf = (c: CoolerModelView): CoolerModelBody => ({
 /** Adds a cooler model, or edits `editing` in place (same schema as the API body). */
 export function CoolerModelForm({ editing, onDone }: { editing?: CoolerModelView; onDone?: () => void }) {
   const qc = useQueryClient();
-  const parts = useQuery({ queryKey: operationKey("listComponents", { query: ALL_COMPONENTS }), queryFn: () => apiFetch<ServerPage<ComponentView>>(`/api/v1/components?${new URLSearchParams(ALL_COMPONENTS).toString()}`) });
-  const boards = useQuery({ queryKey: operationKey("listBoardModels"), queryFn: () => apiFetch<{ items: BoardModelView[] }>("/api/v1/board-models") });
+  const parts = useQuery(apiQuery(listComponents, { query: ALL_COMPONENTS }));
+  const boards = useQuery(apiQuery(listBoardModels, {}));
   const form = useForm<CoolerModelBody>({ resolver: zodResolver(coolerModelBody), defaultValues: editing ? bodyOf(editing) : undefined });
   const create = useMutation({
     mutationFn: (v: CoolerModelBody) =>
-      editing ? apiFetch(`/api/v1/cooler-models/${editing.id}`, { method: "PUT", json: v }) : apiFetch("/api/v1/cooler-models", { method: "POST", json: v }),
+      editing ? apiCall(updateCoolerModel, { params: { id: editing.id }, body: v }) : apiCall(createCoolerModel, { body: v }),
     onSuccess: () => {
       if (!editing) form.reset();
-      void qc.invalidateQueries({ queryKey: operationKey("listCoolerModels") });
+      void qc.invalidateQueries({ queryKey: operationKey(listCoolerModels) });
       onDone?.();
     },
     onError: (err) => showServerIssues(form, err),

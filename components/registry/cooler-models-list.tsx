@@ -3,15 +3,15 @@
 import { useQuery } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
+import { apiQuery, queryFromUrl } from "@/lib/api/client";
+import { coolerModelsQuery, listCoolerModels } from "@/lib/api/operations/registry";
 import { COOLER_FILTERS } from "@/lib/api/screen-queries";
 import type { CoolerModelView } from "@/lib/api/operations/registry-schemas";
 import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import { DataTable, type ServerPage } from "./data-table";
+import { DataTable } from "./data-table";
 import { FilterBar } from "./filter-bar";
 import { useListParams, serverTableProps } from "./use-list-params";
 import { CoolerModelForm } from "./cooler-model-form";
@@ -58,8 +58,7 @@ export function CoolerModelsList({ canWrite }: { canWrite: boolean }) {
   const [editing, setEditing] = useState<CoolerModelView | null>(null);
   const shown = useMemo(() => (canWrite ? [...columns, editColumn(setEditing)] : columns), [canWrite]);
   const q = useQuery({
-    queryKey: operationKey("listCoolerModels", { query: list.query }),
-    queryFn: () => apiFetch<ServerPage<CoolerModelView>>(`/api/v1/cooler-models?${list.apiQuery}`),
+    ...apiQuery(listCoolerModels, { query: queryFromUrl(coolerModelsQuery, list.query) }),
   });
   return (
     <div className="space-y-5">

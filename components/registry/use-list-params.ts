@@ -14,7 +14,7 @@ export function useListParams(keys: readonly string[]) {
 
   const set = (next: Record<string, string>) => setUrl(next, { scroll: false });
 
-  return { sp, page, sort, dir, query, apiQuery: new URLSearchParams(query).toString(), set };
+  return { sp, page, sort, dir, query, set };
 }
 
 /**

@@ -2,8 +2,8 @@
 
 import { useMutation } from "@tanstack/react-query";
 import { useId, useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { DumpIdentifyResult } from "@/lib/api/operations/support";
+import { apiCall } from "@/lib/api/client";
+import { identifyDump } from "@/lib/api/operations/support";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
@@ -21,7 +21,7 @@ export function DumpIdentify() {
     mutationFn: (f: File) => {
       const fd = new FormData();
       fd.set("file", f);
-      return apiFetch<DumpIdentifyResult>("/api/v1/dumps/identify", { method: "POST", body: fd });
+      return apiCall(identifyDump, { raw: { data: fd } });
     },
   });
   const r = identify.data;

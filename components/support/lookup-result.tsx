@@ -1,6 +1,7 @@
 "use client";
 
 import dynamic from "next/dynamic";
+import Link from "next/link";
 import type { LookupResult } from "@/lib/api/operations/support";
 import { Notice, EstimateCaution } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
@@ -11,6 +12,8 @@ const SlotCurveChart = dynamic(() => import("./slot-curve-chart"), {
   ssr: false,
   loading: () => <div className="h-56 animate-pulse rounded bg-ink-100" aria-label="Loading the curve plot" />,
 });
+
+const linkClass = "text-copper-700 underline underline-offset-2 hover:text-copper-800";
 
 function Fact({ label, children }: { label: string; children: React.ReactNode }) {
   return (
@@ -33,11 +36,11 @@ export function LookupResultView({ result }: { result: LookupResult }) {
       )}
       <Panel title={<span>Serial {result.serial}</span>}>
         <dl className="grid gap-4 sm:grid-cols-3 lg:grid-cols-6">
-          <Fact label="Lot">{lot.lotCode}</Fact>
+          <Fact label="Lot"><Link className={linkClass} href={`/lots?code=${encodeURIComponent(lot.lotCode)}`}>{lot.lotCode}</Link></Fact>
           <Fact label="Produced">{lot.producedOn}, {lot.line}</Fact>
           <Fact label="Lot serials">{lot.serialFrom} – {lot.serialTo}</Fact>
-          <Fact label="Board revision">{boardRevision.revision} ({boardRevision.memoryBytes} B)</Fact>
-          <Fact label="Build">{build.version}</Fact>
+          <Fact label="Board revision"><Link className={linkClass} href={`/board-revisions/${boardRevision.id}`}>{boardRevision.revision}</Link> ({boardRevision.memoryBytes} B)</Fact>
+          <Fact label="Build"><Link className={linkClass} href={`/builds/${build.id}`}>Build {build.version}</Link></Fact>
           <Fact label="Stage"><StageBadge stage={build.stage} /></Fact>
         </dl>
       </Panel>
@@ -47,8 +50,12 @@ export function LookupResultView({ result }: { result: LookupResult }) {
         <div className="grid gap-6 lg:grid-cols-2">
           {result.slots.map((s) => (
             <section key={s.slotIndex} aria-labelledby={`slot-${s.slotIndex}`}>
+              {/* Slots are counted from 1 on every screen; slotIndex stays the 0-based position in the bank. */}
               <h3 id={`slot-${s.slotIndex}`} className="mb-1 text-sm font-semibold text-ink-900">
-                Slot {s.slotIndex}: {s.profileName} {s.version}
+                Slot {s.slotIndex + 1}:{" "}
+                <Link className={linkClass} href={`/profiles/${s.profileId}`} title={`${s.profileName}: its versions and their history`}>
+                  {s.profileName} {s.version}
+                </Link>
               </h3>
               <SlotCurveChart slot={s} revision={boardRevision} />
             </section>
@@ -62,7 +69,7 @@ export function LookupResultView({ result }: { result: LookupResult }) {
           <ul className="space-y-4">
             {result.newerBuilds.map((b) => (
               <li key={b.id}>
-                <p className="font-medium text-ink-900">Build {b.version}</p>
+                <p className="font-medium text-ink-900"><Link className={linkClass} href={`/builds/${b.id}`}>Build {b.version}</Link></p>
                 <ul className="mt-1 space-y-1 text-sm">
                   {b.changes.map((c) => (
                     <li key={c.profileId}>

@@ -3,9 +3,8 @@
 import { useQuery } from "@tanstack/react-query";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import type { AppError } from "@/lib/api/errors";
-import type { LookupResult } from "@/lib/api/operations/support";
+import { apiQuery } from "@/lib/api/client";
+import { lookupSerial } from "@/lib/api/operations/support";
 import { parseSerial } from "@/lib/serials/serial";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
@@ -24,10 +23,9 @@ export function LookupView() {
   const [text, setText] = useState(serial);
   const [formError, setFormError] = useState<string | null>(null);
   const q = useQuery({
-    queryKey: ["lookup", serial],
-    queryFn: () => apiFetch<LookupResult>(`/api/v1/lookup?serial=${encodeURIComponent(serial)}`),
+    ...apiQuery(lookupSerial, { query: { serial } }),
     enabled: serial !== "",
-    retry: (n, err) => (err as AppError).code === "unavailable" && n < 2,
+    retry: (n, err) => err.code === "unavailable" && n < 2,
   });
 
   function search(value: string) {
@@ -40,7 +38,7 @@ export function LookupView() {
     router.replace(`${pathname}?serial=${encodeURIComponent(value.trim().toUpperCase())}`);
   }
 
-  const err = q.error as AppError | null;
+  const err = q.error;
   return (
     <div className="space-y-5">
       <Panel>
@@ -69,7 +67,7 @@ export function LookupView() {
         </Notice>
       )}
       {q.data && <LookupResultView result={q.data} />}
-      <TachConverter key={q.data?.serial ?? "none"} pulsesPerRev={q.data?.pump.pulsesPerRev} pumpName={q.data?.pump.name} />
+      <TachConverter key={q.data?.serial ?? "none"} pulsesPerRev={q.data?.pump.pulsesPerRev} pumpName={q.data?.pump.name} pumpRange={q.data?.slots[0]?.pump} />
       <DumpIdentify />
     </div>
   );

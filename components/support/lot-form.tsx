@@ -3,9 +3,9 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
-import { lotBody, type LotOptions, type LotView } from "@/lib/api/operations/support";
+import { apiCall, operationKey } from "@/lib/api/client";
+import { createLot, listLots } from "@/lib/api/operations/support";
+import { lotBody, type LotOptions } from "@/lib/api/operations/support";
 import type { LotInput } from "@/lib/lots/input";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
@@ -18,10 +18,10 @@ export function LotForm({ options }: { options: LotOptions | undefined }) {
   const qc = useQueryClient();
   const form = useForm<LotInput>({ resolver: zodResolver(lotBody), defaultValues: { producedOn: new Date().toISOString().slice(0, 10) } });
   const create = useMutation({
-    mutationFn: (v: LotInput) => apiFetch<{ lot: LotView }>("/api/v1/lots", { method: "POST", json: v }),
+    mutationFn: (v: LotInput) => apiCall(createLot, { body: v }),
     onSuccess: () => {
       form.reset({ producedOn: form.getValues("producedOn"), line: form.getValues("line") });
-      void qc.invalidateQueries({ queryKey: operationKey("listLots") });
+      void qc.invalidateQueries({ queryKey: operationKey(listLots) });
     },
     onError: (err) => showServerIssues(form, err),
   });

@@ -2,9 +2,8 @@
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useId, useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
-import type { ImportResult } from "@/lib/api/operations/support";
+import { apiCall, operationKey } from "@/lib/api/client";
+import { importLots, listLots } from "@/lib/api/operations/support";
 import { LOT_CSV_COLUMNS } from "@/lib/lots/input";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
@@ -20,9 +19,9 @@ export function LotImport() {
   const [fileName, setFileName] = useState("");
   const run = useMutation({
     mutationFn: ({ dryRun }: { dryRun: boolean }) =>
-      apiFetch<ImportResult>(`/api/v1/lots/import?dryRun=${String(dryRun)}`, { method: "POST", body: text ?? "", headers: { "content-type": "text/csv" } }),
+      apiCall(importLots, { query: { dryRun: dryRun ? "true" : "false" }, raw: { data: text ?? "", contentType: "text/csv" } }),
     onSuccess: (r) => {
-      if (!r.dryRun && r.committed > 0) void qc.invalidateQueries({ queryKey: operationKey("listLots") });
+      if (!r.dryRun && r.committed > 0) void qc.invalidateQueries({ queryKey: operationKey(listLots) });
     },
   });
   const r = run.data;

@@ -2,10 +2,10 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { useUrlParams } from "@/components/ui/use-url-params";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
+import { apiQuery, queryFromUrl } from "@/lib/api/client";
+import { listLots, lotsQuery } from "@/lib/api/operations/support";
+import type { LotOptions } from "@/lib/api/operations/support";
 import { LOT_FILTERS, pagedQueryFromUrl } from "@/lib/api/screen-queries";
-import type { LotOptions, LotView } from "@/lib/api/operations/support";
 import { formText } from "@/components/ui/form-data";
 import { Button } from "@/components/ui/button";
 import { Input, Select } from "@/components/ui/field";
@@ -23,9 +23,9 @@ const SORTS = [
 export function LotsList({ options }: { options: LotOptions | undefined }) {
   const { sp, set: setParams } = useUrlParams();
   // The same reading of the URL the page made on the server for the first page it rendered.
-  const query = pagedQueryFromUrl(LOT_FILTERS, sp);
-  const page = Number(query.page);
-  const q = useQuery({ queryKey: operationKey("listLots", { query }), queryFn: () => apiFetch<{ items: LotView[]; hasMore: boolean }>(`/api/v1/lots?${new URLSearchParams(query).toString()}`) });
+  const raw = pagedQueryFromUrl(LOT_FILTERS, sp);
+  const page = Number(raw.page);
+  const q = useQuery(apiQuery(listLots, { query: queryFromUrl(lotsQuery, raw) }));
   const builds = (options?.boardModels ?? []).flatMap((m) => m.builds.map((b) => ({ ...b, model: m.name })));
 
 

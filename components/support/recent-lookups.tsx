@@ -2,14 +2,12 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { useEffect } from "react";
-import { apiFetch } from "@/lib/api/client";
+import { apiQuery } from "@/lib/api/client";
+import { listRecentLookups } from "@/lib/api/operations/support";
 
-interface Recent {
-  items: { serial: string; found: boolean; createdAt: string }[];
-}
 
 export function RecentLookups({ onPick, refreshKey }: { onPick: (serial: string) => void; refreshKey: string }) {
-  const q = useQuery({ queryKey: ["recent-lookups"], queryFn: () => apiFetch<Recent>("/api/v1/lookup/recent") });
+  const q = useQuery(apiQuery(listRecentLookups, {}));
   const { refetch } = q;
   useEffect(() => {
     void refetch();

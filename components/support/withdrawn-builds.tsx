@@ -2,28 +2,22 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
-import { apiFetch } from "@/lib/api/client";
-import type { ShippedLotView, WithdrawnBuildView } from "@/lib/api/operations/support";
+import { apiQuery } from "@/lib/api/client";
+import { getShippedWithBuild, listWithdrawnBuilds } from "@/lib/api/operations/support";
 import { buttonClass } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { ErrorNotice } from "@/components/ui/error-notice";
 
-interface Shipped {
-  build: { id: string; version: string; boardModelName: string; withdrawnReason: string | null };
-  boards: number;
-  lots: ShippedLotView[];
-}
 
 export function WithdrawnBuilds() {
   const sp = useSearchParams();
   const router = useRouter();
   const pathname = usePathname();
   const selected = sp.get("build");
-  const list = useQuery({ queryKey: ["withdrawn"], queryFn: () => apiFetch<{ items: WithdrawnBuildView[] }>("/api/v1/support/withdrawn") });
+  const list = useQuery(apiQuery(listWithdrawnBuilds, {}));
   const shipped = useQuery({
-    queryKey: ["withdrawn", selected],
-    queryFn: () => apiFetch<Shipped>(`/api/v1/support/withdrawn/${selected}`),
+    ...apiQuery(getShippedWithBuild, { params: { id: selected ?? "" } }),
     enabled: Boolean(selected),
   });
   return (

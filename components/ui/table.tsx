@@ -1,10 +1,13 @@
 import type { ReactNode } from "react";
 import { ErrorNotice } from "./error-notice";
 
-/** Dense, readable table chrome; columns and rows come from the caller. */
+/**
+ * Dense, readable table chrome; columns and rows come from the caller. The wrapper scrolls
+ * sideways on narrow screens, so it takes keyboard focus (arrow keys scroll it).
+ */
 export function Table({ children, caption }: { children: ReactNode; caption?: string }) {
   return (
-    <div className="overflow-x-auto">
+    <div className="overflow-x-auto" tabIndex={0} {...(caption ? { role: "region", "aria-label": caption } : {})}>
       <table className="w-full border-collapse text-left text-sm">
         {caption && <caption className="sr-only">{caption}</caption>}
         {children}

@@ -9,6 +9,7 @@ import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { checkBuild } from "@/lib/release/build-check";
 import { MEASUREMENT_HEADER } from "@/lib/release/measurements";
 import { DEMO_BOARD } from "./hardware";
+import { bankSignatureFields } from "../bank-signatures";
 
 type Db = Database;
 
@@ -211,6 +212,8 @@ export async function seedBuilds(db: Db) {
     }
 
     await db.transaction(async (tx) => {
+      // Builds that reached pilot carry the bank signature made at that move.
+      const signature = reachedIndex >= PATH.indexOf("pilot") ? await bankSignatureFields(tx, { boardModelId: board.id, bankImage: check.image }) : {};
       const [b] = await tx
         .insert(builds)
         .values({
@@ -228,6 +231,7 @@ export async function seedBuilds(db: Db) {
           bankCrc32: check.crc32,
           releaseNotes: demo.releaseNotes ?? null,
           withdrawnReason: demo.withdrawnReason ?? null,
+          ...signature,
         })
         .returning({ id: builds.id });
       const buildId = b!.id;

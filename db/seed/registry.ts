@@ -85,7 +85,7 @@ export const DEMO_PROFILES: DemoProfile[] = [
       },
       {
         version: "2.0.0",
-        boardRange: ">=0.9.0 <1.0.0 || >=2.0.0",
+        boardRange: ">=2.0.0",
         changelog: "Sixteen-point curves for smoother steps; flash-page boards only.",
         document: doc("Surge", "Full cooling for sustained loads, fine steps.", sixteen(60), sixteen(40)),
       },
@@ -126,14 +126,14 @@ export async function seedRegistry(db: Database): Promise<void> {
     const last = p.versions[p.versions.length - 1]!;
     await db
       .insert(profiles)
-      .values({ coolerModelId: cooler.id, name: p.name, description: p.description, ownerUserId: owner.id, draftText: documentText(last.document), draftUpdatedAt: new Date() })
+      .values({ coolerModelId: cooler.id, name: p.name, description: p.description, ownerUserId: owner.id, draftText: documentText(last.document), draftDocument: last.document, draftUpdatedAt: new Date() })
       .onConflictDoNothing();
     const [profile] = await db.select().from(profiles).where(and(eq(profiles.coolerModelId, cooler.id), eq(profiles.name, p.name)));
     if (!profile) throw new Error(`demo profile ${p.name} missing`);
     const have = new Set((await db.select({ v: profileVersions.version }).from(profileVersions).where(eq(profileVersions.profileId, profile.id))).map((r) => r.v));
     for (const v of p.versions) {
       if (have.has(v.version)) continue;
-      await publishVersion(db, { userId: owner.id, label: `${owner.email} (demo seed)` }, { profileId: profile.id, version: v.version, changelog: v.changelog, boardRange: v.boardRange, text: documentText(v.document) });
+      await publishVersion(db, { userId: owner.id, role: owner.role, label: `${owner.email} (demo seed)` }, { profileId: profile.id, version: v.version, changelog: v.changelog, boardRange: v.boardRange, text: documentText(v.document) });
     }
   }
 }

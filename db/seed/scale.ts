@@ -48,7 +48,7 @@ export async function seedScale(connectionString = url): Promise<void> {
     if (!author) throw new Error("seed the demo data first (npm run db:seed): the fixture build needs an author");
     await pool.query(
       `insert into builds (board_model_id, version, revision_range, stage, author_user_id, bank_image, bank_bytes, bank_sha256, bank_crc32, release_notes)
-       select $1, $2, '>=1.0.0 <2.0.0', 'production', $3, d.bank_image, d.bank_bytes, d.bank_sha256, d.bank_crc32, 'Scale fixture build.'
+       select $1, $2, '>=1.0.0 <2.0.0', 'draft', $3, d.bank_image, d.bank_bytes, d.bank_sha256, d.bank_crc32, 'Scale fixture build.'
          from (select $4::uuid as id) x left join builds d on d.id = x.id
        on conflict do nothing`,
       [board.id, BUILD_VERSION, author, donor?.id ?? null],
@@ -58,6 +58,8 @@ export async function seedScale(connectionString = url): Promise<void> {
     if (donor) {
       await pool.query(`insert into build_slots (build_id, slot_index, profile_version_id) select $1, slot_index, profile_version_id from build_slots where build_id = $2 on conflict do nothing`, [build.id, donor.id]);
     }
+    // Slots are fixed once a build leaves draft (the database refuses them after), so promote last.
+    await pool.query(`update builds set stage = 'production' where id = $1 and stage = 'draft'`, [build.id]);
     for (let first = 1; first <= SCALE_LOTS; first += BATCH) {
       const last = Math.min(SCALE_LOTS, first + BATCH - 1);
       await pool.query(

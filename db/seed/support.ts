@@ -1,6 +1,7 @@
 import { and, eq, sql } from "drizzle-orm";
 import type { Database } from "../client";
 import { boardModels, boardRevisions, buildSlots, builds, coolerModels, productionLots, profileVersions, profiles, users, type Build, type ProfileVersion } from "../schema";
+import { bankSignatureFields } from "../bank-signatures";
 import { contentHashHex, crc32, encodeBank, sha256, toHex, type CoolingProfile } from "@/lib/engine";
 import { satisfiesRange, compareVersions } from "@/lib/versioning/semver-helpers";
 import { DEMO_BOARD } from "./hardware";
@@ -129,12 +130,16 @@ export async function seedSupport(db: Database) {
     if (!bank.ok) throw new Error(`demo build ${b.version} does not encode: ${bank.errors.map((e) => e.message).join("; ")}`);
     const image = bank.bytes;
     const created = await db.transaction(async (tx) => {
+      // Builds that reached pilot carry the bank signature made at that move.
+      const signature = ["pilot", "production", "withdrawn"].includes(b.stage) ? await bankSignatureFields(tx, { boardModelId: board.id, bankImage: image }) : {};
       const [row] = await tx
         .insert(builds)
         .values({
           boardModelId: board.id,
           version: b.version,
           revisionRange: b.revisionRange,
+          // A withdrawn build is written as it was when signed (pilot or later) and withdrawn after:
+          // the database refuses any change to a withdrawn build, the signature included.
           stage: b.stage,
           authorUserId: releaser.id,
           bankImage: image,
@@ -143,6 +148,7 @@ export async function seedSupport(db: Database) {
           bankCrc32: new DataView(image.buffer, image.byteOffset).getUint32(image.length - 4, true),
           releaseNotes: `Demo build ${b.version}.`,
           withdrawnReason: b.withdrawnReason,
+          ...signature,
         })
         .onConflictDoNothing()
         .returning();

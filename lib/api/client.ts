@@ -1,34 +1,131 @@
+import type { z } from "zod";
 import { AppError, isErrorBody, type ErrorCode } from "./errors";
+import { isJsonResponse, type Operation, type ResponseBody, type ResponseSpec, type SendOf } from "./operation";
+
+/** Drops the keys whose type allows undefined from being required. */
+type Inputs<Q, B, P> = (P extends z.ZodType ? { params: SendOf<P> } : { params?: undefined }) &
+  (Q extends z.ZodType ? { query?: SendOf<Q> } : { query?: undefined }) &
+  (B extends z.ZodType ? { body: SendOf<B> } : { body?: undefined }) & {
+    /** For operations whose body is a file (uploads, CSV, dumps): the bytes and their type. */
+    raw?: { data: Blob | string | FormData | ArrayBuffer; contentType?: string };
+  };
+
+/** What a call of an operation sends: its path parameters, query and JSON body, each typed by the operation. */
+export type CallInput<O> = O extends Operation<infer Q, infer B, infer P, ResponseSpec> ? Inputs<Q, B, P> : never;
+/** What a call of an operation answers with on success. */
+export type CallResult<O> = O extends Operation<infer _Q, infer _B, infer _P, infer R> ? ResponseBody<R> : never;
+
+type AnyOperation = Operation<z.ZodType | undefined, z.ZodType | undefined, z.ZodType | undefined, ResponseSpec>;
+
+function plainEntries(value: unknown): [string, unknown][] {
+  return typeof value === "object" && value !== null ? Object.entries(value) : [];
+}
+
+/** Path and query values are strings, numbers or booleans; anything else is sent as JSON. */
+function scalar(value: unknown): string {
+  return typeof value === "string" || typeof value === "number" || typeof value === "boolean" ? String(value) : JSON.stringify(value);
+}
+
+/** The operation's URL: `{name}` segments filled from the path parameters, the query appended (empty values left out). */
+export function operationUrl<O extends AnyOperation>(op: O, input: { params?: unknown; query?: unknown } = {}): string {
+  const params = new Map(plainEntries(input.params));
+  const path = op.path.replace(/\{(\w+)\}/g, (_, name: string) => {
+    const value = params.get(name);
+    if (value === undefined || value === null || value === "") throw new AppError("bad_request", `The ${name} of ${op.id} is missing.`);
+    return encodeURIComponent(scalar(value));
+  });
+  const search = new URLSearchParams();
+  for (const [k, v] of plainEntries(input.query)) {
+    if (v === undefined || v === null || v === "") continue;
+    search.set(k, scalar(v));
+  }
+  const qs = search.toString();
+  return qs ? `${path}?${qs}` : path;
+}
 
 /**
- * The one client fetcher: JSON in, JSON out, and a failed response becomes the same
- * AppError the server threw, so forms can show its message and field issues.
+ * The TanStack Query key of an operation's answer: its id, then its path parameters and
+ * query. Invalidating `[op.id]` refreshes every answer of that operation;
+ * `operationKey(op, { params })` those of one resource.
  */
-export async function apiFetch<T>(url: string, init: RequestInit & { json?: unknown } = {}): Promise<T> {
-  const { json, headers, ...rest } = init;
-  let res: Response;
+export function operationKey<O extends AnyOperation>(op: O, input: { params?: unknown; query?: unknown } = {}): readonly unknown[] {
+  const key: unknown[] = [op.id];
+  if (input.params !== undefined || input.query !== undefined) key.push(input.params ?? {});
+  if (input.query !== undefined) key.push(input.query);
+  return key;
+}
+
+async function send(url: string, init: RequestInit): Promise<Response> {
   try {
-    res = await fetch(url, {
-      ...rest,
-      headers: { accept: "application/json", ...(json !== undefined ? { "content-type": "application/json" } : {}), ...headers },
-      body: json !== undefined ? JSON.stringify(json) : rest.body,
-    });
-  } catch {
+    return await fetch(url, init);
+  } catch (err) {
+    if (err instanceof DOMException && err.name === "AbortError") throw err;
     throw new AppError("unavailable", "Could not reach the Loopkeeper server. Check your connection and try again.");
   }
+}
+
+async function failure(res: Response): Promise<AppError> {
+  let body: unknown;
+  try {
+    body = JSON.parse(await res.text());
+  } catch {
+    body = undefined;
+  }
+  if (isErrorBody(body)) return new AppError(body.error.code, body.error.message, { issues: body.error.issues });
+  const code: ErrorCode = res.status === 503 ? "unavailable" : res.status === 401 ? "unauthorized" : res.status === 403 ? "forbidden" : res.status === 404 ? "not_found" : "internal";
+  return new AppError(code, `The server answered ${res.status}.`);
+}
+
+/**
+ * The one client call: takes an operation and its typed inputs, builds the URL from the
+ * operation's path, and answers with the operation's response type. A failed response
+ * becomes the same AppError the server threw, so forms can show its message and field issues.
+ */
+export async function apiCall<O extends AnyOperation>(op: O, input: CallInput<O>, init: { signal?: AbortSignal } = {}): Promise<CallResult<O>> {
+  const { params, query, body, raw } = input as { params?: unknown; query?: unknown; body?: unknown; raw?: { data: BodyInit; contentType?: string } };
+  const headers: Record<string, string> = { accept: "application/json" };
+  let payload: BodyInit | undefined;
+  if (raw) {
+    payload = raw.data;
+    if (raw.contentType) headers["content-type"] = raw.contentType;
+  } else if (body !== undefined) {
+    payload = JSON.stringify(body);
+    headers["content-type"] = "application/json";
+  }
+  const res = await send(operationUrl(op, { params, query }), { method: op.method, headers, body: payload, signal: init.signal });
+  if (!res.ok) throw await failure(res);
+  if (!isJsonResponse(op.response)) {
+    return (op.response.kind === "file" ? await res.blob() : undefined) as CallResult<O>;
+  }
   const text = await res.text();
-  let body: unknown = undefined;
-  if (text) {
-    try {
-      body = JSON.parse(text);
-    } catch {
-      body = undefined;
-    }
+  try {
+    // The server built this body from the operation's response schema (the handler's type says so).
+    return JSON.parse(text) as CallResult<O>;
+  } catch {
+    throw new AppError("internal", "The server's answer was not JSON.");
   }
-  if (!res.ok) {
-    if (isErrorBody(body)) throw new AppError(body.error.code, body.error.message, { issues: body.error.issues });
-    const code: ErrorCode = res.status === 503 ? "unavailable" : res.status === 401 ? "unauthorized" : res.status === 403 ? "forbidden" : "internal";
-    throw new AppError(code, `The server answered ${res.status}.`);
+}
+
+/** Query options for `useQuery`/`prefetchQuery`: the key derived from the operation, the typed call as the fetcher. */
+export function apiQuery<O extends AnyOperation>(op: O, input: CallInput<O>) {
+  const { params, query } = input as { params?: unknown; query?: unknown };
+  return {
+    queryKey: operationKey(op, { params, query }),
+    queryFn: ({ signal }: { signal: AbortSignal }) => apiCall(op, input, { signal }),
+  };
+}
+
+/**
+ * Screen state from the URL read as an operation's query: values the schema refuses are
+ * dropped (the server would refuse them too), so a hand-edited URL shows the default list
+ * instead of an error.
+ */
+export function queryFromUrl<S extends z.ZodType>(schema: S, raw: Record<string, string>): z.output<S> {
+  const entries = { ...raw };
+  for (let attempt = 0; attempt < 3; attempt++) {
+    const r = schema.safeParse(entries);
+    if (r.success) return r.data;
+    for (const issue of r.error.issues) delete entries[String(issue.path[0])];
   }
-  return body as T;
+  return schema.parse({});
 }

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import type { Operation } from "./operation";
+import { isJsonResponse, type Operation, type ResponseSpec } from "./operation";
 import { CAPABILITIES } from "@/lib/auth/roles";
 
 type JsonSchema = Record<string, unknown>;
@@ -45,6 +45,12 @@ const errorResponse = {
   },
 };
 
+function successResponse(r: ResponseSpec): JsonSchema {
+  if (isJsonResponse(r)) return { description: "OK", content: { "application/json": { schema: schemaOf(r, "output") } } };
+  if (r.kind === "file") return { description: r.description, content: Object.fromEntries(r.contentTypes.map((c) => [c, { schema: { type: "string", format: "binary" } }])) };
+  return { description: "Done; no body." };
+}
+
 function accessText(op: Operation): string {
   if (op.access === "public") return "No sign-in needed.";
   if (op.access === "signed_in") return "Any signed-in user or API token.";
@@ -57,9 +63,7 @@ export function buildOpenApi(ops: Operation[], version: string): JsonSchema {
   for (const op of ops) {
     const item = (paths[op.path] ??= {});
     const responses: Record<string, unknown> = {
-      [String(op.successStatus ?? 200)]: op.response
-        ? { description: "OK", content: { "application/json": { schema: schemaOf(op.response, "output") } } }
-        : { description: "OK" },
+      [String(op.successStatus ?? 200)]: successResponse(op.response),
       default: errorResponse,
     };
     const requestBody = op.body

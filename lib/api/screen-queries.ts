@@ -7,17 +7,11 @@
 /** The filters the profile list reads from its URL. */
 export const PROFILE_FILTERS = ["q", "coolerModelId"] as const;
 
-/** Every cooler model by name (at most 100, the API's largest page): the profile filter, the create form and the editor's cooler picker. */
-export const ALL_COOLERS: Record<string, string> = { pageSize: "100", sort: "name" };
-
 /** The filters the component list reads from its URL. */
 export const COMPONENT_FILTERS = ["q", "kind"] as const;
 
 /** The filters the cooler-model list reads from its URL. */
 export const COOLER_FILTERS = ["q"] as const;
-
-/** Every fan and pump (at most 100): the parts offered by the cooler-model form. */
-export const ALL_COMPONENTS: Record<string, string> = { pageSize: "100" };
 
 /** The lot list's URL state: filters, sort and direction (its page is read separately). */
 export const LOT_FILTERS = ["board", "build", "code", "sort", "dir"] as const;

@@ -1,4 +1,21 @@
-import { bankBytes, evaluateCurves, isRevisionCompatible, loadSweep, quantise, validateProfileText, type CoolingProfile, type HardwareContext, type OperatingPoint, type ValidationIssue } from "@/lib/engine";
+import {
+  bankBytes,
+  componentLevelDbA,
+  dutyAtTemp,
+  dutyToRpm,
+  evaluateCurves,
+  identicalSourcesDb,
+  isRevisionCompatible,
+  loadSweep,
+  quantise,
+  validateProfileText,
+  type CoolingProfile,
+  type CurveKind,
+  type HardwareContext,
+  type OperatingPoint,
+  type ProfileSettings,
+  type ValidationIssue,
+} from "@/lib/engine";
 
 /** One plotted temperature: authored and as-flashed speeds, and the estimated sound level. */
 export interface PlotRow {
@@ -8,6 +25,9 @@ export interface PlotRow {
   pumpRpmFlashed: number;
   fanRpmFlashed: number;
   soundDbA: number;
+  /** Speeds while the liquid cools: the curve read at T + hysteresis (the firmware's play operator held value). */
+  pumpRpmFalling: number;
+  fanRpmFalling: number;
 }
 
 export interface EditorEvaluation {
@@ -15,6 +35,8 @@ export interface EditorEvaluation {
   /** The document when it passed the schema (plots need its shape even with semantic errors). */
   profile: CoolingProfile | undefined;
   rows: PlotRow[];
+  /** The document as the board stores it (quantise, the bank encoder's integer codes), for the as-flashed ghosts. */
+  flashed: CoolingProfile | undefined;
 }
 
 /** Plot range of the editor, °C, and its step. */
@@ -23,18 +45,46 @@ export const PLOT_TO_C = 70;
 export const PLOT_STEP_C = 0.5;
 
 /**
+ * The plotted temperature range: 20–70 °C, widened to whole 5 °C steps so every
+ * point, the fan stop and the critical temperature are on the plot.
+ */
+export function plotRangeC(profile: ProfileSettings): { fromC: number; toC: number } {
+  const temps = [...profile.pump.points, ...profile.fans.points].map((p) => p.tempC);
+  if (profile.fans.stopBelowTempC !== undefined) temps.push(profile.fans.stopBelowTempC);
+  temps.push(profile.criticalTempC);
+  const lo = Math.min(PLOT_FROM_C, ...temps.map((t) => Math.floor(t / 5) * 5));
+  const hi = Math.max(PLOT_TO_C, ...temps.map((t) => Math.ceil(t / 5) * 5));
+  return { fromC: Math.max(0, lo), toC: Math.min(100, hi) };
+}
+
+/**
+ * Pump or fan RPM while the liquid cools at `tempC`: the firmware holds the curve's
+ * input at T + hysteresis (play operator, lib/transient), so the falling branch is the
+ * curve read there; full speed at or above the critical temperature; fans stopped while
+ * the held temperature is below the stop temperature.
+ */
+export function coolingBranchRpm(profile: ProfileSettings, hw: HardwareContext, kind: CurveKind, tempC: number): number {
+  const motor = kind === "pump" ? hw.pump : hw.fan;
+  if (tempC >= profile.criticalTempC) return dutyToRpm(100, motor);
+  const held = tempC + profile[kind].hysteresisC;
+  if (kind === "fans" && profile.fans.stopBelowTempC !== undefined && held < profile.fans.stopBelowTempC) return 0;
+  return dutyToRpm(dutyAtTemp(profile[kind].points, held), motor);
+}
+
+/**
  * What the editor shows for one text: the engine's issues for the chosen hardware,
  * and speeds (authored and after quantise, the board's 0.5 °C / 0.5 % steps) and noise
- * (coolerNoise, via evaluateCurves) from 20 to 70 °C.
+ * (coolerNoise, via evaluateCurves) over the plot range (plotRangeC).
  */
 export function evaluateEditorText(text: string, hw: HardwareContext): EditorEvaluation {
   const result = validateProfileText(text, hw);
   const profile = result.value;
-  if (!profile) return { issues: result.issues, profile: undefined, rows: [] };
-  const opts = { fromC: PLOT_FROM_C, toC: PLOT_TO_C, stepC: PLOT_STEP_C };
+  if (!profile) return { issues: result.issues, profile: undefined, rows: [], flashed: undefined };
+  const flashedProfile = quantise(profile);
+  const opts = { ...plotRangeC(profile), stepC: PLOT_STEP_C };
   try {
     const authored = evaluateCurves(profile, hw, opts);
-    const flashed = evaluateCurves(quantise(profile), hw, opts);
+    const flashed = evaluateCurves(flashedProfile, hw, opts);
     const rows = authored.map((r, i) => ({
       tempC: r.tempC,
       pumpRpm: Math.round(r.pumpRpm),
@@ -42,12 +92,37 @@ export function evaluateEditorText(text: string, hw: HardwareContext): EditorEva
       pumpRpmFlashed: Math.round(flashed[i]?.pumpRpm ?? r.pumpRpm),
       fanRpmFlashed: Math.round(flashed[i]?.fanRpm ?? r.fanRpm),
       soundDbA: Math.round(r.soundDbA1m * 10) / 10,
+      pumpRpmFalling: Math.round(coolingBranchRpm(profile, hw, "pump", r.tempC)),
+      fanRpmFalling: Math.round(coolingBranchRpm(profile, hw, "fans", r.tempC)),
     }));
-    return { issues: result.issues, profile, rows };
+    return { issues: result.issues, profile, rows, flashed: flashedProfile };
   } catch {
     // A document that passed the schema but that the evaluator refuses (e.g. an extreme value) shows its issues without plots.
-    return { issues: result.issues, profile, rows: [] };
+    return { issues: result.issues, profile, rows: [], flashed: flashedProfile };
   }
+}
+
+/** One curve point as the points table shows it. */
+export interface PointRow {
+  tempC: number;
+  dutyPct: number;
+  /** Speed at this duty (dutyToRpm); 0 for a fan point below the fan stop temperature. */
+  rpm: number;
+  /** This motor group's own level at 1 m: the pump alone, or all fans together (+10·log10 n). */
+  soundDbA: number;
+}
+
+/** The points of one curve with their speed and the level of that motor group at 1 m. */
+export function pointRows(profile: ProfileSettings, hw: HardwareContext, kind: CurveKind): PointRow[] {
+  const motor = kind === "pump" ? hw.pump : hw.fan;
+  const stop = kind === "fans" ? profile.fans.stopBelowTempC : undefined;
+  return profile[kind].points.map((p) => {
+    const stopped = stop !== undefined && p.tempC < stop && p.tempC < profile.criticalTempC;
+    const rpm = stopped ? 0 : dutyToRpm(p.dutyPct, motor);
+    const own = rpm > 0 ? componentLevelDbA(motor, rpm) : -Infinity;
+    const soundDbA = kind === "pump" ? own : identicalSourcesDb(own, hw.fanCount);
+    return { tempC: p.tempC, dutyPct: p.dutyPct, rpm, soundDbA };
+  });
 }
 
 /** Load sweep for the operating-point chart; empty when the engine refuses the inputs. */

@@ -1,5 +1,6 @@
 import { contentHashHex, crc32, encodeBank, isRevisionCompatible, satisfiesRange, validateProfileText, type CoolingProfile, type HardwareContext, type ValidationIssue } from "@/lib/engine";
 import { toHardwareContext, type ComponentFields, type CoolerFields, type RevisionFields } from "./hardware-context";
+import { fitRange, rangeFitMessage } from "./range-fit";
 
 export interface VersionImage {
   document: CoolingProfile;
@@ -16,9 +17,11 @@ export type VersionImageResult = { ok: true; image: VersionImage } | { ok: false
 
 /**
  * What publishing a version computes: the document validated against the cooler's
- * parts on the most capable board revision the range admits (smaller revisions are
- * judged by the compatibility matrix), then encoded alone into a bank image for
- * its size and CRC, and hashed. Pure, so the server and the demo seed agree.
+ * parts on the most capable board revision the range admits, encoded alone into a bank
+ * image for its size and CRC, and hashed; then every revision the range admits must
+ * hold it (points per curve, memory, a slot), or the version is refused naming each
+ * revision that cannot, with the narrowest range that fits. Pure, so the server and
+ * the demo seed agree.
  */
 export function buildVersionImage(input: {
   text: string;
@@ -47,6 +50,14 @@ export function buildVersionImage(input: {
     return { ok: false, message: "The version could not be encoded for the board.", issues: encoded.errors.map((e) => ({ code: e.code, path: "", severity: "error", message: e.message })) };
   }
   const bytes = encoded.bytes;
+  const fit = fitRange(input.boardRange, input.revisions, { pointsPerCurve: Math.max(document.pump.points.length, document.fans.points.length), encodedBytes: bytes.length });
+  if (fit.misfits.length > 0) {
+    return {
+      ok: false,
+      message: rangeFitMessage(input.boardRange, fit),
+      issues: fit.misfits.map((m) => ({ code: "range.revision_cannot_hold", path: "/boardRange", severity: "error" as const, message: `Revision ${m.revision}: ${m.reasons.join("; ")}.` })),
+    };
+  }
   return {
     ok: true,
     image: { document, encodedBytes: bytes.length, crc32: crc32(bytes, 0, 0, bytes.length - 4), contentHash, warnings: result.issues.filter((i) => i.severity === "warning") },

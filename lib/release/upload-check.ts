@@ -1,5 +1,5 @@
 import { readIntelHex } from "../engine";
-import { hasMeasurementHeader } from "./measurements";
+import { hasMeasurementHeader, parseMeasurementsCsv } from "./measurements";
 
 export const UPLOAD_KINDS = ["firmware", "lab_report", "measurements"] as const;
 export type UploadKind = (typeof UPLOAD_KINDS)[number];
@@ -55,7 +55,7 @@ export function checkUploadContent(kind: UploadKind, name: string, bytes: Uint8A
   if (kind === "measurements") {
     const text = asText(bytes);
     if (text === null || !hasMeasurementHeader(text)) {
-      return { ok: false, message: "The measurements must be a CSV text file whose first line is liquid_temp_c,pump_rpm,fan_rpm,sound_dba." };
+      return { ok: false, message: "The measurements must be a CSV text file whose first line is liquid_temp_c,pump_rpm,fan_rpm,sound_dba (optionally followed by ,background_dba)." };
     }
     return { ok: true, contentType: "text/csv" };
   }
@@ -68,4 +68,15 @@ export function checkUploadContent(kind: UploadKind, name: string, bytes: Uint8A
     return { ok: false, message: `The firmware looks like Intel HEX but does not parse${first ? `: line ${first.line}: ${first.message}` : " as text"}.` };
   }
   return { ok: true, contentType: "text/x-hex" };
+}
+
+/**
+ * Row problems of a file whose type already passed `checkUploadContent`: a measurement CSV
+ * must read completely (every row numeric and in range) before it is stored, so a file the
+ * gate cannot use is never shown as attached. Empty when the file is fine.
+ */
+export function uploadRowErrors(kind: UploadKind, bytes: Uint8Array): string[] {
+  if (kind !== "measurements") return [];
+  const parsed = parseMeasurementsCsv(new TextDecoder().decode(bytes));
+  return parsed.ok ? [] : parsed.errors;
 }

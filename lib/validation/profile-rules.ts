@@ -12,15 +12,18 @@ const fmt = (n: number): string => String(Math.round(n * 1000) / 1000);
 const error = (code: string, path: string, message: string): ValidationIssue => ({ code, path, severity: "error", message });
 const warning = (code: string, path: string, message: string): ValidationIssue => ({ code, path, severity: "warning", message });
 
+/** Points as people count them (the first is point 1); JSON pointers in `path` stay 0-based for tools. */
+const pointNo = (index: number): number => index + 1;
+
 function orderRules(kind: CurveKind, curve: CurveSettings, out: ValidationIssue[]): void {
   curve.points.forEach((p, i) => {
     const prev = curve.points[i - 1];
     if (!prev) return;
     if (!(p.tempC > prev.tempC)) {
-      out.push(error("curve.temps_not_increasing", `/${kind}/points/${i}/tempC`, `${LABEL[kind]} point ${i} is at ${fmt(p.tempC)} °C, not above point ${i - 1} at ${fmt(prev.tempC)} °C: temperatures must strictly increase; sort the points or remove the duplicate.`));
+      out.push(error("curve.temps_not_increasing", `/${kind}/points/${i}/tempC`, `${LABEL[kind]} point ${pointNo(i)} is at ${fmt(p.tempC)} °C, not above point ${pointNo(i - 1)} at ${fmt(prev.tempC)} °C: temperatures must strictly increase; sort the points or remove the duplicate.`));
     }
     if (p.dutyPct < prev.dutyPct) {
-      out.push(error("curve.duties_decreasing", `/${kind}/points/${i}/dutyPct`, `${LABEL[kind]} point ${i} asks for ${fmt(p.dutyPct)} %, less than the ${fmt(prev.dutyPct)} % of point ${i - 1}: duties must not fall as the liquid warms; raise it to at least ${fmt(prev.dutyPct)} %.`));
+      out.push(error("curve.duties_decreasing", `/${kind}/points/${i}/dutyPct`, `${LABEL[kind]} point ${pointNo(i)} asks for ${fmt(p.dutyPct)} %, less than the ${fmt(prev.dutyPct)} % of point ${pointNo(i - 1)}: duties must not fall as the liquid warms; raise it to at least ${fmt(prev.dutyPct)} %.`));
     }
   });
 }

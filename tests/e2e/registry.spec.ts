@@ -83,6 +83,9 @@ test.describe("registry, as a viewer", () => {
     const editor = await new ProfileEditor(page).goto(hush.id);
     await expect(editor.editor).toBeVisible();
     await expect(page.getByText("Read only: your role may not edit profiles.")).toBeVisible();
+    // A reader is not told to edit or that drafts save themselves.
+    await expect(editor.page.getByText(/Drafts save themselves/)).toHaveCount(0);
+    await expect(editor.page.getByText(/Edit the JSON/)).toHaveCount(0);
     await editor.expectNoButton("Publish version");
     await expect(page.getByText("Import .json")).toHaveCount(0);
 
@@ -92,7 +95,7 @@ test.describe("registry, as a viewer", () => {
     await profiles.expectNoButton("Create and open the editor");
 
     const text = `${JSON.stringify({ formatVersion: 1 })}\n`;
-    expect((await page.request.put(`/api/v1/profiles/${hush.id}/draft`, { data: { text } })).status()).toBe(403);
+    expect((await page.request.put(`/api/v1/profiles/${hush.id}/draft`, { data: { text, baseRevision: 0 } })).status()).toBe(403);
     expect((await page.request.post(`/api/v1/profiles/${hush.id}/versions`, { data: { version: "9.0.0", changelog: "x", boardRange: ">=1.0.0", text } })).status()).toBe(403);
     expect((await page.request.post("/api/v1/profiles", { data: { coolerModelId: "00000000-0000-4000-8000-000000000000", name: "x", description: "" } })).status()).toBe(403);
   });

@@ -40,7 +40,7 @@ test.describe("support lookup", () => {
     await lookup.lookUp("tc1-12345");
     await expect(page.getByRole("heading", { name: "Serial TC1-00012345" })).toBeVisible();
     await expect(page.getByText("TW-2501", { exact: true })).toBeVisible();
-    await expect(page.getByRole("heading", { name: "Slot 0: Quiet 1.0.0" })).toBeVisible();
+    await expect(page.getByRole("heading", { name: "Slot 1: Quiet 1.0.0" })).toBeVisible();
     // recharts draws the curves lazily once the result is on screen.
     await expect(page.locator("figure .recharts-surface").first()).toBeVisible();
     await expect(page.getByText("Build 3.1.0", { exact: true })).toBeVisible();

@@ -113,13 +113,13 @@ describe("build stages", () => {
     const b = await inReviewWithApprovals(2);
     await moveBuild(release, { id: b.id, from: "review", to: "validation" });
     let err = await refusal(moveBuild(release, { id: b.id, from: "validation", to: "pilot" }));
-    expect(err.issues?.map((i) => i.message)).toEqual(["Attach the lab report (PDF).", "Attach the measurement CSV."]);
+    expect(err.issues?.map((i) => i.message)).toEqual(["Attach the lab report (PDF).", "Attach the measurement CSV.", "No measurements to compare with the estimate yet."]);
 
     await uploadEvidence(b.id, "lab_report", tinyPdf("lab"), "report.pdf");
     // 5 dB above the estimate is outside the default 3 dB tolerance.
     await uploadEvidence(b.id, "measurements", await measurementCsv(b, 5), "loud.csv");
     err = await refusal(moveBuild(release, { id: b.id, from: "validation", to: "pilot" }));
-    expect(err.message).toMatch(/3 of 3 measured sound levels differ from the estimate by more than 3 dB/);
+    expect(err.message).toMatch(/3 of 3 comparable measured sound levels exceed the estimate by more than 3 dB/);
 
     await recordWaiver(getDb(), release, { buildId: b.id, reason: "Rig background noise was high that day; re-measured by ear." });
     await moveBuild(release, { id: b.id, from: "validation", to: "pilot" });

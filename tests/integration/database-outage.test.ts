@@ -4,6 +4,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { closeDb } from "./support/db";
 import { callRoute, tokenFor } from "./support/http";
 import { GET as health } from "@/app/api/health/route";
+import { GET as live } from "@/app/api/health/live/route";
 import { GET as getMe } from "@/app/api/v1/me/route";
 import { NextRequest } from "next/server";
 import { proxy } from "@/proxy";
@@ -37,6 +38,10 @@ describe.runIf(localCluster)("PostgreSQL stopped while the app runs", () => {
     expect(down.value.status).toBe(503);
     expect(await down.value.json()).toMatchObject({ database: "down" });
     expect(down.ms).toBeLessThan(5000);
+    // Liveness does no I/O: the process is fine, so a load balancer must not restart it.
+    const alive = live();
+    expect(alive.status).toBe(200);
+    expect(await alive.json()).toEqual({ status: "ok" });
 
     const api = await timed(() => callRoute(getMe, { url: "/api/v1/me", token }));
     expect(api.value.status).toBe(503);

@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "./support/db";
 import { callRoute, tokenFor } from "./support/http";
 import { coolerModels } from "@/db/schema";
-import { createProfile, getProfileDetail } from "@/db/profiles";
+import { createProfile, getProfileDetail, saveDraft } from "@/db/profiles";
 import { GET as getProfile } from "@/app/api/v1/profiles/[id]/route";
 import { PUT as putDraft } from "@/app/api/v1/profiles/[id]/draft/route";
 
@@ -16,8 +16,14 @@ async function newProfile() {
   return createProfile(db, engineer, { coolerModelId: cooler!.id, name: `As typed ${Date.now()}-${Math.random().toString(36).slice(2, 6)}`, description: "" });
 }
 
+/** The draft revision the next save is based on (saves are refused when based on a stale one). */
+async function currentRevision(id: string): Promise<number> {
+  return (await getProfileDetail(getDb(), { id }))!.profile.draftRevision;
+}
+
 async function saveAndReadBack(id: string, token: string, text: string): Promise<string> {
-  const put = await callRoute(putDraft, { url: `/api/v1/profiles/${id}/draft`, method: "PUT", token, params: { id }, body: JSON.stringify({ text }), headers: { "content-type": "application/json" } });
+  const baseRevision = await currentRevision(id);
+  const put = await callRoute(putDraft, { url: `/api/v1/profiles/${id}/draft`, method: "PUT", token, params: { id }, body: JSON.stringify({ text, baseRevision }), headers: { "content-type": "application/json" } });
   expect(put.status, await put.clone().text()).toBe(200);
   const got = await callRoute(getProfile, { url: `/api/v1/profiles/${id}`, token, params: { id } });
   expect(got.status).toBe(200);
@@ -60,9 +66,25 @@ describe("a draft with a NUL character", () => {
     const profile = await newProfile();
     const token = await tokenFor("engineer@tarnwell.example");
     const before = await saveAndReadBack(profile.id, token, '{ "name": "kept" }');
-    const put = await callRoute(putDraft, { url: `/api/v1/profiles/${profile.id}/draft`, method: "PUT", token, params: { id: profile.id }, body: JSON.stringify({ text: '{ "name": "a\u0000b" }' }), headers: { "content-type": "application/json" } });
+    const put = await callRoute(putDraft, { url: `/api/v1/profiles/${profile.id}/draft`, method: "PUT", token, params: { id: profile.id }, body: JSON.stringify({ text: '{ "name": "a\u0000b" }', baseRevision: await currentRevision(profile.id) }), headers: { "content-type": "application/json" } });
     expect(put.status).toBe(422);
     expect(await put.text()).toMatch(/NUL character/);
     expect((await getProfileDetail(getDb(), { id: profile.id }))!.profile.draftText).toBe(before);
+  });
+});
+
+describe("the last plottable draft", () => {
+  it("is offered only while the draft text does not pass the schema", async () => {
+    const profile = await newProfile();
+    const db = getDb();
+    const engineer = await demoActor("engineer@tarnwell.example");
+    const good = (await getProfileDetail(db, { id: profile.id }))!.profile;
+    expect(good.lastPlottableDraftText).toBeNull();
+    await saveDraft(db, engineer, { id: profile.id, text: `${good.draftText!.slice(0, 40)}` });
+    const broken = (await getProfileDetail(db, { id: profile.id }))!.profile;
+    expect(broken.draftText).toBe(good.draftText!.slice(0, 40));
+    expect(JSON.parse(broken.lastPlottableDraftText!)).toEqual(JSON.parse(good.draftText!));
+    await saveDraft(db, engineer, { id: profile.id, text: good.draftText! });
+    expect((await getProfileDetail(db, { id: profile.id }))!.profile.lastPlottableDraftText).toBeNull();
   });
 });

@@ -22,7 +22,7 @@ async function newProfile(label: string) {
 }
 
 const publish = (p: Awaited<ReturnType<typeof newProfile>>, version: string, text = p.text) =>
-  publishVersion(p.db, p.engineer, { profileId: p.profile.id, version, changelog: "test", boardRange: ">=1.0.0 <3.0.0", text });
+  publishVersion(p.db, { ...p.engineer, role: "engineer" }, { profileId: p.profile.id, version, changelog: "test", boardRange: ">=1.0.0 <3.0.0", text });
 
 describe("profile versions", () => {
   it("refuses to change a published document in the database itself", async () => {

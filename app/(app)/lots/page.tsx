@@ -6,7 +6,8 @@ import { prefetchScreen, screenQuery } from "@/lib/platform/screens/prefetch";
 import { can } from "@/lib/auth/roles";
 import { getDb } from "@/db/client";
 import { searchParamsOf } from "@/lib/api/list-query";
-import { getLotOptions, listLots } from "@/lib/api/operations/support";
+import { queryFromUrl } from "@/lib/api/client";
+import { getLotOptions, listLots, lotsQuery } from "@/lib/api/operations/support";
 import { LOT_FILTERS, pagedQueryFromUrl } from "@/lib/api/screen-queries";
 import { lotFormOptions, lotsPage } from "@/lib/use-cases/lots/read";
 import { PageHeader } from "@/components/ui/panel";
@@ -17,7 +18,7 @@ export const metadata: Metadata = { title: "Production lots" };
 export default async function ProductionLotsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const actor = await requirePageActor("read", "/lots");
   const db = getDb();
-  const query = pagedQueryFromUrl(LOT_FILTERS, searchParamsOf(await searchParams));
+  const query = queryFromUrl(lotsQuery, pagedQueryFromUrl(LOT_FILTERS, searchParamsOf(await searchParams)));
   const state = await prefetchScreen(actor, [
     screenQuery(listLots, { query }, ({ query: parsed }) => lotsPage(db, parsed)),
     screenQuery(getLotOptions, {}, () => lotFormOptions(db)),

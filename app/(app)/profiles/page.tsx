@@ -4,9 +4,10 @@ import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { can } from "@/lib/auth/roles";
 import { getDb } from "@/db/client";
 import { listQueryFromUrl, searchParamsOf } from "@/lib/api/list-query";
-import { listProfiles } from "@/lib/api/operations/profiles";
-import { listCoolerModels } from "@/lib/api/operations/registry";
-import { ALL_COOLERS, PROFILE_FILTERS } from "@/lib/api/screen-queries";
+import { queryFromUrl } from "@/lib/api/client";
+import { listProfiles, profilesQuery } from "@/lib/api/operations/profiles";
+import { ALL_COOLERS, listCoolerModels } from "@/lib/api/operations/registry";
+import { PROFILE_FILTERS } from "@/lib/api/screen-queries";
 import { prefetchScreen, screenQuery } from "@/lib/platform/screens/prefetch";
 import { profilesPage } from "@/lib/use-cases/profiles/read";
 import { coolerModelsPage } from "@/lib/use-cases/registry/read";
@@ -19,7 +20,7 @@ export default async function ProfilesPage({ searchParams }: { searchParams: Pro
   const actor = await requirePageActor("read");
   const db = getDb();
   const state = await prefetchScreen(actor, [
-    screenQuery(listProfiles, { query: listQueryFromUrl(PROFILE_FILTERS, searchParamsOf(await searchParams)) }, ({ query }) => profilesPage(db, query)),
+    screenQuery(listProfiles, { query: queryFromUrl(profilesQuery, listQueryFromUrl(PROFILE_FILTERS, searchParamsOf(await searchParams))) }, ({ query }) => profilesPage(db, query)),
     screenQuery(listCoolerModels, { query: ALL_COOLERS }, ({ query }) => coolerModelsPage(db, query)),
   ]);
   return (

@@ -3,7 +3,7 @@ import { checkDatabase } from "@/db/health";
 
 export const dynamic = "force-dynamic";
 
-/** Liveness and database reachability for load balancers; no sign-in, no secrets. */
+/** Readiness for load balancers: the database answers (one query with a short deadline); no sign-in, no secrets. Liveness without I/O is /api/health/live. */
 export async function GET() {
   const database = await checkDatabase();
   const ok = database.ok;

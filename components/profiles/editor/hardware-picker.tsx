@@ -2,11 +2,9 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { useMemo } from "react";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
-import { ALL_COOLERS } from "@/lib/api/screen-queries";
+import { apiQuery } from "@/lib/api/client";
+import { ALL_COMPONENTS, ALL_COOLERS, listComponents, listCoolerModels } from "@/lib/api/operations/registry";
 import type { ProfileDetailView } from "@/lib/api/operations/profile-schemas";
-import type { ComponentView, CoolerModelView } from "@/lib/api/operations/registry-schemas";
 import type { ComponentFields, CoolerFields } from "@/lib/registry/hardware-context";
 import { Select } from "@/components/ui/field";
 
@@ -20,18 +18,14 @@ export interface CoolerChoice {
   own: boolean;
 }
 
-interface ServerPage<T> {
-  items: T[];
-}
-
 /**
  * The profile's own cooler first (from the profile's answer, so it works even if the lists
  * fail), then the other cooler models on the same board model, whose parts come from the
  * component list.
  */
 export function useCoolerChoices(detail: Pick<ProfileDetailView, "cooler" | "fan" | "pump">): { choices: CoolerChoice[]; loadError: boolean } {
-  const coolers = useQuery({ queryKey: operationKey("listCoolerModels", { query: ALL_COOLERS }), queryFn: () => apiFetch<ServerPage<CoolerModelView>>(`/api/v1/cooler-models?${new URLSearchParams(ALL_COOLERS).toString()}`) });
-  const parts = useQuery({ queryKey: ["components", "all"], queryFn: () => apiFetch<ServerPage<ComponentView>>("/api/v1/components?pageSize=100") });
+  const coolers = useQuery(apiQuery(listCoolerModels, { query: ALL_COOLERS }));
+  const parts = useQuery(apiQuery(listComponents, { query: ALL_COMPONENTS }));
   const { cooler, fan, pump } = detail;
   const choices = useMemo(() => {
     const own: CoolerChoice = { id: cooler.id, cooler, fan, pump, own: true };

@@ -1,13 +1,15 @@
 "use client";
 
 import { useRef, useState } from "react";
+import { apiCall } from "@/lib/api/client";
 import { AppError } from "@/lib/api/errors";
+import { importDraft } from "@/lib/api/operations/profiles";
 import { MAX_PROFILE_BYTES } from "@/lib/api/operations/profile-schemas";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { buttonClass } from "@/components/ui/button";
 
 /** Uploads a .json profile; the server validates it and replaces the draft, then the editor shows it. */
-export function ImportButton({ profileId, onImported }: { profileId: string; onImported: (text: string) => void }) {
+export function ImportButton({ profileId, onImported }: { profileId: string; onImported: (text: string, draftRevision: number) => void }) {
   const input = useRef<HTMLInputElement>(null);
   const [error, setError] = useState<AppError | null>(null);
   const [busy, setBusy] = useState(false);
@@ -20,15 +22,11 @@ export function ImportButton({ profileId, onImported }: { profileId: string; onI
     setBusy(true);
     try {
       const text = await file.text();
-      const res = await fetch(`/api/v1/profiles/${profileId}/import`, { method: "POST", headers: { "content-type": "application/json" }, body: text });
-      const body = (await res.json().catch(() => null)) as { error?: { message: string; issues?: { path: string; message: string }[] } } | null;
-      if (!res.ok) {
-        setError(new AppError("validation_failed", body?.error?.message ?? `The server answered ${res.status}.`, { issues: body?.error?.issues }));
-        return;
-      }
-      onImported(`${JSON.stringify(JSON.parse(text), null, 2)}\n`);
-    } catch {
-      setError(new AppError("unavailable", "Could not read or send the file."));
+      const saved = await apiCall(importDraft, { params: { id: profileId }, raw: { data: text, contentType: "application/json" } });
+      // The server keeps the file as written; the editor shows the same text.
+      onImported(text, saved.draftRevision);
+    } catch (err) {
+      setError(err instanceof AppError ? err : new AppError("bad_request", "Could not read or send the file."));
     } finally {
       setBusy(false);
       if (input.current) input.current.value = "";

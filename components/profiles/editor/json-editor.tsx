@@ -3,6 +3,7 @@
 import Editor from "@monaco-editor/react";
 import type * as Monaco from "monaco-editor";
 import { memo, useEffect, useRef } from "react";
+import type { TextEdit } from "@/lib/curve-edit";
 import type { ValidationIssue } from "@/lib/engine";
 import { PROFILE_MODEL_URI, setupMonaco } from "./monaco-setup";
 
@@ -13,6 +14,16 @@ export interface EditorHandle {
   reveal(line: number, column: number): void;
   /** Replaces the text as if typed (undo works); for imports and benchmarks. */
   setText(text: string): void;
+  /** The text as it is in the editor now (newer than React state inside one event). */
+  getText(): string;
+  /**
+   * Applies offset edits (all against the current text) through Monaco, so they join its
+   * own undo stack. With `undoStop` they form one undo step of their own; without, they
+   * join the open step (one drag = one undo step between pushUndoStop calls).
+   */
+  applyEdits(edits: readonly TextEdit[], undoStop: boolean): void;
+  /** Closes the current undo step (start and end of a drag). */
+  pushUndoStop(): void;
 }
 
 function toMarker(issue: ValidationIssue): Monaco.editor.IMarkerData {
@@ -56,7 +67,7 @@ function JsonEditor({
 
   return (
     <Editor
-      height="520px"
+      height="100%"
       language="json"
       path={PROFILE_MODEL_URI}
       value={value}
@@ -72,7 +83,7 @@ function JsonEditor({
         ariaLabel: label,
         quickSuggestions: { strings: true, other: true, comments: false },
       }}
-      loading={<div className="h-[520px] animate-pulse rounded bg-ink-100" aria-label="Loading the editor" />}
+      loading={<div className="h-full animate-pulse rounded bg-ink-100" aria-label="Loading the editor" />}
       onMount={(editor) => {
         editorRef.current = editor;
         const model = editor.getModel();
@@ -87,6 +98,24 @@ function JsonEditor({
             const m = editor.getModel();
             if (!m) return;
             editor.executeEdits("loopkeeper", [{ range: m.getFullModelRange(), text, forceMoveMarkers: true }]);
+          },
+          getText() {
+            return editor.getModel()?.getValue() ?? "";
+          },
+          applyEdits(edits, undoStop) {
+            const m = editor.getModel();
+            if (!m || edits.length === 0) return;
+            const operations = edits.map((e) => {
+              const start = m.getPositionAt(e.start);
+              const end = m.getPositionAt(e.end);
+              return { range: new monaco.Range(start.lineNumber, start.column, end.lineNumber, end.column), text: e.text };
+            });
+            if (undoStop) editor.pushUndoStop();
+            editor.executeEdits("loopkeeper-plot", operations);
+            if (undoStop) editor.pushUndoStop();
+          },
+          pushUndoStop() {
+            editor.pushUndoStop();
           },
         });
       }}

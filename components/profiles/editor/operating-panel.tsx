@@ -1,7 +1,7 @@
 "use client";
 
 import dynamic from "next/dynamic";
-import { useMemo, useState } from "react";
+import { useMemo } from "react";
 import { operatingPoint, type CoolingProfile, type HardwareContext } from "@/lib/engine";
 import { safeLoadSweep } from "@/lib/registry/editor-evaluation";
 import { Field, Input } from "@/components/ui/field";
@@ -10,14 +10,25 @@ const SweepChart = dynamic(() => import("../charts/sweep-chart"), { ssr: false, 
 
 const fmt = (n: number, digits = 1) => n.toFixed(digits);
 
-/** Heat load and ambient in; settled liquid temperature, speeds and noise out (operatingPoint), and a load sweep. */
-export function OperatingPanel({ profile, hw }: { profile: CoolingProfile; hw: HardwareContext }) {
-  const [heatLoadW, setHeatLoadW] = useState("200");
-  const [ambientC, setAmbientC] = useState("25");
+/** The heat load and ambient the operating point is taken at, as typed. */
+export interface OperatingInputs {
+  heatLoadW: string;
+  ambientC: string;
+}
+
+/** The typed inputs as numbers, or the error to show beside each. */
+export function parseOperatingInputs({ heatLoadW, ambientC }: OperatingInputs) {
   const load = Number(heatLoadW);
   const ambient = Number(ambientC);
-  const loadError = !Number.isFinite(load) || load < 0 || load > 2000 ? "Enter a heat load from 0 to 2,000 W." : undefined;
-  const ambientError = !Number.isFinite(ambient) || ambient < -20 || ambient > 60 ? "Enter an ambient from −20 to 60 °C." : undefined;
+  const loadError = heatLoadW.trim() === "" || !Number.isFinite(load) || load < 0 || load > 2000 ? "Enter a heat load from 0 to 2,000 W." : undefined;
+  const ambientError = ambientC.trim() === "" || !Number.isFinite(ambient) || ambient < -20 || ambient > 60 ? "Enter an ambient from −20 to 60 °C." : undefined;
+  return { load, ambient, loadError, ambientError };
+}
+
+/** Heat load and ambient in; settled liquid temperature, speeds and noise out (operatingPoint), and a load sweep. */
+export function OperatingPanel({ profile, hw, inputs, onInputs }: { profile: CoolingProfile; hw: HardwareContext; inputs: OperatingInputs; onInputs: (next: OperatingInputs) => void }) {
+  const { heatLoadW, ambientC } = inputs;
+  const { load, ambient, loadError, ambientError } = parseOperatingInputs(inputs);
   const point = useMemo(() => {
     if (loadError || ambientError) return null;
     try {
@@ -34,10 +45,10 @@ export function OperatingPanel({ profile, hw }: { profile: CoolingProfile; hw: H
     <div className="space-y-3">
       <div className="grid grid-cols-2 gap-3">
         <Field id="op-load" label="Heat load (W)" error={loadError}>
-          <Input id="op-load" type="number" inputMode="decimal" value={heatLoadW} onChange={(e) => setHeatLoadW(e.target.value)} aria-invalid={loadError ? true : undefined} />
+          <Input id="op-load" type="number" inputMode="decimal" value={heatLoadW} onChange={(e) => onInputs({ ...inputs, heatLoadW: e.target.value })} aria-invalid={loadError ? true : undefined} />
         </Field>
         <Field id="op-ambient" label="Ambient (°C)" error={ambientError}>
-          <Input id="op-ambient" type="number" inputMode="decimal" value={ambientC} onChange={(e) => setAmbientC(e.target.value)} aria-invalid={ambientError ? true : undefined} />
+          <Input id="op-ambient" type="number" inputMode="decimal" value={ambientC} onChange={(e) => onInputs({ ...inputs, ambientC: e.target.value })} aria-invalid={ambientError ? true : undefined} />
         </Field>
       </div>
       {point && (

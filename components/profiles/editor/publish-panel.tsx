@@ -1,13 +1,14 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
+import { hex32 } from "@/lib/hex/address";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
-import { publishBody, type VersionView } from "@/lib/api/operations/profile-schemas";
+import { apiCall, operationKey } from "@/lib/api/client";
+import { publishBody } from "@/lib/api/operations/profile-schemas";
+import { getProfile, publishVersion } from "@/lib/api/operations/profiles";
 import type { VersionSuggestion } from "@/lib/engine";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Textarea, describedBy } from "@/components/ui/field";
@@ -41,11 +42,11 @@ export function PublishPanel({
     if (followSuggestion) form.setValue("version", suggested);
   }, [suggested, followSuggestion, form]);
   const publish = useMutation({
-    mutationFn: (v: PublishForm) => apiFetch<{ version: VersionView }>(`/api/v1/profiles/${profileId}/versions`, { method: "POST", json: { ...v, text } }),
+    mutationFn: (v: PublishForm) => apiCall(publishVersion, { params: { id: profileId }, body: { ...v, text } }),
     onSuccess: () => {
       form.reset({ version: suggested, changelog: "", boardRange: form.getValues("boardRange") });
       setFollowSuggestion(true);
-      void qc.invalidateQueries({ queryKey: operationKey("getProfile", { params: { id: profileId } }) });
+      void qc.invalidateQueries({ queryKey: operationKey(getProfile, { params: { id: profileId } }) });
     },
     onError: (err) => showServerIssues(form, err),
   });
@@ -70,7 +71,7 @@ export function PublishPanel({
         <Textarea rows={2} {...describedBy("pub-changelog", errors.changelog?.message)} {...form.register("changelog")} />
       </Field>
       <ErrorNotice error={publish.error} besideFields={fieldsOf(form)} />
-      {publish.isSuccess && <Notice tone="ok" role="status">Published {publish.data.version.version} ({publish.data.version.encodedBytes} B, CRC-32 0x{publish.data.version.crc32.toString(16).toUpperCase().padStart(8, "0")}).</Notice>}
+      {publish.isSuccess && <Notice tone="ok" role="status">Published {publish.data.version.version} ({publish.data.version.encodedBytes} B, CRC-32 {hex32(publish.data.version.crc32)}).</Notice>}
       {blocked && <p className="text-sm text-signal-fault">Fix the errors in the problems list before publishing.</p>}
       <Button type="submit" disabled={publish.isPending || blocked}>Publish version</Button>
     </form>

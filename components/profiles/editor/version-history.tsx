@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { hex32 } from "@/lib/hex/address";
 import type { VersionView } from "@/lib/api/operations/profile-schemas";
 import { EmptyRow, Table, Td, Th } from "@/components/ui/table";
 
@@ -24,7 +25,7 @@ export function VersionHistory({ profileId, versions }: { profileId: string; ver
             <tr key={v.id}>
               <Td className="font-medium tabular-nums">{v.version}</Td>
               <Td><code className="text-xs">{v.boardRange}</code></Td>
-              <Td className="whitespace-nowrap text-xs tabular-nums">{v.encodedBytes} B · CRC 0x{v.crc32.toString(16).toUpperCase().padStart(8, "0")}</Td>
+              <Td className="whitespace-nowrap text-xs tabular-nums">{v.encodedBytes} B · CRC {hex32(v.crc32)}</Td>
               <Td>{v.changelog}</Td>
               <Td className="whitespace-nowrap text-xs">{v.authorName} · {v.createdAt.slice(0, 16).replace("T", " ")}</Td>
               <Td className="whitespace-nowrap text-sm">

@@ -4,10 +4,10 @@ import { useQuery } from "@tanstack/react-query";
 import dynamic from "next/dynamic";
 import Link from "next/link";
 import { memo, useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
-import { apiFetch } from "@/lib/api/client";
-import { operationKey } from "@/lib/api/query-key";
-import type { ProfileDetailView, VersionWithDocumentView } from "@/lib/api/operations/profile-schemas";
-import { suggestNextVersion, type CoolingProfile } from "@/lib/engine";
+import { apiQuery } from "@/lib/api/client";
+import { getProfile, getVersion } from "@/lib/api/operations/profiles";
+import type { ProfileDetailView } from "@/lib/api/operations/profile-schemas";
+import { operatingPoint, suggestNextVersion, type CoolingProfile } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { evaluateEditorText } from "@/lib/registry/editor-evaluation";
 import { Select } from "@/components/ui/field";
@@ -18,15 +18,20 @@ import { Panel } from "@/components/ui/panel";
 import type { EditorHandle } from "./json-editor";
 import { ImportButton } from "./import-button";
 import { MemoryGauge } from "./memory-gauge";
-import { OperatingPanel } from "./operating-panel";
+import { OperatingPanel, parseOperatingInputs, type OperatingInputs } from "./operating-panel";
+import PointsTable from "./points-table";
+import { useCurveEditing } from "./use-curve-editing";
+import LiveCurvePlot, { type OperatingMark } from "../charts/live-curve-plot";
 import { ProblemsList } from "./problems-list";
 import { PublishPanel } from "./publish-panel";
 import { useAutosave } from "./use-autosave";
+import { useLastPlotted } from "./use-last-plotted";
+import { DraftConflict } from "./draft-conflict";
 import { VersionHistory } from "./version-history";
 
-// Monaco and recharts are heavy: they load on this route only, in the browser only.
-const JsonEditor = dynamic(() => import("./json-editor"), { ssr: false, loading: () => <div className="h-[520px] animate-pulse rounded bg-ink-100" aria-label="Loading the editor" /> });
-const CurveChart = dynamic(() => import("../charts/curve-chart"), { ssr: false, loading: () => <div className="h-80 animate-pulse rounded bg-ink-100" /> });
+// Monaco is heavy: it loads on this route only, in the browser only. The live plot is our own
+// small SVG (no chart library on the keystroke path), so it ships with the page.
+const JsonEditor = dynamic(() => import("./json-editor"), { ssr: false, loading: () => <div className="h-full animate-pulse rounded bg-ink-100" aria-label="Loading the editor" /> });
 
 // Panels outside the keystroke path re-render only when their (deferred) inputs change.
 const MemoOperatingPanel = memo(OperatingPanel);
@@ -43,7 +48,7 @@ declare global {
 const NO_ISSUES: never[] = [];
 
 export function ProfileWorkspace({ id, canWrite }: { id: string; canWrite: boolean }) {
-  const q = useQuery({ queryKey: operationKey("getProfile", { params: { id } }), queryFn: () => apiFetch<ProfileDetailView>(`/api/v1/profiles/${id}`) });
+  const q = useQuery(apiQuery(getProfile, { params: { id } }));
   if (q.isPending) return <div className="h-96 animate-pulse rounded-md bg-white shadow-panel" aria-label="Loading the profile" />;
   if (q.isError)
     return (
@@ -68,14 +73,30 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
   // Everything slower (operating point and load sweep, memory, version suggestion)
   // renders in a background pass React may interrupt, so typing stays within a frame. The publish
   // form takes the live text: what is sent is what is on screen (the server checks it again).
+  const plotted = useLastPlotted(evaluation, hw, profile.lastPlottableDraftText);
   const deferredEvaluation = useDeferredValue(evaluation);
   const deferredHw = useDeferredValue(hw);
-  const save = useAutosave(profile.id, text, canWrite);
+  const { state: save, adopt, keepMine } = useAutosave(profile.id, text, canWrite, profile.draftRevision);
+  const replaceText = (t: string) => (editor.current ? editor.current.setText(t) : setText(t));
+  const editing = useCurveEditing(editor, evaluation?.profile, hw, canWrite);
+  const [operatingInputs, setOperatingInputs] = useState<OperatingInputs>({ heatLoadW: "200", ambientC: "25" });
+  // The operating point follows every drag step (one bisection, well under a millisecond).
+  const operating = useMemo(() => {
+    const profileNow = evaluation?.profile;
+    const { load, ambient, loadError, ambientError } = parseOperatingInputs(operatingInputs);
+    if (!profileNow || !hw || loadError || ambientError) return null;
+    try {
+      const p = operatingPoint(profileNow, hw, { heatLoadW: load, ambientC: ambient });
+      return { liquidTempC: p.liquidTempC, fanRpm: p.fans.rpm, soundDbA: p.noise.totalDbA1m, heatLoadW: load, ambientC: ambient };
+    } catch {
+      return null;
+    }
+  }, [evaluation?.profile, hw, operatingInputs]);
+  const operatingMark = useMemo<OperatingMark | null>(() => (operating ? { liquidTempC: operating.liquidTempC, fanRpm: operating.fanRpm } : null), [operating]);
 
   const latest = versions[0];
   const latestDoc = useQuery({
-    queryKey: ["profile-version", latest?.id],
-    queryFn: () => apiFetch<{ version: VersionWithDocumentView }>(`/api/v1/profile-versions/${latest!.id}`),
+    ...apiQuery(getVersion, { params: { id: latest?.id ?? "" } }),
     enabled: Boolean(latest),
   });
   const current = deferredEvaluation?.profile;
@@ -90,6 +111,11 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
     if (performance.getEntriesByName("lk-edit", "mark").length > 0) {
       performance.measure("lk-edit-to-update", "lk-edit");
       performance.clearMarks("lk-edit");
+    }
+    // A drag or key step on the plot → text, markers and plots committed.
+    if (performance.getEntriesByName("lk-drag", "mark").length > 0) {
+      performance.measure("lk-drag-to-update", "lk-drag");
+      performance.clearMarks("lk-drag");
     }
   }, [evaluation]);
 
@@ -132,13 +158,30 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
                 {save.kind === "saved" && "Draft saved"}
                 {save.kind === "error" && <span className="text-signal-fault">Draft not saved: {save.message}</span>}
               </span>
-              <ImportButton profileId={profile.id} onImported={(t) => (editor.current ? editor.current.setText(t) : setText(t))} />
+              <ImportButton
+                profileId={profile.id}
+                onImported={(t, draftRevision) => {
+                  adopt(t, draftRevision);
+                  replaceText(t);
+                }}
+              />
             </>
           ) : (
             <span className="text-ink-600">Read only: your role may not edit profiles.</span>
           )}
         </div>
       </div>
+      {save.kind === "conflict" && (
+        <DraftConflict
+          conflict={save}
+          mine={text}
+          onTakeTheirs={(theirs, draftRevision) => {
+            adopt(theirs, draftRevision);
+            replaceText(theirs);
+          }}
+          onKeepMine={keepMine}
+        />
+      )}
       {!chosen.own && (
         <Notice tone="info" role="status">
           <span data-testid="evaluating-other-cooler">
@@ -151,7 +194,8 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
 
       <div className="grid gap-5 xl:grid-cols-2">
         <div className="space-y-3">
-          <div className="overflow-hidden rounded-md bg-white shadow-panel">
+          {/* The editor takes the window's height (less the header rows above it), never under 28rem. */}
+          <div className="h-[calc(100vh-13rem)] min-h-[28rem] overflow-hidden rounded-md bg-white shadow-panel">
             <JsonEditor
               value={text}
               readOnly={!canWrite}
@@ -165,17 +209,49 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
         </div>
         <div className="space-y-5">
           <Panel title={`Speeds and sound against liquid temperature · ${chosen.cooler.name}`}>
-            {evaluation && evaluation.rows.length > 0 ? (
-              <CurveChart rows={evaluation.rows} limits={limits} criticalTempC={evaluation.profile?.criticalTempC} />
+            {plotted.stale && (
+              <p role="status" className="mb-2 rounded bg-ink-100 px-3 py-2 text-sm text-ink-800" data-testid="stale-plots">
+                {plotted.problem?.range
+                  ? `The JSON has a problem at line ${plotted.problem.range.start.line}, column ${plotted.problem.range.start.column} (see Problems)`
+                  : "The document does not pass the schema (see Problems)"}
+                : these greyed plots are from the last version of the draft that did, not from the text on the left.
+              </p>
+            )}
+            {plotted.evaluation && hw ? (
+              <div className={plotted.stale ? "pointer-events-none [&_svg]:opacity-40 [&_svg]:grayscale" : undefined} aria-hidden={plotted.stale || undefined}>
+                <LiveCurvePlot
+                  rows={plotted.evaluation.rows}
+                  limits={limits}
+                  profile={plotted.evaluation.profile}
+                  flashed={plotted.evaluation.flashed}
+                  hw={hw}
+                  operating={plotted.stale ? null : operatingMark}
+                  editing={plotted.stale ? null : editing}
+                />
+              </div>
             ) : (
               <p className="text-sm text-ink-600">The plots appear once the document passes the schema.</p>
             )}
-            <p className="mt-2 text-xs text-ink-600">Solid: as authored. Dashed: as the board runs it after storing in 0.5 °C / 0.5 % steps.</p>
+            <p className="mt-2 text-xs text-ink-600">
+              Solid: as authored. Dashed: as the board runs it after storing in 0.5 °C / 0.5 % steps; a dashed ring marks where a point is stored when that differs.
+              {editing && " Drag a point or use the arrow keys (Shift: 5 steps); Delete removes it; double-click the plot to add one. Every change is written into the JSON and undone with Ctrl+Z in the editor."}
+            </p>
+            <p role="status" className="mt-1 text-sm" data-testid="operating-readout">
+              {operating && `At ${operating.heatLoadW} W and ${operating.ambientC} °C ambient the liquid settles at ${operating.liquidTempC.toFixed(1)} °C; about ${operating.soundDbA.toFixed(1)} dB(A) at 1 m (estimate).`}
+            </p>
+            <p role="status" className="mt-1 text-sm font-medium text-signal-fault" data-testid="edit-notice">
+              {editing?.notice?.text}
+            </p>
           </Panel>
+          {evaluation?.profile && hw && (
+            <Panel title="Points">
+              <PointsTable profile={evaluation.profile} hw={hw} editing={editing} />
+            </Panel>
+          )}
           {deferredEvaluation?.profile && deferredHw && (
             <>
               <Panel title={`Operating point · ${deferredHw.name}`}>
-                <MemoOperatingPanel profile={deferredEvaluation.profile} hw={deferredHw} />
+                <MemoOperatingPanel profile={deferredEvaluation.profile} hw={deferredHw} inputs={operatingInputs} onInputs={setOperatingInputs} />
               </Panel>
               <Panel title="Memory">
                 <MemoMemoryGauge profile={deferredEvaluation.profile} revisions={revisions} boardRange={latest?.boardRange ?? null} />

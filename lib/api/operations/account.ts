@@ -1,6 +1,7 @@
 import { z } from "zod";
-import { defineOperation } from "../operation";
+import { defineOperation, noContent } from "../operation";
 import { ROLES } from "@/lib/auth/roles";
+import { timestamp } from "./timestamp";
 
 export const idParams = z.strictObject({ id: z.uuid("Not a valid id.") });
 
@@ -39,6 +40,7 @@ export const changePassword = defineOperation({
   tag: "Account",
   access: "signed_in",
   body: changePasswordBody,
+  response: noContent,
   successStatus: 204,
 });
 
@@ -46,10 +48,10 @@ export const tokenSchema = z.object({
   id: z.string(),
   name: z.string(),
   tokenPrefix: z.string(),
-  expiresAt: z.string(),
-  revokedAt: z.string().nullable(),
-  lastUsedAt: z.string().nullable(),
-  createdAt: z.string(),
+  expiresAt: timestamp,
+  revokedAt: timestamp.nullable(),
+  lastUsedAt: timestamp.nullable(),
+  createdAt: timestamp,
 });
 export type TokenView = z.infer<typeof tokenSchema>;
 

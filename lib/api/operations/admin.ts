@@ -2,14 +2,15 @@ import { z } from "zod";
 import { defineOperation } from "../operation";
 import { ROLES } from "@/lib/auth/roles";
 import { idParams } from "./account";
+import { timestamp } from "./timestamp";
 
 export const userSchema = z.object({
   id: z.string(),
   email: z.string(),
   name: z.string(),
   role: z.enum(ROLES),
-  disabledAt: z.string().nullable(),
-  createdAt: z.string(),
+  disabledAt: timestamp.nullable(),
+  createdAt: timestamp,
 });
 export type UserView = z.infer<typeof userSchema>;
 
@@ -74,6 +75,7 @@ export type AuditQuery = z.infer<typeof auditQuery>;
 
 export const auditEventSchema = z.object({
   id: z.number(),
+  actorUserId: z.string().nullable(),
   actorLabel: z.string(),
   action: z.string(),
   entityType: z.string(),
@@ -81,7 +83,7 @@ export const auditEventSchema = z.object({
   before: z.unknown(),
   after: z.unknown(),
   requestId: z.string().nullable(),
-  createdAt: z.string(),
+  createdAt: timestamp,
 });
 export type AuditEventView = z.infer<typeof auditEventSchema>;
 

@@ -1,6 +1,8 @@
 import { z } from "zod";
 import { isValidVersion } from "@/lib/versioning/semver-helpers";
-import { boardRangeSchema } from "./registry-schemas";
+import { boardRangeSchema, componentFieldsView } from "./registry-schemas";
+import type { CoolingProfile } from "@/lib/engine";
+import type { ProfileChange } from "@/lib/support/curve-diff";
 
 /** Largest profile document accepted anywhere (draft, import, publish), bytes. */
 export const MAX_PROFILE_BYTES = 256 * 1024;
@@ -18,6 +20,8 @@ export const saveDraftBody = z.strictObject({
     .max(MAX_PROFILE_BYTES, "The draft is larger than 256 KiB.")
     // The draft is stored as typed, and PostgreSQL text cannot hold U+0000.
     .refine((t) => !t.includes("\u0000"), "The draft contains a NUL character (U+0000); remove it (in JSON write it as \\u0000 if you mean it)."),
+  /** The draft revision this text was based on (from the profile or the last save); a stale one gets 409. */
+  baseRevision: z.number("Send the draft revision your text is based on.").int().min(0),
 });
 export type SaveDraftBody = z.infer<typeof saveDraftBody>;
 
@@ -62,18 +66,21 @@ export type VersionView = z.infer<typeof versionView>;
 export const versionWithDocumentView = versionView.extend({ document: z.unknown() });
 export type VersionWithDocumentView = z.infer<typeof versionWithDocumentView>;
 
-const componentFields = z.object({
-  name: z.string(),
-  kind: z.enum(["fan", "pump"]),
-  minDutyPct: z.number(),
-  rpmAtMinDuty: z.number(),
-  maxRpm: z.number(),
-  tachPulsesPerRev: z.number(),
-  refSoundDbA: z.number(),
-  refRpm: z.number(),
-  soundExponent: z.number(),
-  flowAtMaxRpmLpm: z.number().nullable(),
-});
+const componentFields = componentFieldsView;
+
+/** A cooling profile document; its full shape is schemas/cooling-profile.schema.json, checked on publish. */
+export const coolingProfileDocument = z
+  .custom<CoolingProfile>((v) => typeof v === "object" && v !== null && !Array.isArray(v))
+  .meta({ description: "A cooling profile document as published; its shape is the cooling-profile JSON Schema (schemas/cooling-profile.schema.json).", type: "object" });
+
+export const profileChangeView = z.object({
+  profileId: z.string(),
+  profileName: z.string(),
+  fromVersion: z.string().nullable(),
+  toVersion: z.string().nullable(),
+  kind: z.enum(["changed", "unchanged", "added", "removed"]),
+  changes: z.array(z.string()),
+}) satisfies z.ZodType<ProfileChange>;
 
 /** Everything the editor needs in one answer: the profile, its cooler's parts, the board's revisions, the versions. */
 export const profileDetailView = z.object({
@@ -83,7 +90,11 @@ export const profileDetailView = z.object({
     description: z.string(),
     ownerName: z.string(),
     draftText: z.string().nullable(),
+    /** Set only while draftText does not pass the schema: the last draft that did, for greyed plots. */
+    lastPlottableDraftText: z.string().nullable(),
     draftUpdatedAt: z.string().nullable(),
+    /** Send it back as baseRevision when saving the draft. */
+    draftRevision: z.number(),
   }),
   cooler: z.object({ id: z.string(), name: z.string(), fanCount: z.number(), radiatorKPerWAtMinFan: z.number(), radiatorKPerWAtMaxFan: z.number(), boardModelName: z.string() }),
   fan: componentFields,

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { defineOperation } from "../operation";
+import { defineOperation, fileResponse } from "../operation";
 import { idParams } from "./account";
 import { listQuery, pageOf } from "./registry-schemas";
 import {
@@ -55,13 +55,13 @@ export const saveDraft = defineOperation({
   id: "saveDraft",
   method: "PUT",
   path: "/api/v1/profiles/{id}/draft",
-  summary: "Autosave the working draft (may be unfinished)",
+  summary: "Autosave the working draft (may be unfinished); 409 when someone saved since baseRevision",
   tag: "Profiles",
   access: "registry:write",
   params: idParams,
   body: saveDraftBody,
   maxBodyBytes: MAX_PROFILE_BYTES + 1024,
-  response: z.object({ draftUpdatedAt: z.string() }),
+  response: z.object({ draftUpdatedAt: z.string(), draftRevision: z.number() }),
 });
 
 export const importDraft = defineOperation({
@@ -73,7 +73,7 @@ export const importDraft = defineOperation({
   access: "registry:write",
   params: idParams,
   rawBody: { contentTypes: ["application/json"], maxBytes: MAX_PROFILE_BYTES },
-  response: z.object({ draftUpdatedAt: z.string(), warnings: z.number() }),
+  response: z.object({ draftUpdatedAt: z.string(), draftRevision: z.number(), warnings: z.number() }),
 });
 
 export const listVersions = defineOperation({
@@ -120,4 +120,5 @@ export const downloadVersion = defineOperation({
   tag: "Profiles",
   access: "read",
   params: idParams,
+  response: fileResponse(["application/json"], "The version's profile document as a .json file"),
 });

@@ -1,5 +1,7 @@
 import { z } from "zod";
 import { isValidRange, isValidVersion } from "@/lib/versioning/semver-helpers";
+import { timestamp } from "./timestamp";
+import type { ComponentFields, CoolerFields, RevisionFields } from "@/lib/registry/hardware-context";
 
 /** Request and view schemas of the hardware registry; forms use the same ones as the API. */
 
@@ -35,7 +37,8 @@ export const componentView = z.object({
   refRpm: z.number(),
   soundExponent: z.number(),
   flowAtMaxRpmLpm: z.number().nullable(),
-  createdAt: z.string(),
+  createdAt: timestamp,
+  updatedAt: timestamp,
 });
 export type ComponentView = z.infer<typeof componentView>;
 
@@ -133,3 +136,29 @@ export const listQuery = <S extends readonly [string, ...string[]]>(sorts: S) =>
   });
 
 export const pageOf = <T extends z.ZodType>(item: T) => z.object({ items: z.array(item), total: z.number(), page: z.number(), pageSize: z.number() });
+
+/** A fan or pump's figures as the engine reads them. */
+export const componentFieldsView = z.object({
+  name: z.string(),
+  kind: z.enum(["fan", "pump"]),
+  minDutyPct: z.number(),
+  rpmAtMinDuty: z.number(),
+  maxRpm: z.number(),
+  tachPulsesPerRev: z.number(),
+  refSoundDbA: z.number(),
+  refRpm: z.number(),
+  soundExponent: z.number(),
+  flowAtMaxRpmLpm: z.number().nullable(),
+}) satisfies z.ZodType<ComponentFields>;
+
+export const coolerFieldsView = z.object({ name: z.string(), fanCount: z.number(), radiatorKPerWAtMinFan: z.number(), radiatorKPerWAtMaxFan: z.number() }) satisfies z.ZodType<CoolerFields>;
+
+export const revisionFieldsView = z.object({
+  revision: z.string(),
+  memoryBytes: z.number(),
+  baseAddress: z.number(),
+  slotCount: z.number(),
+  maxPointsPerCurve: z.number(),
+  pwmFrequencyHz: z.number(),
+  tachPulsesPerRev: z.number(),
+}) satisfies z.ZodType<RevisionFields>;

@@ -13,7 +13,7 @@ import {
   listQuery,
   pageOf,
 } from "./registry-schemas";
-import { compatibilityView, type CompatibilityView } from "./profile-schemas";
+import { compatibilityView } from "./profile-schemas";
 
 export const componentSorts = ["name", "kind", "maxRpm", "minDutyPct", "refSoundDbA"] as const;
 export const componentsQuery = listQuery(componentSorts).extend({ kind: z.enum(["fan", "pump"]).optional() });
@@ -54,9 +54,15 @@ export const updateComponent = defineOperation({
   response: z.object({ component: componentView }),
 });
 
+/** The first hundred fans and pumps: what pickers offer. */
+export const ALL_COMPONENTS = { pageSize: 100, sort: "name" } as const satisfies z.input<typeof componentsQuery>;
+
 export const coolerSorts = ["name", "radiatorMm", "fanCount"] as const;
 export const coolerModelsQuery = listQuery(coolerSorts);
 export type CoolerModelsQuery = z.infer<typeof coolerModelsQuery>;
+
+/** The first hundred cooler models by name: what pickers offer. */
+export const ALL_COOLERS = { pageSize: 100, sort: "name" } as const satisfies z.input<typeof coolerModelsQuery>;
 
 export const listCoolerModels = defineOperation({
   id: "listCoolerModels",
@@ -140,6 +146,19 @@ export const createBoardRevision = defineOperation({
   successStatus: 201,
 });
 
+export const signingKeyView = z.object({ keyId: z.string(), publicKeyPem: z.string(), validFrom: z.string(), validUntil: z.string().nullable() });
+
+export const listBoardSigningKeys = defineOperation({
+  id: "listBoardSigningKeys",
+  method: "GET",
+  path: "/api/v1/board-models/{id}/signing-keys",
+  summary: "The Ed25519 public keys a board model's bank signatures verify with, and when each was in use (rotated keys stay listed)",
+  tag: "Registry",
+  access: "read",
+  params: idParams,
+  response: z.object({ keys: z.array(signingKeyView) }),
+});
+
 export const getBoardRevision = defineOperation({
   id: "getBoardRevision",
   method: "GET",
@@ -162,4 +181,4 @@ export const updateBoardRevision = defineOperation({
   response: z.object({ revision: boardRevisionView }),
 });
 
-export type BoardRevisionDetail = { revision: z.infer<typeof boardRevisionView>; boardModelName: string; compatibility: CompatibilityView };
+export type BoardRevisionDetail = z.infer<typeof getBoardRevision.response>;

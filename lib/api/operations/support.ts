@@ -1,14 +1,15 @@
 import { z } from "zod";
-import { defineOperation } from "../operation";
+import { defineOperation, fileResponse } from "../operation";
 import { lotInput } from "@/lib/lots/input";
+import { STAGE_ORDER } from "@/lib/release/stages";
+import type { DumpReport } from "@/lib/engine";
 import { idParams } from "./account";
-import type { ComponentFields, CoolerFields, RevisionFields } from "@/lib/registry/hardware-context";
-import type { ProfileChange } from "@/lib/support/curve-diff";
-import type { CoolingProfile } from "@/lib/engine";
+import { coolingProfileDocument, profileChangeView } from "./profile-schemas";
+import { componentFieldsView, coolerFieldsView, revisionFieldsView } from "./registry-schemas";
 
 export const lotBody = lotInput;
 
-const stage = z.enum(["draft", "review", "validation", "pilot", "production", "withdrawn"]);
+const stage = z.enum(STAGE_ORDER);
 
 export const lotView = z.object({
   id: z.string(),
@@ -108,28 +109,30 @@ export const importLots = defineOperation({
 
 export const lookupQuery = z.strictObject({ serial: z.string().max(64, "A serial is at most 17 characters.") });
 
-export interface LookupSlot {
-  slotIndex: number;
-  profileVersionId: string;
-  profileId: string;
-  profileName: string;
-  version: string;
-  document: CoolingProfile;
-  cooler: CoolerFields;
-  fan: ComponentFields;
-  pump: ComponentFields;
-}
+export const lookupSlotView = z.object({
+  slotIndex: z.number(),
+  profileVersionId: z.string(),
+  profileId: z.string(),
+  profileName: z.string(),
+  version: z.string(),
+  document: coolingProfileDocument,
+  cooler: coolerFieldsView,
+  fan: componentFieldsView,
+  pump: componentFieldsView,
+});
+export type LookupSlot = z.infer<typeof lookupSlotView>;
 
-export interface LookupResult {
-  serial: string;
-  lot: { id: string; lotCode: string; serialFrom: string; serialTo: string; producedOn: string; line: string };
-  boardModel: { id: string; serialPrefix: string };
-  boardRevision: RevisionFields & { id: string };
-  build: { id: string; version: string; stage: z.infer<typeof stage>; revisionRange: string; withdrawnReason: string | null };
-  slots: LookupSlot[];
-  pump: { name: string | null; pulsesPerRev: number; source: "registry" | "default" };
-  newerBuilds: { id: string; version: string; changes: ProfileChange[] }[];
-}
+export const lookupResultView = z.object({
+  serial: z.string(),
+  lot: z.object({ id: z.string(), lotCode: z.string(), serialFrom: z.string(), serialTo: z.string(), producedOn: z.string(), line: z.string() }),
+  boardModel: z.object({ id: z.string(), serialPrefix: z.string() }),
+  boardRevision: revisionFieldsView.extend({ id: z.string() }),
+  build: z.object({ id: z.string(), version: z.string(), stage, revisionRange: z.string(), withdrawnReason: z.string().nullable() }),
+  slots: z.array(lookupSlotView),
+  pump: z.object({ name: z.string().nullable(), pulsesPerRev: z.number(), source: z.enum(["registry", "default"]) }),
+  newerBuilds: z.array(z.object({ id: z.string(), version: z.string(), changes: z.array(profileChangeView) })),
+});
+export type LookupResult = z.infer<typeof lookupResultView>;
 
 export const lookupSerial = defineOperation({
   id: "lookupSerial",
@@ -139,6 +142,7 @@ export const lookupSerial = defineOperation({
   tag: "Support",
   access: "support",
   query: lookupQuery,
+  response: lookupResultView,
 });
 
 export const recentLookupsView = z.object({ items: z.array(z.object({ serial: z.string(), found: z.boolean(), createdAt: z.string() })) });
@@ -158,6 +162,9 @@ export const MAX_DUMP_BYTES = 256 * 1024;
 /** The dump report (lib/bank/dump-report.ts): the command line and this operation give the same one. */
 export type { DumpReport as DumpIdentifyResult, SlotReport as DumpSlotView } from "@/lib/engine";
 
+/** The dump report as the engine builds it; described loosely in OpenAPI until it has its own schema. */
+export const dumpIdentifyView = z.custom<DumpReport>((v) => typeof v === "object" && v !== null).meta({ type: "object", description: "The dump report: file, CRC, slots matched against the registry, findings." });
+
 export const identifyDump = defineOperation({
   id: "identifyDump",
   method: "POST",
@@ -166,6 +173,7 @@ export const identifyDump = defineOperation({
   tag: "Support",
   access: "support",
   rawBody: { contentTypes: ["application/octet-stream", "text/plain", "multipart/form-data"], maxBytes: MAX_DUMP_BYTES },
+  response: dumpIdentifyView,
 });
 
 export const withdrawnBuildView = z.object({
@@ -214,4 +222,5 @@ export const exportShippedCsv = defineOperation({
   tag: "Support",
   access: "support",
   params: idParams,
+  response: fileResponse(["text/csv"], "One row per lot that shipped with the build"),
 });

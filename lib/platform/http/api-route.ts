@@ -3,15 +3,14 @@ import { randomUUID } from "node:crypto";
 import { NextResponse, type NextRequest } from "next/server";
 import { z } from "zod";
 import { AppError, type FieldIssue } from "@/lib/api/errors";
-import type { Operation } from "@/lib/api/operation";
+import { isJsonResponse, type HandlerResult, type InputOf, type Operation, type ResponseSpec } from "@/lib/api/operation";
 import { can } from "@/lib/auth/roles";
 import { getSessionActor, getTokenActor, type Actor } from "@/lib/platform/auth/actor";
-import { getDb } from "@/db/client";
-import { hitRateLimit, pruneRateLimits } from "@/db/rate-limit";
 import { fromDbError } from "@/lib/platform/http/db-errors";
 import { env } from "@/lib/platform/env";
 import { logger } from "@/lib/platform/log";
 import { readCappedBody } from "@/lib/platform/http/raw-body";
+import { enforceRequestBudget } from "@/lib/platform/http/rate-limit";
 
 const DEFAULT_MAX_BODY = 256 * 1024;
 
@@ -23,8 +22,6 @@ export interface HandlerContext<Q, B, P> {
   params: P;
   requestId: string;
 }
-
-type Infer<T> = T extends z.ZodType ? z.infer<T> : undefined;
 
 export function zodIssues(error: z.ZodError): FieldIssue[] {
   return error.issues.map((i) => ({ path: i.path.length ? "/" + i.path.map(String).join("/") : "", message: i.message }));
@@ -62,17 +59,6 @@ function checkOrigin(req: NextRequest): void {
   if (!allowed.has(origin)) throw new AppError("forbidden", "Cross-site requests are not accepted.");
 }
 
-/** Per-token (machine clients) or per-account (people) request budget; 429 with Retry-After past it. */
-async function enforceRateLimit(actor: Actor): Promise<void> {
-  const { count, retryAfterSec } = actor.rate ?? (await hitRateLimit(getDb(), { key: `user:${actor.userId}` }));
-  if (Math.random() < 0.001) void pruneRateLimits(getDb()).catch(() => undefined);
-  if (count > env().API_RATE_LIMIT_PER_MIN) {
-    throw new AppError("rate_limited", `Too many requests: at most ${env().API_RATE_LIMIT_PER_MIN} a minute. Try again in ${retryAfterSec} s.`, {
-      headers: { "retry-after": String(retryAfterSec) },
-    });
-  }
-}
-
 export async function resolveActor(req: NextRequest): Promise<Actor | null> {
   const auth = req.headers.get("authorization");
   if (auth) return getTokenActor(auth);
@@ -94,9 +80,9 @@ export function errorResponse(err: unknown, requestId: string): NextResponse {
  * token; 401), which role (403), inputs parsed with the operation's zod schemas (400/413/415/422),
  * typed errors mapped to statuses, unknown errors logged and answered without detail.
  */
-export function apiRoute<Q extends z.ZodType, B extends z.ZodType, P extends z.ZodType>(
-  op: Operation<Q, B, P>,
-  handler: (ctx: HandlerContext<Infer<Q>, Infer<B>, Infer<P>>) => Promise<unknown>,
+export function apiRoute<Q extends z.ZodType | undefined, B extends z.ZodType | undefined, P extends z.ZodType | undefined, R extends ResponseSpec>(
+  op: Operation<Q, B, P, R>,
+  handler: (ctx: HandlerContext<InputOf<Q>, InputOf<B>, InputOf<P>>) => Promise<HandlerResult<R>>,
 ) {
   return async (req: NextRequest, routeCtx: { params: Promise<Record<string, string | string[]>> }): Promise<Response> => {
     const requestId = req.headers.get("x-request-id")?.slice(0, 64) || randomUUID();
@@ -111,7 +97,7 @@ export function apiRoute<Q extends z.ZodType, B extends z.ZodType, P extends z.Z
           throw new AppError("forbidden", `Your role (${actor.role}) may not do this.`);
         }
         if (actor.via === "session" && op.method !== "GET") checkOrigin(req);
-        await enforceRateLimit(actor);
+        await enforceRequestBudget(actor);
       }
       const rawParams: unknown = (await routeCtx?.params) ?? {};
       const params = op.params ? parseWith(op.params, rawParams, "path") : undefined;
@@ -120,19 +106,25 @@ export function apiRoute<Q extends z.ZodType, B extends z.ZodType, P extends z.Z
       const result = await handler({
         req,
         actor: actor as Actor,
-        query: query as Infer<Q>,
-        body: body as Infer<B>,
-        params: params as Infer<P>,
+        query: query as InputOf<Q>,
+        body: body as InputOf<B>,
+        params: params as InputOf<P>,
         requestId,
       });
-      if (result instanceof Response) {
-        status = result.status;
-        result.headers.set("x-request-id", requestId);
-        return result;
+      if (!isJsonResponse(op.response)) {
+        if (result instanceof Response) {
+          status = result.status;
+          result.headers.set("x-request-id", requestId);
+          return result;
+        }
+        status = 204;
+        return new NextResponse(null, { status, headers: { "x-request-id": requestId } });
       }
       status = op.successStatus ?? 200;
       if (status === 204) return new NextResponse(null, { status, headers: { "x-request-id": requestId } });
-      return NextResponse.json(result, { status, headers: { "x-request-id": requestId } });
+      // The declared schema shapes the body: Dates become ISO strings and columns the
+      // operation does not declare are left out, so the answer is what the contract says.
+      return NextResponse.json(op.response.parse(result), { status, headers: { "x-request-id": requestId } });
     } catch (err) {
       const res = errorResponse(err, requestId);
       status = res.status;

@@ -20,6 +20,7 @@ export const CONSTRAINT_MESSAGES: Record<string, { message: string; path?: strin
   },
   cooler_models_fan_component_id_components_id_fk: { message: "The chosen fan no longer exists; pick another.", path: "/fanComponentId" },
   cooler_models_pump_component_id_components_id_fk: { message: "The chosen pump no longer exists; pick another.", path: "/pumpComponentId" },
+  build_reviews_build_reviewer_key: { message: "You already reviewed this build; one review per reviewer. To change your verdict, use \"Change my verdict\"." },
   cooler_models_board_model_id_board_models_id_fk: { message: "The chosen board model no longer exists; pick another.", path: "/boardModelId" },
 };
 

@@ -2,41 +2,53 @@ import "server-only";
 import { QueryClient, dehydrate, type DehydratedState } from "@tanstack/react-query";
 import { forbidden, notFound } from "next/navigation";
 import type { z } from "zod";
+import { operationKey, operationUrl, type CallInput } from "@/lib/api/client";
 import { AppError } from "@/lib/api/errors";
-import type { Operation } from "@/lib/api/operation";
-import { operationKey } from "@/lib/api/query-key";
+import { isJsonResponse, type HandlerResult, type InputOf, type Operation, type ResponseSpec } from "@/lib/api/operation";
 import { can } from "@/lib/auth/roles";
 import type { Actor } from "@/lib/platform/auth/actor";
 
-type Parsed<T> = T extends z.ZodType ? z.output<T> : undefined;
-
-/** One answer a page loads on the server: the operation it stands for, its raw inputs, and the read behind it. */
+/** One answer a page loads on the server: the operation it stands for, its query key, and the read behind it. */
 export interface ScreenQuery {
   op: Operation;
   key: readonly unknown[];
   run: () => Promise<unknown> | null;
 }
 
+type AnyOperation = Operation<z.ZodType | undefined, z.ZodType | undefined, z.ZodType | undefined, ResponseSpec>;
+type ParsedInputs<O> = O extends Operation<infer Q, infer _B, infer P, ResponseSpec> ? { params: InputOf<P>; query: InputOf<Q> } : never;
+type LoadResult<O> = O extends Operation<infer _Q, infer _B, infer _P, infer R> ? HandlerResult<R> : never;
+
+/** Path parameters as the route handler receives them: strings. */
+function pathStrings(params: unknown): Record<string, string> {
+  const out: Record<string, string> = {};
+  if (typeof params !== "object" || params === null) return out;
+  for (const [k, v] of Object.entries(params)) if (v !== undefined && v !== null) out[k] = typeof v === "object" ? JSON.stringify(v) : String(v as string | number | boolean);
+  return out;
+}
+
 /**
- * Names an answer the page puts in the browser's cache: the operation (for its id, access and
- * input schemas), the inputs as the browser would send them (path parameters, query strings),
- * and `load`, the same use-case or query function the operation's route handler calls. The
- * inputs go through the operation's own schemas, so defaults and coercion match the API's.
+ * Names an answer the page puts in the browser's cache: the operation, its inputs exactly as
+ * the screen's `apiQuery(op, input)` passes them (so the query key is the same), and `load`,
+ * the use case the operation's route handler calls. The inputs travel the way the browser's
+ * request would (through the operation's URL) and are parsed by the operation's own schemas,
+ * so defaults and coercion match the API's.
  */
-export function screenQuery<Q extends z.ZodType, B extends z.ZodType, P extends z.ZodType>(
-  op: Operation<Q, B, P>,
-  input: { params?: Record<string, string>; query?: Record<string, string> },
-  load: (parsed: { params: Parsed<P>; query: Parsed<Q> }) => Promise<unknown>,
-): ScreenQuery {
+export function screenQuery<O extends AnyOperation>(op: O, input: CallInput<O>, load: (parsed: ParsedInputs<O>) => Promise<LoadResult<O>>): ScreenQuery {
+  const { params, query } = input as { params?: unknown; query?: unknown };
   return {
     op,
-    key: operationKey(op, input),
+    key: operationKey(op, { params, query }),
     run: () => {
-      const params = op.params ? op.params.safeParse(input.params ?? {}) : undefined;
-      const query = op.query ? op.query.safeParse(input.query ?? {}) : undefined;
+      const url = new URL(operationUrl(op, { params, query }), "http://screen.invalid");
+      const parsedParams = op.params ? op.params.safeParse(pathStrings(params)) : undefined;
+      const parsedQuery = op.query ? op.query.safeParse(Object.fromEntries(url.searchParams)) : undefined;
       // Inputs the API would refuse: leave the answer to the browser, which shows the refusal.
-      if (params?.success === false || query?.success === false) return null;
-      return load({ params: params?.data as Parsed<P>, query: query?.data as Parsed<Q> });
+      if (parsedParams?.success === false || parsedQuery?.success === false) return null;
+      return load({ params: parsedParams?.data, query: parsedQuery?.data } as ParsedInputs<O>).then((result) =>
+        // The body the route would send: shaped by the declared response schema.
+        isJsonResponse(op.response) ? op.response.parse(result) : result,
+      );
     },
   };
 }

@@ -1,12 +1,13 @@
 import "server-only";
 import type { Executor } from "@/db/client";
-import { listBuildSlots, listRevisions, loadSlotFacts } from "@/db/builds";
+import { listRevisionsOfModel } from "@/db/boards";
+import { listBuildSlots, loadSlotFacts } from "@/db/builds";
 import { checkBuild } from "@/lib/release/build-check";
 
 /** The engine's verdict on a set of slots for a board model and revision range, from the registry's rows. */
 export async function checkSlots(db: Executor, input: { boardModelId: string; revisionRange: string; profileVersionIds: string[] }) {
   const [revisions, slots] = await Promise.all([
-    listRevisions(db, { boardModelId: input.boardModelId }),
+    listRevisionsOfModel(db, { boardModelId: input.boardModelId }),
     loadSlotFacts(db, { ids: input.profileVersionIds, boardModelId: input.boardModelId }),
   ]);
   return { check: checkBuild({ revisionRange: input.revisionRange, revisions, slots }), slots, revisions };

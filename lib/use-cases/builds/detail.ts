@@ -1,9 +1,10 @@
 import "server-only";
 import type { Executor } from "@/db/client";
-import { getBuild, listBuildSlots, listRevisions, listReviews, listTransitions } from "@/db/builds";
+import { listRevisionsOfModel } from "@/db/boards";
+import { getBuild, listBuildSlots, listReviews, listTransitions } from "@/db/builds";
 import { getUploads } from "@/db/uploads";
 import { AppError } from "@/lib/api/errors";
-import { countingApprovers, openChangeRequests } from "@/lib/release/approvals";
+import { countingApprovers, openChangeRequests, reviewStanding } from "@/lib/release/approvals";
 import { satisfiesRange } from "@/lib/engine";
 import { env } from "@/lib/platform/env";
 import { measurementComparison } from "@/lib/use-cases/builds/measurements";
@@ -16,11 +17,11 @@ export async function buildDetail(db: Executor, { id }: { id: string }) {
     listBuildSlots(db, { buildId: id }),
     listReviews(db, { buildId: id }),
     listTransitions(db, { buildId: id }),
-    listRevisions(db, { boardModelId: build.boardModelId }),
+    listRevisionsOfModel(db, { boardModelId: build.boardModelId }),
     getUploads(db, { ids: [build.firmwareUploadId, build.labReportUploadId, build.measurementsUploadId].filter((x): x is string => !!x) }),
   ]);
   const byId = new Map(uploads.map((u) => [u.id, u]));
-  const excluded = new Set([build.authorUserId, ...slots.map((s) => s.authorUserId)]);
+  const authorship = { buildAuthorUserId: build.authorUserId, profileAuthorUserIds: new Set(slots.map((s) => s.authorUserId)) };
   return {
     build,
     slots: slots.map(({ authorUserId: _a, profileId: _p, coolerModelId: _c, ...s }) => s),
@@ -30,8 +31,19 @@ export async function buildDetail(db: Executor, { id }: { id: string }) {
       labReport: (build.labReportUploadId && byId.get(build.labReportUploadId)) || null,
       measurements: (build.measurementsUploadId && byId.get(build.measurementsUploadId)) || null,
     },
-    reviews,
-    approvals: { counting: countingApprovers(reviews, excluded).length, required: env().REQUIRED_APPROVALS, openChangeRequests: openChangeRequests(reviews) },
+    // Each review says whether it counts now and, if not, why: the same rule the gate applies.
+    reviews: reviews.map((r) => ({
+      id: r.id,
+      reviewerUserId: r.reviewerUserId,
+      reviewerName: r.reviewerName,
+      verdict: r.verdict,
+      comment: r.comment,
+      resolvedAt: r.resolvedAt,
+      createdAt: r.createdAt,
+      updatedAt: r.updatedAt,
+      standing: reviewStanding(r, authorship),
+    })),
+    approvals: { counting: countingApprovers(reviews, authorship).length, required: env().REQUIRED_APPROVALS, openChangeRequests: openChangeRequests(reviews) },
     transitions,
     comparison: await measurementComparison(db, build),
   };

@@ -1,58 +1,25 @@
 import "server-only";
 import { getDb, type Tx } from "@/db/client";
 import type { AuditActor } from "@/db/audit";
-import { addReview, transitionBuild } from "@/db/build-stages";
-import { getBuild, listBuildSlots, listReviews } from "@/db/builds";
+import { addReview, changeReview, transitionBuild } from "@/db/build-stages";
+import { getBuild } from "@/db/builds";
 import { emailsByRole } from "@/db/mail";
 import type { Build, BuildStage } from "@/db/schema";
 import { AppError } from "@/lib/api/errors";
 import { can, type Role } from "@/lib/auth/roles";
-import { approvalGateIssues } from "@/lib/release/approvals";
+import { reviewerEligibility } from "@/lib/release/approvals";
+import { gateIssues } from "@/lib/release/gates";
 import { releaseMail, reviewRequestedMail, verdictMail, type BuildMailFacts } from "@/lib/release/mail";
-import { soundGateIssues } from "@/lib/release/measurements";
 import { capabilityFor } from "@/lib/release/transitions";
 import { env } from "@/lib/platform/env";
 import { kickMailSender } from "@/lib/platform/mail/sender";
-import { checkStoredBuild } from "@/lib/use-cases/builds/check";
-import { measurementComparison } from "@/lib/use-cases/builds/measurements";
+import { buildAuthorship, gateRequirements } from "./gate";
 
 type Mover = AuditActor & { userId: string; role: Role; name: string };
 
 async function mailFacts(tx: Tx, build: Build, actorName: string): Promise<BuildMailFacts> {
   const summary = await getBuild(tx, { id: build.id });
   return { buildId: build.id, boardModel: summary?.boardModel ?? "Board", version: build.version, actorName, baseUrl: env().NEXTAUTH_URL };
-}
-
-async function profileAuthorIds(tx: Tx, buildId: string): Promise<string[]> {
-  return (await listBuildSlots(tx, { buildId })).map((s) => s.authorUserId);
-}
-
-/** The gate of each stage, judged inside the transition's transaction with the build locked. */
-async function gateIssues(tx: Tx, build: Build, to: BuildStage, mover: Mover): Promise<string[]> {
-  switch (to) {
-    case "review": {
-      const { check } = await checkStoredBuild(tx, build);
-      return check.ok ? [] : check.issues;
-    }
-    case "validation": {
-      const excluded = new Set([build.authorUserId, ...(await profileAuthorIds(tx, build.id))]);
-      return approvalGateIssues(await listReviews(tx, { buildId: build.id }), excluded, env().REQUIRED_APPROVALS);
-    }
-    case "pilot": {
-      const issues: string[] = [];
-      if (!build.labReportUploadId) issues.push("Attach the lab report (PDF).");
-      if (!build.measurementsUploadId) issues.push("Attach the measurement CSV.");
-      if (issues.length > 0 || build.waiverReason) return issues;
-      const comparison = await measurementComparison(tx, build);
-      if (comparison.state === "invalid") return comparison.errors;
-      if (comparison.state === "ok") return soundGateIssues(comparison.rows, comparison.toleranceDb);
-      return ["The measurement CSV could not be read; upload it again."];
-    }
-    case "production":
-      return mover.role === "release_manager" || mover.role === "admin" ? [] : ["Only a release manager releases a build to the factory."];
-    default:
-      return [];
-  }
 }
 
 async function mailsFor(tx: Tx, build: Build, to: BuildStage, mover: Mover, reason: string | null) {
@@ -74,23 +41,44 @@ export async function moveBuild(mover: Mover, input: { id: string; from: BuildSt
     to: input.to,
     reason: input.reason?.trim() || null,
     releaseNotes: input.releaseNotes?.trim() || null,
-    gate: (tx, build) => gateIssues(tx, build, input.to, mover),
+    gate: async (tx, build) => (input.to === "withdrawn" ? [] : gateIssues(await gateRequirements(tx, build, input.to, mover, { releaseNotes: input.releaseNotes ?? null }))),
     mails: (tx, build) => mailsFor(tx, build, input.to, mover, input.to === "withdrawn" ? (input.reason ?? null) : (input.releaseNotes ?? null)),
   });
   kickMailSender();
   return transition;
 }
 
-/** A reviewer approves or asks for changes; the author hears of it by mail. */
-export async function reviewBuild(reviewer: Mover, input: { buildId: string; verdict: "approve" | "request_changes"; comment: string }) {
-  const review = await addReview(getDb(), reviewer, {
+/** Why `reviewer` may not review this build now, or null when they may (judged with the build locked). */
+async function reviewerProblem(tx: Tx, build: Build, reviewer: Mover): Promise<string | null> {
+  const standing = reviewerEligibility({ userId: reviewer.userId, role: reviewer.role, disabledAt: null }, await buildAuthorship(tx, build));
+  if (standing.counts) return null;
+  if (reviewer.userId === build.authorUserId) return "You created this build; someone else must review it.";
+  return `You may not review this build: ${standing.reason ?? ""} Someone who wrote none of it must review it.`;
+}
+
+type ReviewRequest = { buildId: string; verdict: "approve" | "request_changes"; comment: string };
+
+function reviewInput(reviewer: Mover, input: ReviewRequest) {
+  return {
     ...input,
-    profileAuthorIds: (tx) => profileAuthorIds(tx, input.buildId),
-    mails: async (tx, build) => {
+    ineligible: (tx: Tx, build: Build) => reviewerProblem(tx, build, reviewer),
+    mails: async (tx: Tx, build: Build) => {
       const author = await getBuild(tx, { id: build.id });
       return author ? verdictMail(await mailFacts(tx, build, reviewer.name), author.authorEmail, input.verdict, input.comment) : [];
     },
-  });
+  };
+}
+
+/** A reviewer approves or asks for changes, once per build; the author hears of it by mail. */
+export async function reviewBuild(reviewer: Mover, input: ReviewRequest) {
+  const review = await addReview(getDb(), reviewer, reviewInput(reviewer, input));
+  kickMailSender();
+  return review;
+}
+
+/** A reviewer changes their own verdict (an explicit update of the one review they have). */
+export async function changeVerdict(reviewer: Mover, input: ReviewRequest & { reviewId: string }) {
+  const review = await changeReview(getDb(), reviewer, { ...reviewInput(reviewer, input), reviewId: input.reviewId });
   kickMailSender();
   return review;
 }

@@ -5,7 +5,7 @@ import { getDb, type Tx } from "@/db/client";
 import type { AuditActor } from "@/db/audit";
 import { insertUpload } from "@/db/uploads";
 import { AppError } from "@/lib/api/errors";
-import { checkUploadContent, uploadNameProblem, UPLOAD_MAX_BYTES, type UploadKind } from "@/lib/release/upload-check";
+import { checkUploadContent, uploadNameProblem, uploadRowErrors, UPLOAD_MAX_BYTES, type UploadKind } from "@/lib/release/upload-check";
 import { getStorage, type ByteSource, type Storage } from "@/lib/platform/storage";
 
 type Uploader = AuditActor & { userId: string };
@@ -28,8 +28,15 @@ export async function acceptUpload(
   const maxBytes = UPLOAD_MAX_BYTES[input.kind];
   const stored = await storage.put(input.body, { maxBytes });
   try {
-    const content = checkUploadContent(input.kind, input.name, new Uint8Array(await storage.get(stored.key)));
+    const bytes = new Uint8Array(await storage.get(stored.key));
+    const content = checkUploadContent(input.kind, input.name, bytes);
     if (!content.ok) throw new AppError("unsupported_media_type", content.message);
+    const rowErrors = uploadRowErrors(input.kind, bytes);
+    if (rowErrors.length > 0) {
+      throw new AppError("validation_failed", "The measurement CSV has rows that cannot be read, so nothing was stored. Fix the listed lines and upload it again.", {
+        issues: rowErrors.map((message) => ({ path: "/file", message })),
+      });
+    }
     return await getDb().transaction(async (tx) => {
       const row = await insertUpload(tx, uploader, { kind: input.kind, storageKey: stored.key, originalName: input.name.trim(), contentType: content.contentType, sizeBytes: stored.sizeBytes, sha256: stored.sha256 });
       await input.attach?.(tx, row);

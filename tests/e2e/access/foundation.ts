@@ -10,6 +10,7 @@ export const foundationRows: AccessRow[] = [
   { file: "app/api/auth/[...nextauth]/route.ts", kind: "api", method: "GET", url: "/api/auth/csrf", allowed: "public" },
   { file: "app/api/auth/[...nextauth]/route.ts", kind: "api", method: "POST", url: "/api/auth/callback/credentials", allowed: "public", ok: [200, 302, 400, 401, 403] },
   { file: "app/api/health/route.ts", kind: "api", method: "GET", url: "/api/health", allowed: "public" },
+  { file: "app/api/health/live/route.ts", kind: "api", method: "GET", url: "/api/health/live", allowed: "public" },
   { file: "app/api/v1/openapi.json/route.ts", kind: "api", method: "GET", url: "/api/v1/openapi.json", allowed: "public" },
   { file: "app/api/v1/me/route.ts", kind: "api", method: "GET", url: "/api/v1/me", allowed: "all" },
   { file: "app/api/v1/me/password/route.ts", kind: "api", method: "POST", url: "/api/v1/me/password", body: { currentPassword: "" }, allowed: "all", ok: 422 },

@@ -29,12 +29,16 @@ describe("profile validation: semantic rules", () => {
   it("temperatures must strictly increase", () => {
     const r = validateProfile(edit((p) => (p.pump.points[2]!.tempC = 35)));
     expect(codes(r)).toContain("curve.temps_not_increasing /pump/points/2/tempC");
+    // Tools get the 0-based JSON pointer; people read the third point as "point 3".
+    const issue = r.issues.find((i) => i.code === "curve.temps_not_increasing")!;
+    expect(issue.message).toMatch(/^pump point 3 is at 35 °C, not above point 2 at /);
     expect(r.ok).toBe(false);
   });
 
   it("duties must not decrease", () => {
     const r = validateProfile(edit((p) => (p.fans.points[2]!.dutyPct = 30)));
     expect(codes(r)).toContain("curve.duties_decreasing /fans/points/2/dutyPct");
+    expect(r.issues.find((i) => i.code === "curve.duties_decreasing")!.message).toMatch(/^fan point 3 asks for 30 %, less than the .* % of point 2:/);
   });
 
   it("duty must be 0–100", () => {

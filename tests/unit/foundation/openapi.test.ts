@@ -23,6 +23,7 @@ describe("OpenAPI generation", () => {
       params: z.strictObject({ id: z.uuid() }),
       query: z.strictObject({ page: z.coerce.number().int().default(1), q: z.string().optional() }),
       body: z.strictObject({ dutyPct: z.number().min(0).max(100) }),
+      response: z.object({ dutyPct: z.number() }),
     });
     const doc = buildOpenApi([op], "1.2.3") as {
       info: { version: string };

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { checkBuild, type BuildSlotFacts } from "@/lib/release/build-check";
 import { compareMeasurements, parseMeasurementsCsv, soundGateIssues, MEASUREMENT_HEADER } from "@/lib/release/measurements";
-import { approvalGateIssues } from "@/lib/release/approvals";
+import { reviewStanding, type ReviewFacts } from "@/lib/release/approvals";
+import { approvalGateIssues, validationGate } from "@/lib/release/gates";
 import { capabilityFor, nextStage, transitionShapeError } from "@/lib/release/transitions";
 import { checkUploadContent, uploadNameProblem } from "@/lib/release/upload-check";
 import { messageBodyText } from "@/lib/mail/raw-message";
@@ -77,27 +78,27 @@ describe("measurements against the estimate", () => {
   };
 
   it("estimates two equal 40 dB sources at their reference speeds as 43.01 dB (incoherent sum; ASHRAE Fundamentals, 'Sound and Vibration')", () => {
-    const [row] = compareMeasurements([{ liquidTempC: 40, pumpRpm: 2900, fanRpm: 2000, soundDbA: 44 }], hw, 3);
+    const [row] = compareMeasurements([{ liquidTempC: 40, pumpRpm: 2900, fanRpm: 2000, soundDbA: 44, backgroundDbA: null }], hw, 3);
     expect(row!.estimatedDbA).toBeCloseTo(43.01, 2);
     expect(row!.deltaDb).toBeCloseTo(0.99, 2);
     expect(row!.withinTolerance).toBe(true);
   });
 
   it("scales the fan by 50·log10(N2/N1): halving its speed takes 15.05 dB off it (fan-law sound scaling; ASHRAE HVAC Systems and Equipment, 'Fans')", () => {
-    const [row] = compareMeasurements([{ liquidTempC: 40, pumpRpm: 2900, fanRpm: 1000, soundDbA: 40 }], hw, 3);
+    const [row] = compareMeasurements([{ liquidTempC: 40, pumpRpm: 2900, fanRpm: 1000, soundDbA: 40, backgroundDbA: null }], hw, 3);
     const fanDb = 40 - 50 * Math.log10(2);
     expect(row!.estimatedDbA).toBeCloseTo(10 * Math.log10(10 ** (fanDb / 10) + 10 ** 4), 6);
     expect(fanDb).toBeCloseTo(24.95, 2);
   });
 
   it("fails the gate beyond the tolerance and names the worst point", () => {
-    const rows = compareMeasurements([{ liquidTempC: 40, pumpRpm: 2900, fanRpm: 2000, soundDbA: 47.5 }], hw, 3);
+    const rows = compareMeasurements([{ liquidTempC: 40, pumpRpm: 2900, fanRpm: 2000, soundDbA: 47.5, backgroundDbA: null }], hw, 3);
     expect(rows[0]!.withinTolerance).toBe(false);
-    expect(soundGateIssues(rows, 3)[0]).toMatch(/1 of 1 .* more than 3 dB .*47\.5 dB\(A\) measured against 43\.0 estimated at pump 2900 RPM, fans 2000 RPM/);
+    expect(soundGateIssues(rows, 3)[0]).toMatch(/1 of 1 comparable .* more than 3 dB .*47\.5 dB\(A\) after background correction against 43\.0 estimated at pump 2900 RPM, fans 2000 RPM/);
   });
 
   it("parses the lab CSV and names bad lines", () => {
-    expect(parseMeasurementsCsv(`${MEASUREMENT_HEADER}\n40,2000,1200,31.5\n`)).toEqual({ ok: true, rows: [{ liquidTempC: 40, pumpRpm: 2000, fanRpm: 1200, soundDbA: 31.5 }] });
+    expect(parseMeasurementsCsv(`${MEASUREMENT_HEADER}\n40,2000,1200,31.5\n`)).toEqual({ ok: true, rows: [{ liquidTempC: 40, pumpRpm: 2000, fanRpm: 1200, soundDbA: 31.5, backgroundDbA: null }] });
     const bad = parseMeasurementsCsv(`${MEASUREMENT_HEADER}\n40,2000,1200\n40,abc,1200,30\n`);
     expect(bad).toEqual({ ok: false, errors: ["Line 2: expected 4 values, found 3.", "Line 3: pump_rpm must be a number from 0 to 20000."] });
     expect(parseMeasurementsCsv("temp,rpm\n1,2").ok).toBe(false);
@@ -118,18 +119,34 @@ describe("stages and approvals", () => {
   });
 
   it("counts one approval per reviewer, none from authors, and blocks on open change requests", () => {
+    const active = { reviewerRole: "engineer" as const, reviewerDisabledAt: null };
     const reviews = [
-      { reviewerUserId: "a", verdict: "approve" as const, resolvedAt: null },
-      { reviewerUserId: "a", verdict: "approve" as const, resolvedAt: null },
-      { reviewerUserId: "author", verdict: "approve" as const, resolvedAt: null },
-      { reviewerUserId: "b", verdict: "request_changes" as const, resolvedAt: null },
+      { reviewerUserId: "a", verdict: "approve" as const, resolvedAt: null, ...active },
+      { reviewerUserId: "a", verdict: "approve" as const, resolvedAt: null, ...active },
+      { reviewerUserId: "author", verdict: "approve" as const, resolvedAt: null, ...active },
+      { reviewerUserId: "b", verdict: "request_changes" as const, resolvedAt: null, ...active },
     ];
-    expect(approvalGateIssues(reviews, new Set(["author"]), 2)).toEqual([
-      "The build has 1 of 2 required approvals from people who wrote neither the build nor its profile versions.",
+    const authorship = { buildAuthorUserId: "author", profileAuthorUserIds: new Set<string>() };
+    expect(approvalGateIssues(reviews, authorship, 2)).toEqual([
+      "The build has 1 of 2 required approvals from active reviewers who wrote neither the build nor its profile versions.",
       "1 change request is still open; the author must resolve it first.",
     ]);
     const resolved = reviews.map((r) => (r.verdict === "request_changes" ? { ...r, resolvedAt: "2026-01-01" } : r));
-    expect(approvalGateIssues([...resolved, { reviewerUserId: "c", verdict: "approve", resolvedAt: null }], new Set(["author"]), 2)).toEqual([]);
+    expect(approvalGateIssues([...resolved, { reviewerUserId: "c", verdict: "approve", resolvedAt: null, ...active }], authorship, 2)).toEqual([]);
+  });
+
+  it("says why a review does not count: profile author, build author, disabled, role no longer allowed", () => {
+    const authorship = { buildAuthorUserId: "builder", profileAuthorUserIds: new Set(["writer"]) };
+    const approval = (reviewerUserId: string, extra: Partial<ReviewFacts> = {}): ReviewFacts => ({ reviewerUserId, verdict: "approve", resolvedAt: null, reviewerRole: "engineer", reviewerDisabledAt: null, ...extra });
+    expect(reviewStanding(approval("ok"), authorship)).toEqual({ counts: true, reason: null });
+    expect(reviewStanding(approval("writer"), authorship).reason).toMatch(/wrote a profile version in this build/);
+    expect(reviewStanding(approval("builder"), authorship).reason).toMatch(/created this build/);
+    expect(reviewStanding(approval("gone", { reviewerDisabledAt: "2026-01-02T00:00:00Z" }), authorship).reason).toMatch(/disabled/);
+    expect(reviewStanding(approval("demoted", { reviewerRole: "viewer" }), authorship).reason).toMatch(/role is now Viewer, which may not review/);
+    expect(reviewStanding(approval("asks", { verdict: "request_changes" }), authorship).counts).toBe(false);
+    // A disabled reviewer and a demoted one leave one counting approval of two: the gate stays shut.
+    const gate = validationGate([approval("ok"), approval("gone", { reviewerDisabledAt: new Date() }), approval("demoted", { reviewerRole: "support" })], authorship, 2);
+    expect(gate.find((r) => r.key === "approvals")).toMatchObject({ state: "unmet", label: "Approvals 1 of 2" });
   });
 });
 

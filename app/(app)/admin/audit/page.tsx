@@ -4,7 +4,8 @@ import { Suspense } from "react";
 import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { prefetchScreen, screenQuery } from "@/lib/platform/screens/prefetch";
 import { getDb } from "@/db/client";
-import { listAudit } from "@/lib/api/operations/admin";
+import { queryFromUrl } from "@/lib/api/client";
+import { auditQuery, listAudit } from "@/lib/api/operations/admin";
 import { searchParamsOf } from "@/lib/api/list-query";
 import { AUDIT_FILTERS, pagedQueryFromUrl } from "@/lib/api/screen-queries";
 import { auditPage } from "@/lib/use-cases/admin/read";
@@ -15,7 +16,7 @@ export const metadata: Metadata = { title: "Audit log" };
 
 export default async function AuditPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const actor = await requirePageActor("admin");
-  const query = pagedQueryFromUrl(AUDIT_FILTERS, searchParamsOf(await searchParams));
+  const query = queryFromUrl(auditQuery, pagedQueryFromUrl(AUDIT_FILTERS, searchParamsOf(await searchParams)));
   const state = await prefetchScreen(actor, [screenQuery(listAudit, { query }, ({ query: parsed }) => auditPage(getDb(), parsed))]);
   return (
     <>

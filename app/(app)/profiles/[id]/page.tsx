@@ -14,12 +14,17 @@ export const metadata: Metadata = { title: "Profile editor" };
 export default async function ProfileEditorPage({ params }: { params: Promise<{ id: string }> }) {
   const actor = await requirePageActor("read");
   const { id } = await params;
+  const canWrite = can(actor.role, "registry:write");
   const state = await prefetchScreen(actor, [screenQuery(getProfile, { params: { id } }, ({ params: parsed }) => profileDetail(getDb(), parsed))]);
   return (
     <>
-      <PageHeader title="Profile editor" subtitle="Edit the JSON; problems, plots and memory update as you type. Drafts save themselves." />
+      {canWrite ? (
+        <PageHeader title="Profile editor" subtitle="Edit the JSON; problems, plots and memory update as you type. Drafts save themselves." />
+      ) : (
+        <PageHeader title="Profile" subtitle="The working draft with its problems, plots and memory for the chosen hardware. Your role may read it, not change it." />
+      )}
       <HydrationBoundary state={state}>
-        <ProfileWorkspace id={id} canWrite={can(actor.role, "registry:write")} />
+        <ProfileWorkspace id={id} canWrite={canWrite} />
       </HydrationBoundary>
     </>
   );

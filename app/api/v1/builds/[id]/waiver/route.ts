@@ -6,5 +6,5 @@ import { auditActor } from "@/lib/platform/auth/actor";
 
 export const POST = apiRoute(recordWaiver, async ({ actor, params, body, requestId }) => {
   await stages.recordWaiver(getDb(), { ...auditActor(actor, requestId), userId: actor.userId }, { buildId: params.id, reason: body.reason });
-  return { ok: true };
+  return { ok: true as const };
 });

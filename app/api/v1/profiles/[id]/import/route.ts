@@ -20,6 +20,6 @@ export const POST = apiRoute(importDraft, async ({ actor, params, req, requestId
     });
   }
   // The file's text is kept as written (key order, spacing), like a typed draft.
-  const saved = await profiles.saveDraft(db, auditActor(actor, requestId), { id: params.id, text });
+  const saved = await profiles.saveDraft(db, { ...auditActor(actor, requestId), userId: actor.userId }, { id: params.id, text });
   return { ...saved, warnings: result.issues.length };
 });

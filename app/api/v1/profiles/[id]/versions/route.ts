@@ -13,5 +13,5 @@ export const GET = apiRoute(listVersions, async ({ params }) => {
 });
 
 export const POST = apiRoute(publishVersion, async ({ actor, params, body, requestId }) => ({
-  version: await versions.publishVersion(getDb(), { ...auditActor(actor, requestId), userId: actor.userId }, { profileId: params.id, ...body }),
+  version: await versions.publishVersion(getDb(), { ...auditActor(actor, requestId), userId: actor.userId, role: actor.role }, { profileId: params.id, ...body }),
 }));

@@ -1,0 +1,244 @@
+"use client";
+
+import { useState, type KeyboardEvent, type PointerEvent as ReactPointerEvent } from "react";
+import { pointValueText } from "@/lib/curve-edit";
+import type { CoolingProfile, CurveKind } from "@/lib/engine";
+import { targetKey, type CurveEditing, type EditTarget } from "../editor/use-curve-editing";
+import type { LinearScale } from "./plot-geometry";
+import { PLOT_COLOURS as C } from "./plot-legend";
+
+/** What a drag moves, and for the hysteresis handle the point it hangs from. */
+export interface DragStart {
+  target: EditTarget;
+  anchorTempC: number;
+}
+
+const KINDS: readonly CurveKind[] = ["pump", "fans"];
+const colour = (kind: CurveKind) => (kind === "pump" ? C.pump : C.fan);
+const fmt = (n: number) => String(Math.round(n * 1000) / 1000);
+
+/** Arrow keys: ±0.5 per press, ±5 with Shift (the board's 0.5 °C / 0.5 % steps). */
+function keyStep(e: KeyboardEvent, small: number, large: number): { dx: number; dy: number } | null {
+  const step = e.shiftKey ? large : small;
+  switch (e.key) {
+    case "ArrowUp":
+      return { dx: 0, dy: step };
+    case "ArrowDown":
+      return { dx: 0, dy: -step };
+    case "ArrowRight":
+      return { dx: step, dy: 0 };
+    case "ArrowLeft":
+      return { dx: -step, dy: 0 };
+    case "PageUp":
+      return { dx: 0, dy: large };
+    case "PageDown":
+      return { dx: 0, dy: -large };
+    default:
+      return null;
+  }
+}
+
+interface Props {
+  profile: CoolingProfile;
+  flashed: CoolingProfile | undefined;
+  x: LinearScale;
+  fromC: number;
+  toC: number;
+  bottom: number;
+  editing: CurveEditing | null;
+  onDragStart: (start: DragStart, e: ReactPointerEvent<SVGElement>) => void;
+  dutyToY: (kind: CurveKind, dutyPct: number) => number;
+}
+
+/**
+ * The points of both curves as focusable sliders, their as-flashed ghosts, the fan
+ * stop and the hysteresis handles, and the reason beside a handle that stopped.
+ */
+export function CurveHandles({ profile, flashed, x, fromC, toC, bottom, editing, onDragStart, dutyToY }: Props) {
+  const [focused, setFocused] = useState<string | null>(null);
+  const notice = editing?.notice ?? null;
+  const inRange = (t: number) => t >= fromC && t <= toC;
+  const reasonAt = (key: string, cx: number, cy: number) =>
+    notice?.key === key ? (
+      <text x={cx > x.range[1] - 220 ? cx - 10 : cx + 10} y={cy - 10} textAnchor={cx > x.range[1] - 220 ? "end" : "start"} fontSize={11} fill={C.critical} stroke="white" strokeWidth={3} paintOrder="stroke" data-testid="handle-reason">
+        {notice.text.length > 70 ? `${notice.text.slice(0, 68)}…` : notice.text}
+      </text>
+    ) : null;
+  const startDrag = (target: EditTarget, anchorTempC: number) => (e: ReactPointerEvent<SVGElement>) => {
+    if (!editing || e.button !== 0) return;
+    e.preventDefault();
+    e.currentTarget.focus();
+    onDragStart({ target, anchorTempC }, e);
+  };
+
+  return (
+    <g>
+      {KINDS.map((kind) =>
+        profile[kind].points.map((p, i) => {
+          const key = `${kind}/${i}`;
+          const cx = x(p.tempC);
+          const cy = dutyToY(kind, p.dutyPct);
+          const q = flashed?.[kind].points[i];
+          const ghost = q && (q.tempC !== p.tempC || q.dutyPct !== p.dutyPct) && inRange(q.tempC);
+          const valueText = pointValueText(kind, i, p);
+          const onKeyDown = (e: KeyboardEvent<SVGElement>) => {
+            if (!editing) return;
+            if (e.key === "Delete" || e.key === "Backspace") {
+              e.preventDefault();
+              editing.removePoint(kind, i);
+              return;
+            }
+            const step = keyStep(e, 0.5, 5);
+            if (!step) return;
+            e.preventDefault();
+            performance.mark("lk-drag");
+            editing.movePoint(kind, i, step.dx !== 0 ? { tempC: p.tempC + step.dx } : { dutyPct: p.dutyPct + step.dy }, true);
+          };
+          return (
+            <g key={key}>
+              {ghost && (
+                <circle cx={x(q.tempC)} cy={dutyToY(kind, q.dutyPct)} r={6} fill="none" stroke={colour(kind)} strokeDasharray="2 2" aria-hidden="true" data-testid="flashed-ghost">
+                  <title>{`As flashed: ${fmt(q.tempC)} °C, ${fmt(q.dutyPct)} %`}</title>
+                </circle>
+              )}
+              {focused === key && <circle cx={cx} cy={cy} r={10} fill="none" stroke={C.operating} strokeWidth={2} aria-hidden="true" />}
+              {editing ? (
+                <circle
+                  data-handle={key}
+                  cx={cx}
+                  cy={cy}
+                  r={6}
+                  fill="white"
+                  stroke={colour(kind)}
+                  strokeWidth={2.5}
+                  className="cursor-grab outline-none"
+                  role="slider"
+                  tabIndex={0}
+                  aria-label={`${kind === "pump" ? "pump" : "fan"} point ${i + 1}`}
+                  aria-valuenow={p.dutyPct}
+                  aria-valuemin={0}
+                  aria-valuemax={100}
+                  aria-valuetext={valueText}
+                  onPointerDown={startDrag({ type: "point", kind, index: i }, p.tempC)}
+                  onKeyDown={onKeyDown}
+                  onFocus={() => setFocused(key)}
+                  onBlur={() => setFocused((f) => (f === key ? null : f))}
+                />
+              ) : (
+                <circle cx={cx} cy={cy} r={4} fill={colour(kind)} aria-hidden="true" />
+              )}
+              {reasonAt(key, cx, cy)}
+            </g>
+          );
+        }),
+      )}
+      {profile.fans.stopBelowTempC !== undefined && inRange(profile.fans.stopBelowTempC) && (
+        <FanStop stopC={profile.fans.stopBelowTempC} x={x} bottom={bottom} editing={editing} focused={focused === "fanStop"} setFocused={setFocused} startDrag={startDrag} reasonAt={reasonAt} />
+      )}
+      {editing &&
+        KINDS.map((kind) => {
+          const points = profile[kind].points;
+          const anchor = points[Math.floor(points.length / 2)];
+          if (!anchor) return null;
+          const h = profile[kind].hysteresisC;
+          const key = targetKey({ type: "hysteresis", kind });
+          const cx = x(anchor.tempC - h);
+          const cy = dutyToY(kind, anchor.dutyPct);
+          return (
+            <g key={key}>
+              <line x1={cx} x2={x(anchor.tempC)} y1={cy} y2={cy} stroke={colour(kind)} strokeDasharray="1 2" aria-hidden="true" />
+              {focused === key && <circle cx={cx} cy={cy} r={10} fill="none" stroke={C.operating} strokeWidth={2} aria-hidden="true" />}
+              <rect
+                data-handle={key}
+                x={cx - 5}
+                y={cy - 5}
+                width={10}
+                height={10}
+                transform={`rotate(45 ${cx} ${cy})`}
+                fill={colour(kind)}
+                fillOpacity={0.35}
+                stroke={colour(kind)}
+                className="cursor-ew-resize outline-none"
+                role="slider"
+                tabIndex={0}
+                aria-label={`${kind === "pump" ? "pump" : "fan"} hysteresis`}
+                aria-valuenow={h}
+                aria-valuemin={0}
+                aria-valuemax={10}
+                aria-valuetext={`${kind === "pump" ? "pump" : "fan"} hysteresis ${fmt(h)} °C`}
+                onPointerDown={startDrag({ type: "hysteresis", kind }, anchor.tempC)}
+                onKeyDown={(e) => {
+                  const step = keyStep(e, 0.1, 1);
+                  if (!step) return;
+                  e.preventDefault();
+                  editing.setValue({ type: "hysteresis", kind }, h + step.dx + step.dy, true);
+                }}
+                onFocus={() => setFocused(key)}
+                onBlur={() => setFocused((f) => (f === key ? null : f))}
+              />
+              {reasonAt(key, cx, cy)}
+            </g>
+          );
+        })}
+    </g>
+  );
+}
+
+function FanStop({
+  stopC,
+  x,
+  bottom,
+  editing,
+  focused,
+  setFocused,
+  startDrag,
+  reasonAt,
+}: {
+  stopC: number;
+  x: LinearScale;
+  bottom: number;
+  editing: CurveEditing | null;
+  focused: boolean;
+  setFocused: (update: (f: string | null) => string | null) => void;
+  startDrag: (target: EditTarget, anchorTempC: number) => (e: ReactPointerEvent<SVGElement>) => void;
+  reasonAt: (key: string, cx: number, cy: number) => React.ReactNode;
+}) {
+  const cx = x(stopC);
+  const cy = bottom - 8;
+  return (
+    <g data-testid="fan-stop">
+      <line x1={cx} x2={cx} y1={bottom} y2={bottom - 120} stroke={C.fan} strokeDasharray={C.stopDash} strokeWidth={1.5} aria-hidden="true" />
+      <text x={cx + 4} y={bottom - 112} fontSize={11} fill={C.fan} stroke="white" strokeWidth={3} paintOrder="stroke" aria-hidden="true">fans stop below {fmt(stopC)} °C</text>
+      {focused && <circle cx={cx} cy={cy} r={10} fill="none" stroke={C.operating} strokeWidth={2} aria-hidden="true" />}
+      {editing ? (
+        <rect
+          data-handle="fanStop"
+          x={cx - 4}
+          y={cy - 8}
+          width={8}
+          height={16}
+          rx={2}
+          fill={C.fan}
+          className="cursor-ew-resize outline-none"
+          role="slider"
+          tabIndex={0}
+          aria-label="fan stop temperature"
+          aria-valuenow={stopC}
+          aria-valuemin={0}
+          aria-valuemax={100}
+          aria-valuetext={`fans stop below ${fmt(stopC)} °C`}
+          onPointerDown={startDrag({ type: "fanStop" }, stopC)}
+          onKeyDown={(e) => {
+            const step = keyStep(e, 0.5, 5);
+            if (!step) return;
+            e.preventDefault();
+            editing.setValue({ type: "fanStop" }, stopC + step.dx + step.dy, true);
+          }}
+          onFocus={() => setFocused(() => "fanStop")}
+          onBlur={() => setFocused((f) => (f === "fanStop" ? null : f))}
+        />
+      ) : null}
+      {reasonAt("fanStop", cx, cy - 14)}
+    </g>
+  );
+}

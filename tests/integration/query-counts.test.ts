@@ -1,0 +1,32 @@
+import { afterAll, describe, expect, it } from "vitest";
+import { closeDb } from "./support/db";
+import { callRoute, tokenFor } from "./support/http";
+import { withRequestStats } from "@/db/request-stats";
+import { actorCaches } from "@/lib/platform/auth/actor-cache";
+import { GET as lookup } from "@/app/api/v1/lookup/route";
+
+afterAll(closeDb);
+
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+// The statements an API request costs are kept at these numbers: a change that adds a
+// round trip to the hot path has to change this file too.
+const LOOKUP_QUERIES = 1; // lot, revision, builds and slots in one prepared statement
+const TOKEN_FIRST_USE_QUERIES = 2; // the token's actor, and its last-use stamp (once a minute)
+
+describe("statements per API request", () => {
+  it("serial lookup with a token: one statement once the token is known, plus two on its first use", async () => {
+    for (let i = 0; i < 200 && !actorCaches().tokens.listening; i++) await sleep(25);
+    const token = await tokenFor("support@tarnwell.example");
+    const url = "/api/v1/lookup?serial=TC1-00010000";
+    const first = await withRequestStats(() => callRoute(lookup, { url, token }));
+    expect(first.result.status).toBe(200);
+    expect(first.stats).toEqual({ queries: LOOKUP_QUERIES + TOKEN_FIRST_USE_QUERIES, sessionLookups: 0, actorQueries: TOKEN_FIRST_USE_QUERIES });
+    const again = await withRequestStats(() => callRoute(lookup, { url, token }));
+    expect(again.result.status).toBe(200);
+    expect(again.stats).toEqual({ queries: LOOKUP_QUERIES, sessionLookups: 0, actorQueries: 0 });
+    const body = (await again.result.json()) as { lot: { lotCode: string }; slots: unknown[] };
+    expect(body.lot.lotCode).toBe("TW-2501");
+    expect(body.slots.length).toBeGreaterThan(0);
+  });
+});
