@@ -18,6 +18,11 @@ export class Screen {
     return this.page.getByRole("alert").filter({ hasText: text });
   }
 
+  /** A confirmation dialog, by its title. */
+  dialog(name: string | RegExp): Locator {
+    return this.page.getByRole("dialog", { name });
+  }
+
   button(name: string | RegExp, exact = true): Locator {
     return this.page.getByRole("button", { name, exact: typeof name === "string" ? exact : undefined });
   }

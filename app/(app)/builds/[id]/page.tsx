@@ -4,8 +4,9 @@ import { notFound } from "next/navigation";
 import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { prefetchScreen, screenQuery } from "@/lib/platform/screens/prefetch";
 import { getDb } from "@/db/client";
-import { getBuild } from "@/lib/api/operations/builds";
+import { getBuild, getBuildGate } from "@/lib/api/operations/builds";
 import { buildDetail } from "@/lib/use-cases/builds/detail";
+import { buildGate } from "@/lib/use-cases/builds/gate";
 import { BuildPage } from "@/components/builds/build-page";
 
 export const metadata: Metadata = { title: "Build" };
@@ -16,7 +17,12 @@ export default async function BuildDetailPage({ params }: { params: Promise<{ id
   const actor = await requirePageActor("read");
   const { id } = await params;
   if (!UUID_RE.test(id)) notFound();
-  const state = await prefetchScreen(actor, [screenQuery(getBuild, { params: { id } }, ({ params: parsed }) => buildDetail(getDb(), parsed))]);
+  const db = getDb();
+  const state = await prefetchScreen(actor, [
+    screenQuery(getBuild, { params: { id } }, ({ params: parsed }) => buildDetail(db, parsed)),
+    // The next stage's checklist as this person sees it, so the actions render with the page.
+    screenQuery(getBuildGate, { params: { id } }, ({ params: parsed }) => buildGate(db, parsed, { userId: actor.userId, role: actor.role })),
+  ]);
   return (
     <HydrationBoundary state={state}>
       <BuildPage id={id} viewer={{ userId: actor.userId, role: actor.role }} />
