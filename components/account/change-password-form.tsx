@@ -5,37 +5,38 @@ import { useForm, useWatch } from "react-hook-form";
 import { useMemo, useState } from "react";
 import type { z } from "zod";
 import { apiCall } from "@/lib/api/client";
-import { AppError } from "@/lib/api/errors";
 import { changePassword, changePasswordBody } from "@/lib/api/operations/account";
 import { MAX_PASSWORD_BYTES, MIN_PASSWORD_CHARS } from "@/lib/auth/password-policy";
 import { Button } from "@/components/ui/button";
 import { Field, Input, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 import { PasswordStrength } from "./password-strength";
 
 type Result = { otherSessionsEnded: number; tokensRevoked: number };
 
 export function ChangePasswordForm({ email, name }: { email: string; name: string }) {
   const [done, setDone] = useState<Result | null>(null);
-  const { register, handleSubmit, setError, reset, formState, control } = useForm<z.input<typeof changePasswordBody>, unknown, z.output<typeof changePasswordBody>>({
+  const [serverError, setServerError] = useState<unknown>(null);
+  const form = useForm<z.input<typeof changePasswordBody>, unknown, z.output<typeof changePasswordBody>>({
     resolver: zodResolver(changePasswordBody),
     defaultValues: { currentPassword: "", newPassword: "", revokeTokens: false },
   });
+  const { register, handleSubmit, reset, formState, control } = form;
   const { errors, isSubmitting } = formState;
   const newPassword = useWatch({ control, name: "newPassword" }) ?? "";
   const userInputs = useMemo(() => [email, name, "loopkeeper", "tarnwell"], [email, name]);
 
   const onSubmit = handleSubmit(async (values) => {
     setDone(null);
+    setServerError(null);
     try {
       setDone(await apiCall(changePassword, { body: values }));
       reset();
     } catch (err) {
-      const e = err instanceof AppError ? err : new AppError("internal", "Could not change the password.");
-      const fieldIssue = (path: string) => e.issues?.find((i) => i.path === path);
-      if (fieldIssue("/currentPassword")) setError("currentPassword", { message: e.message });
-      else if (fieldIssue("/newPassword")) setError("newPassword", { message: fieldIssue("/newPassword")!.message });
-      else setError("root", { message: e.message });
+      showServerIssues(form, err);
+      setServerError(err);
     }
   });
 
@@ -47,7 +48,7 @@ export function ChangePasswordForm({ email, name }: { email: string; name: strin
           {done.tokensRevoked ? `, and ${done.tokensRevoked} API token${done.tokensRevoked === 1 ? " was" : "s were"} revoked` : ""}.
         </Notice>
       )}
-      {errors.root?.message && <Notice tone="fault" role="alert">{errors.root.message}</Notice>}
+      <ErrorNotice error={serverError} besideFields={fieldsOf(form)} />
       <Field id="currentPassword" label="Current password" error={errors.currentPassword?.message}>
         <Input type="password" autoComplete="current-password" {...describedBy("currentPassword", errors.currentPassword?.message)} {...register("currentPassword")} />
       </Field>

@@ -3,11 +3,12 @@ import { createUser, listUsers } from "@/lib/api/operations/admin";
 import { getDb } from "@/db/client";
 import * as users from "@/db/users";
 import { auditActor } from "@/lib/platform/auth/actor";
+import { usersList } from "@/lib/use-cases/admin/read";
 import { hashPassword } from "@/lib/platform/auth/password";
 import { isCommon } from "@/lib/platform/auth/common-passwords";
 import { AppError } from "@/lib/api/errors";
 
-export const GET = apiRoute(listUsers, async () => ({ items: await users.listUsers(getDb()) }));
+export const GET = apiRoute(listUsers, async () => usersList(getDb()));
 
 export const POST = apiRoute(createUser, async ({ actor, body, requestId }) => {
   const { password, ...rest } = body;
