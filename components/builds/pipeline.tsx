@@ -5,17 +5,15 @@ import { useQuery } from "@tanstack/react-query";
 import { apiQuery } from "@/lib/api/client";
 import { listBuilds } from "@/lib/api/operations/builds";
 import { STAGE_LABELS, STAGE_ORDER } from "@/lib/release/stages";
-import { Notice } from "@/components/ui/notice";
-import { Button } from "@/components/ui/button";
+import { ErrorNotice } from "@/components/ui/error-notice";
 
 /** Builds in columns by stage, newest first in each. */
 export function Pipeline() {
+  // The page loads the first answer on the server under the same key: no placeholder on first paint.
   const q = useQuery(apiQuery(listBuilds, {}));
   if (q.isError) {
     return (
-      <Notice tone="fault" role="alert" title="Could not load the builds.">
-        <Button variant="secondary" onClick={() => void q.refetch()}>Retry</Button>
-      </Notice>
+      <ErrorNotice error={q.error} onRetry={() => void q.refetch()} />
     );
   }
   return (

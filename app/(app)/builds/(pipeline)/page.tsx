@@ -5,11 +5,17 @@ import { can } from "@/lib/auth/roles";
 import { PageHeader } from "@/components/ui/panel";
 import { buttonClass } from "@/components/ui/button";
 import { Pipeline } from "@/components/builds/pipeline";
+import { HydrationBoundary } from "@tanstack/react-query";
+import { getDb } from "@/db/client";
+import { listBuilds } from "@/lib/api/operations/builds";
+import { prefetchScreen, screenQuery } from "@/lib/platform/screens/prefetch";
+import { listBuildsForPipeline } from "@/lib/use-cases/builds/list";
 
 export const metadata: Metadata = { title: "Builds" };
 
 export default async function BuildsPage() {
   const actor = await requirePageActor("read");
+  const state = await prefetchScreen(actor, [screenQuery(listBuilds, {}, ({ query }) => listBuildsForPipeline(getDb(), query))]);
   return (
     <>
       <PageHeader
@@ -17,7 +23,9 @@ export default async function BuildsPage() {
         subtitle="Firmware and profile banks on their way to the factory, by stage."
         actions={can(actor.role, "build:create") ? <Link href="/builds/new" className={buttonClass("primary", "no-underline")}>New build</Link> : undefined}
       />
-      <Pipeline />
+      <HydrationBoundary state={state}>
+        <Pipeline />
+      </HydrationBoundary>
     </>
   );
 }
