@@ -12,9 +12,10 @@ import { Field, Input, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { Badge } from "@/components/ui/badge";
+import { formatUtc } from "@/lib/time/format";
 
 function fmt(iso: string | null): string {
-  return iso ? iso.slice(0, 16).replace("T", " ") : "—";
+  return iso ? formatUtc(iso) : "—";
 }
 
 function tokenState(t: TokenView): { label: string; tone: "ok" | "neutral" | "fault" } {

@@ -10,6 +10,7 @@ import { Field, Textarea } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import { ErrorNotice } from "./error-notice";
 import { useBuildMutation } from "./use-build";
+import { formatUtc } from "@/lib/time/format";
 
 export function BuildReviews({ detail, viewer }: { detail: BuildDetail; viewer: { userId: string; role: Role } }) {
   const { build } = detail;
@@ -30,7 +31,7 @@ export function BuildReviews({ detail, viewer }: { detail: BuildDetail; viewer: 
               <div className="flex flex-wrap items-center gap-2">
                 <span className="font-medium">{r.reviewerName}</span>
                 {r.verdict === "approve" ? <Badge tone="ok">approved</Badge> : <Badge tone={r.resolvedAt ? "neutral" : "warn"}>{r.resolvedAt ? "changes resolved" : "changes requested"}</Badge>}
-                <span className="text-xs text-ink-500">{r.createdAt.slice(0, 16).replace("T", " ")}</span>
+                <span className="text-xs text-ink-500">{formatUtc(r.createdAt)}</span>
                 {isAuthor && r.verdict === "request_changes" && !r.resolvedAt && (
                   <Button variant="secondary" className="ml-auto" onClick={() => resolve.mutate(r.id)}>Mark resolved</Button>
                 )}

@@ -19,6 +19,7 @@ import { Badge } from "@/components/ui/badge";
 import { DataTable } from "@/components/registry/data-table";
 import { FilterBar } from "@/components/registry/filter-bar";
 import { useListParams, serverTableProps } from "@/components/registry/use-list-params";
+import { formatUtc } from "@/lib/time/format";
 
 const columns: ColumnDef<ProfileSummaryView>[] = [
   {
@@ -35,7 +36,7 @@ const columns: ColumnDef<ProfileSummaryView>[] = [
   { id: "latest", header: "Latest version", enableSorting: false, cell: (c) => (c.row.original.latestVersion ? <Badge tone="accent">{c.row.original.latestVersion}</Badge> : <Badge>draft only</Badge>) },
   { id: "versions", header: "Versions", enableSorting: false, cell: (c) => <span className="tabular-nums">{c.row.original.versionCount}</span> },
   { id: "owner", header: "Owner", enableSorting: false, cell: (c) => c.row.original.ownerName },
-  { id: "updatedAt", accessorKey: "updatedAt", header: "Updated (UTC)", cell: (c) => <span className="tabular-nums">{c.row.original.updatedAt.slice(0, 16).replace("T", " ")}</span> },
+  { id: "updatedAt", accessorKey: "updatedAt", header: "Updated", cell: (c) => <span className="tabular-nums">{formatUtc(c.row.original.updatedAt)}</span> },
 ];
 
 export function ProfilesList({ canWrite }: { canWrite: boolean }) {

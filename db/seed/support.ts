@@ -1,6 +1,6 @@
 import { and, eq, sql } from "drizzle-orm";
 import type { Database } from "../client";
-import { boardModels, boardRevisions, buildSlots, builds, coolerModels, productionLots, profileVersions, profiles, users, type Build, type ProfileVersion } from "../schema";
+import { boardModels, boardRevisions, buildSlots, builds, buildTransitions, coolerModels, productionLots, profileVersions, profiles, users, type Build, type ProfileVersion } from "../schema";
 import { bankSignatureFields } from "../bank-signatures";
 import { contentHashHex, crc32, encodeBank, sha256, toHex, type CoolingProfile } from "@/lib/engine";
 import { satisfiesRange, compareVersions } from "@/lib/versioning/semver-helpers";
@@ -156,6 +156,17 @@ export async function seedSupport(db: Database) {
       return row;
     });
     if (created) byBuild.set(b.version, created);
+  }
+
+  // The withdrawal as the release manager made it, so screens can say when and by whom (also
+  // added to a database seeded before this was recorded).
+  for (const b of DEMO_BUILDS.filter((d) => d.stage === "withdrawn")) {
+    const build = byBuild.get(b.version);
+    if (!build) continue;
+    const [moved] = await db.select({ id: buildTransitions.id }).from(buildTransitions).where(and(eq(buildTransitions.buildId, build.id), eq(buildTransitions.toStage, "withdrawn"))).limit(1);
+    if (!moved) {
+      await db.insert(buildTransitions).values({ buildId: build.id, fromStage: "production", toStage: "withdrawn", actorUserId: releaser.id, reason: b.withdrawnReason, createdAt: new Date("2025-02-24T09:30:00Z") });
+    }
   }
 
   for (const lot of DEMO_LOTS) {

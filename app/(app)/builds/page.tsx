@@ -5,11 +5,15 @@ import { can } from "@/lib/auth/roles";
 import { PageHeader } from "@/components/ui/panel";
 import { buttonClass } from "@/components/ui/button";
 import { Pipeline } from "@/components/builds/pipeline";
+import { STAGE_ORDER } from "@/lib/release/stages";
 
 export const metadata: Metadata = { title: "Builds" };
 
-export default async function BuildsPage() {
+export default async function BuildsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const actor = await requirePageActor("read");
+  const wanted = (await searchParams).stage;
+  // A stage from the dashboard's tiles shows that column alone; anything else shows them all.
+  const stage = STAGE_ORDER.find((s) => s === wanted);
   return (
     <>
       <PageHeader
@@ -17,7 +21,7 @@ export default async function BuildsPage() {
         subtitle="Firmware and profile banks on their way to the factory, by stage."
         actions={can(actor.role, "build:create") ? <Link href="/builds/new" className={buttonClass("primary", "no-underline")}>New build</Link> : undefined}
       />
-      <Pipeline />
+      <Pipeline stage={stage} />
     </>
   );
 }
