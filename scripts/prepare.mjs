@@ -58,6 +58,8 @@ export async function appEnv({ database = "loopkeeper", port = 3000 } = {}) {
     NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET ?? localSecret(),
     BANK_SIGNING_KEY: process.env.BANK_SIGNING_KEY ?? localBankSigningKey(),
     NEXTAUTH_URL: process.env.NEXTAUTH_URL ?? `http://127.0.0.1:${port}`,
+    // The demo maker's lab list, told when a build enters lab validation.
+    LAB_MAIL_LIST: process.env.LAB_MAIL_LIST ?? "lab@tarnwell.example",
     PLAYWRIGHT_SKIP_BROWSER_DOWNLOAD: "1",
     NEXT_TELEMETRY_DISABLED: "1",
   };

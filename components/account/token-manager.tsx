@@ -8,6 +8,7 @@ import type { z } from "zod";
 import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
 import { createToken, createTokenBody, listTokens, revokeToken, type TokenView } from "@/lib/api/operations/account";
 import { Button } from "@/components/ui/button";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Field, Input, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
@@ -40,9 +41,13 @@ export function TokenManager() {
       void qc.invalidateQueries({ queryKey: operationKey(listTokens) });
     },
   });
+  const [revoking, setRevoking] = useState<TokenView | null>(null);
   const revoke = useMutation({
     mutationFn: (id: string) => apiCall(revokeToken, { params: { id } }),
-    onSuccess: () => void qc.invalidateQueries({ queryKey: operationKey(listTokens) }),
+    onSuccess: () => {
+      setRevoking(null);
+      void qc.invalidateQueries({ queryKey: operationKey(listTokens) });
+    },
   });
   const { errors } = form.formState;
 
@@ -105,7 +110,14 @@ export function TokenManager() {
                 <Td><Badge tone={st.tone}>{st.label}</Badge></Td>
                 <Td>
                   {st.label === "active" && (
-                    <Button variant="quiet" onClick={() => revoke.mutate(t.id)} aria-label={`Revoke ${t.name}`}>
+                    <Button
+                      variant="quiet"
+                      onClick={() => {
+                        revoke.reset();
+                        setRevoking(t);
+                      }}
+                      aria-label={`Revoke ${t.name}`}
+                    >
                       Revoke
                     </Button>
                   )}
@@ -115,6 +127,25 @@ export function TokenManager() {
           })}
         </tbody>
       </Table>
+      <ConfirmDialog
+        open={revoking !== null}
+        title={`Revoke the token "${revoking?.name ?? ""}"?`}
+        description={
+          <p>
+            Every station or pipeline that sends the token starting with <code>{revoking?.tokenPrefix}…</code> is refused from its next request. This cannot be undone; make a new token if one is
+            still needed.
+          </p>
+        }
+        confirmLabel="Revoke token"
+        pending={revoke.isPending}
+        onClose={() => {
+          setRevoking(null);
+          revoke.reset();
+        }}
+        onConfirm={() => revoking && revoke.mutate(revoking.id)}
+      >
+        {revoke.error && <Notice tone="fault" role="alert">{revoke.error.message}</Notice>}
+      </ConfirmDialog>
     </div>
   );
 }

@@ -3,10 +3,12 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
+import { useState } from "react";
 import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
 import { createUser, createUserBody, listUsers, updateUser, type CreateUserBody, type UpdateUserBody } from "@/lib/api/operations/admin";
 import { ROLES, ROLE_LABELS, type Role } from "@/lib/auth/roles";
 import { Button } from "@/components/ui/button";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
@@ -29,11 +31,17 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
     onSettled: () => void qc.invalidateQueries({ queryKey: operationKey(listUsers) }),
   });
   const { errors } = form.formState;
+  // A role change or a disable waits here until the admin confirms it in the dialog.
+  const [pending, setPending] = useState<{ id: string; name: string; email: string; role?: { from: Role; to: Role }; disable?: true } | null>(null);
+  const confirm = () => {
+    if (!pending) return;
+    update.mutate(pending.role ? { id: pending.id, role: pending.role.to } : { id: pending.id, disabled: true }, { onSuccess: () => setPending(null) });
+  };
 
   return (
     <div className="space-y-5">
       <Panel title="People">
-        {update.error && <div className="mb-3"><Notice tone="fault" role="alert">{update.error.message}</Notice></div>}
+        {update.error && !pending && <div className="mb-3"><Notice tone="fault" role="alert">{update.error.message}</Notice></div>}
         <Table caption="Users">
           <thead>
             <tr>
@@ -61,7 +69,10 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
                     id={`role-${u.id}`}
                     value={u.role}
                     disabled={u.id === currentUserId}
-                    onChange={(e) => update.mutate({ id: u.id, role: e.target.value as Role })}
+                    onChange={(e) => {
+                      update.reset();
+                      setPending({ id: u.id, name: u.name, email: u.email, role: { from: u.role, to: e.target.value as Role } });
+                    }}
                     className="w-44 py-1"
                   >
                     {ROLES.map((r) => (
@@ -72,7 +83,14 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
                 <Td>{u.disabledAt ? <Badge tone="fault">disabled</Badge> : <Badge tone="ok">active</Badge>}</Td>
                 <Td>
                   {u.id !== currentUserId && (
-                    <Button variant="quiet" onClick={() => update.mutate({ id: u.id, disabled: !u.disabledAt })}>
+                    <Button
+                      variant="quiet"
+                      onClick={() => {
+                        update.reset();
+                        if (u.disabledAt) update.mutate({ id: u.id, disabled: false });
+                        else setPending({ id: u.id, name: u.name, email: u.email, disable: true });
+                      }}
+                    >
                       {u.disabledAt ? "Re-enable" : "Disable"} <span className="sr-only">{u.name}</span>
                     </Button>
                   )}
@@ -82,6 +100,33 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
           </tbody>
         </Table>
       </Panel>
+      <ConfirmDialog
+        open={pending !== null}
+        title={pending?.role ? `Change ${pending.name}'s role to ${ROLE_LABELS[pending.role.to]}?` : `Disable ${pending?.name ?? ""}'s account?`}
+        description={
+          pending?.role ? (
+            <p>
+              {pending.name} ({pending.email}) goes from {ROLE_LABELS[pending.role.from]} to {ROLE_LABELS[pending.role.to]} at their next request, in the browser and through every API token they hold.
+              Approvals they gave count only while their role may review builds.
+            </p>
+          ) : (
+            <p>
+              {pending?.name} ({pending?.email}) is signed out at their next request, cannot sign in, and every API token they hold stops working. Their approvals stop counting toward any build
+              not yet promoted. You can re-enable the account later.
+            </p>
+          )
+        }
+        confirmLabel={pending?.role ? "Change role" : "Disable account"}
+        variant={pending?.role ? "primary" : "danger"}
+        pending={update.isPending}
+        onClose={() => {
+          setPending(null);
+          update.reset();
+        }}
+        onConfirm={confirm}
+      >
+        {update.error && <Notice tone="fault" role="alert">{update.error.message}</Notice>}
+      </ConfirmDialog>
       <Panel title="Add a user">
         <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-3xl gap-3 md:grid-cols-2" noValidate>
           {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{create.error.message}</Notice></div>}

@@ -11,7 +11,7 @@ import { BuildActions } from "./build-actions";
 import { BuildEvidence } from "./build-evidence";
 import { BuildReviews } from "./build-reviews";
 import { StageBadge } from "./stage-badge";
-import { useBuild } from "./use-build";
+import { useBuild, useBuildGate } from "./use-build";
 
 import { hex32 } from "@/lib/hex/address";
 import { profileVersionHref } from "@/lib/audit/describe";
@@ -19,6 +19,7 @@ import { formatUtc } from "@/lib/time/format";
 
 export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string; role: Role } }) {
   const q = useBuild(id);
+  const gate = useBuildGate(id);
   if (q.isPending) return <div aria-busy className="h-40 animate-pulse rounded-md bg-white shadow-panel" />;
   if (q.isError) {
     return (
@@ -100,8 +101,9 @@ export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string
             <BuildEvidence detail={detail} role={viewer.role} />
           </div>
           <div className="space-y-4">
-            <BuildActions detail={detail} role={viewer.role} />
-            <BuildReviews detail={detail} viewer={viewer} />
+            <BuildActions detail={detail} gate={gate.data} role={viewer.role} />
+            {gate.isError && <Notice tone="fault" role="alert" title={gate.error.message} />}
+            <BuildReviews detail={detail} gate={gate.data} viewer={viewer} />
             <Panel title="Stage timeline">
               <ol className="space-y-2 text-sm" aria-label="Stage timeline" data-testid="timeline">
                 <li>

@@ -48,7 +48,7 @@ export function BoardRevisionView({ id, canWrite }: { id: string; canWrite: bool
         </dl>
         <p className="mt-3 max-w-3xl text-sm text-ink-700" data-testid="tach-explanation">
           Why {r.tachPulsesPerRev} tach pulses: the board&apos;s tach input counts {r.tachPulsesPerRev} pulses per revolution, the 4-wire fan standard (2 per revolution; Intel 4-Wire PWM fan
-          specification rev 1.3, §2.1.4), because the fans it reads give that. A pump motor often gives 4 pulses per revolution (see its part under Components), so the board, and a
+          specification rev 1.3, §2.1.3), because the fans it reads give that. A pump motor often gives 4 pulses per revolution (see its part under Components), so the board, and a
           motherboard reading the pump, show that pump at {r.tachPulsesPerRev === 2 ? "twice" : `${4 / r.tachPulsesPerRev} ×`} its real speed: real = reading × {r.tachPulsesPerRev} ÷ the pump&apos;s pulses. The tach converter on the serial lookup page (support) does this sum.
         </p>
         {r.notes && <p className="mt-3 text-sm text-ink-700">{r.notes}</p>}

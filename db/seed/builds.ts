@@ -1,15 +1,15 @@
-import { randomUUID } from "node:crypto";
-import fs from "node:fs";
-import path from "node:path";
 import { and, eq, inArray, sql } from "drizzle-orm";
 import type { Database } from "../client";
-import { boardModels, boardRevisions, buildReviews, builds, buildSlots, buildTransitions, components, coolerModels, profiles, profileVersions, uploads, users, type BuildStage } from "../schema";
-import { coolerNoise, contentHashHex, encodeBank, validateProfile, type CoolingProfile } from "@/lib/engine";
+import { boardModels, boardRevisions, builds, buildSlots, components, coolerModels, profiles, profileVersions, users, type BuildStage } from "../schema";
+import { contentHashHex, encodeBank, satisfiesRange, validateProfile, type CoolingProfile } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { checkBuild } from "@/lib/release/build-check";
-import { MEASUREMENT_HEADER } from "@/lib/release/measurements";
 import { DEMO_BOARD } from "./hardware";
 import { bankSignatureFields } from "../bank-signatures";
+import { assertDemoEvidencePasses, demoFirmware, demoMeasurementsCsv, demoTimeline, insertDemoHistory, reached, reachedStage, storeDemoFile } from "./build-history";
+
+/** The sound tolerance the demo evidence is checked against: the product's default (SOUND_TOLERANCE_DB). */
+const DEMO_SOUND_TOLERANCE_DB = 3;
 
 type Db = Database;
 
@@ -105,20 +105,6 @@ async function ensureProfileVersions(db: Db, boardModelId: string) {
   }
 }
 
-/** Writes a demo file where the local storage driver keeps uploads, and records it. */
-async function storeDemoFile(db: Db, kind: "firmware" | "lab_report" | "measurements", name: string, contentType: string, bytes: Buffer, uploadedByUserId: string) {
-  const key = randomUUID();
-  const dir = path.resolve(process.env.STORAGE_DIR ?? ".data/uploads");
-  fs.mkdirSync(dir, { recursive: true });
-  fs.writeFileSync(path.join(dir, key), bytes, { mode: 0o600 });
-  const { createHash } = await import("node:crypto");
-  const [row] = await db
-    .insert(uploads)
-    .values({ kind, storageKey: key, originalName: name, contentType, sizeBytes: bytes.length, sha256: createHash("sha256").update(bytes).digest("hex"), uploadedByUserId })
-    .returning({ id: uploads.id });
-  return row!.id;
-}
-
 /** A minimal one-page PDF with a line of text (PDF 1.4 structure, offsets computed). */
 export function tinyPdf(text: string): Buffer {
   const objects = [
@@ -145,31 +131,38 @@ interface DemoBuild {
   stage: BuildStage;
   range: string;
   cooler: string;
-  withdrawnReason?: string;
+  /** When the build was created; its history follows on the demo's timeline. */
+  createdOn: string;
+  withdrawn?: { from: BuildStage; on: string; reason: string };
   releaseNotes?: string;
 }
 
 const DEMO_BUILDS: DemoBuild[] = [
-  { version: "1.0.0", stage: "production", range: ">=1.0.0 <3.0.0", cooler: "Tarn 240", releaseNotes: "First factory release for the Tarn 240." },
-  { version: "1.0.1", stage: "withdrawn", range: ">=1.0.0 <3.0.0", cooler: "Tarn 360", withdrawnReason: "Pump ramp too slow on cold start in the pilot run; replaced by 1.1.0." },
-  { version: "1.1.0", stage: "pilot", range: ">=1.1.0 <3.0.0", cooler: "Tarn 360" },
-  { version: "1.2.0", stage: "validation", range: ">=1.1.0 <3.0.0", cooler: "Tarn 240" },
-  { version: "1.3.0", stage: "review", range: "^2.0.0", cooler: "Tarn 360" },
-  { version: "1.4.0", stage: "draft", range: "^2.0.0", cooler: "Tarn 240" },
+  { version: "1.0.0", stage: "production", range: ">=1.0.0 <3.0.0", cooler: "Tarn 240", createdOn: "2025-05-05", releaseNotes: "First factory release for the Tarn 240." },
+  {
+    version: "1.0.1",
+    stage: "withdrawn",
+    range: ">=1.0.0 <3.0.0",
+    cooler: "Tarn 360",
+    createdOn: "2025-06-02",
+    withdrawn: { from: "pilot", on: "2025-06-20", reason: "Pump ramp too slow on cold start in the pilot run; replaced by 1.1.0." },
+  },
+  { version: "1.1.0", stage: "pilot", range: ">=1.1.0 <3.0.0", cooler: "Tarn 360", createdOn: "2025-07-07" },
+  { version: "1.2.0", stage: "validation", range: ">=1.1.0 <3.0.0", cooler: "Tarn 240", createdOn: "2025-08-04" },
+  { version: "1.3.0", stage: "review", range: "^2.0.0", cooler: "Tarn 360", createdOn: "2025-09-01" },
+  { version: "1.4.0", stage: "draft", range: "^2.0.0", cooler: "Tarn 240", createdOn: "2025-09-15" },
 ];
 
-const PATH: BuildStage[] = ["draft", "review", "validation", "pilot", "production"];
-
-/** Builds of the demo board at every stage, with real bank images, reviews, evidence and timelines. */
+/** Builds of the demo board at every stage, with real bank images, and the reviews, evidence and timelines their gates ask for. */
 export async function seedBuilds(db: Db) {
   const [board] = await db.select().from(boardModels).where(eq(boardModels.name, DEMO_BOARD.name));
   if (!board) throw new Error("demo board missing");
   await ensureProfileVersions(db, board.id);
   const engineer = await userId(db, "engineer@tarnwell.example");
-  const reviewers = [await userId(db, "engineer2@tarnwell.example"), await userId(db, "engineer3@tarnwell.example")];
+  // Reviewers are picked per build among those who wrote none of it, so their approvals count.
+  const reviewerPool = [await userId(db, "engineer2@tarnwell.example"), await userId(db, "engineer3@tarnwell.example"), await userId(db, "admin@tarnwell.example")];
   const release = await userId(db, "release@tarnwell.example");
   const revisions = await db.select().from(boardRevisions).where(eq(boardRevisions.boardModelId, board.id));
-  const fanAlias = components;
 
   for (const demo of DEMO_BUILDS) {
     const [exists] = await db.select({ id: builds.id }).from(builds).where(and(eq(builds.boardModelId, board.id), eq(builds.version, demo.version)));
@@ -184,36 +177,37 @@ export async function seedBuilds(db: Db) {
       .orderBy(profiles.name)
       .limit(2);
     if (versions.length === 0) continue;
-    const [fan] = await db.select().from(fanAlias).where(eq(fanAlias.id, cooler.fanComponentId));
-    const [pump] = await db.select().from(fanAlias).where(eq(fanAlias.id, cooler.pumpComponentId));
+    const [fan] = await db.select().from(components).where(eq(components.id, cooler.fanComponentId));
+    const [pump] = await db.select().from(components).where(eq(components.id, cooler.pumpComponentId));
     const check = checkBuild({
       revisionRange: demo.range,
       revisions,
       slots: versions.map((v) => ({ label: `${v.profileName} ${v.pv.version}`, document: v.pv.document, version: v.pv.version, boardRange: v.pv.boardRange, contentHash: v.pv.contentHash, cooler, fan: fan!, pump: pump! })),
     });
     if (!check.ok) throw new Error(`demo build ${demo.version} does not check: ${check.issues.join("; ")}`);
-
-    const firmware = Buffer.from(`LOOPKEEPER DEMO FIRMWARE ${demo.version}\n`.padEnd(256, "\0"), "latin1");
-    const firmwareUploadId = await storeDemoFile(db, "firmware", `tc1-fw-${demo.version}.bin`, "application/octet-stream", firmware, engineer);
-    const reached = demo.stage === "withdrawn" ? "pilot" : demo.stage;
-    const reachedIndex = PATH.indexOf(reached);
-    let labReportUploadId: string | null = null;
-    let measurementsUploadId: string | null = null;
-    if (reachedIndex >= PATH.indexOf("pilot")) {
-      labReportUploadId = await storeDemoFile(db, "lab_report", `lab-report-${demo.version}.pdf`, "application/pdf", tinyPdf(`Tarnwell lab report, build ${demo.version} (demo)`), release);
-      const hw = toHardwareContext({ cooler, fan: fan!, pump: pump!, revision: revisions[0]! });
-      // Invented lab figures: the estimate at each speed plus a small offset, as a rig would scatter.
-      const offsets = [0.8, -1.1, 0.4, 1.6, -0.5];
-      const lines = [MEASUREMENT_HEADER, ...[[30, 1400, 700], [40, 1800, 1100], [45, 2200, 1500], [50, 2600, 1900], [55, 2900, 2300]].map(([t, p, f], i) => {
-        const est = coolerNoise(hw, Math.min(f!, fan!.maxRpm), p!).totalDbA1m;
-        return `${t},${p},${Math.min(f!, fan!.maxRpm)},${(est + offsets[i]!).toFixed(1)}`;
-      })];
-      measurementsUploadId = await storeDemoFile(db, "measurements", `measurements-${demo.version}.csv`, "text/csv", Buffer.from(lines.join("\n") + "\n"), release);
-    }
-
+    const authors = new Set([engineer, ...versions.map((v) => v.pv.authorUserId)]);
+    const [first, second] = reviewerPool.filter((id) => !authors.has(id));
+    if (!first || !second) throw new Error(`demo build ${demo.version} has no two reviewers who wrote none of it`);
+    const reviewers = [first, second] as const;
+    const timeline = demoTimeline(new Date(`${demo.createdOn}T09:00:00Z`));
+    const top = reachedStage(demo.stage, demo.withdrawn?.from);
     await db.transaction(async (tx) => {
+      const firmwareUploadId = await storeDemoFile(tx, { kind: "firmware", name: `tc1-fw-${demo.version}.bin`, contentType: "application/octet-stream", bytes: demoFirmware(demo.version), uploadedByUserId: engineer, createdAt: timeline.createdAt });
+      let labReportUploadId: string | null = null;
+      let measurementsUploadId: string | null = null;
+      if (reached(top, "pilot")) {
+        // The gate compares with the estimate at the first slot's cooler and the first revision in range, as here.
+        const inRange = revisions.filter((r) => satisfiesRange(r.revision, demo.range));
+        const hw = toHardwareContext({ cooler, fan: fan!, pump: pump!, revision: inRange[0] ?? revisions[0]! });
+        const csv = demoMeasurementsCsv(hw, fan!.maxRpm);
+        assertDemoEvidencePasses(demo.version, csv, hw, DEMO_SOUND_TOLERANCE_DB);
+        const evidence = { uploadedByUserId: release, createdAt: timeline.labEvidence };
+        labReportUploadId = await storeDemoFile(tx, { kind: "lab_report", name: `lab-report-${demo.version}.pdf`, contentType: "application/pdf", bytes: tinyPdf(`Tarnwell lab report, build ${demo.version} (demo)`), ...evidence });
+        measurementsUploadId = await storeDemoFile(tx, { kind: "measurements", name: `measurements-${demo.version}.csv`, contentType: "text/csv", bytes: Buffer.from(csv), ...evidence });
+      }
       // Builds that reached pilot carry the bank signature made at that move.
-      const signature = reachedIndex >= PATH.indexOf("pilot") ? await bankSignatureFields(tx, { boardModelId: board.id, bankImage: check.image }) : {};
+      const signature = reached(top, "pilot") ? await bankSignatureFields(tx, { boardModelId: board.id, bankImage: check.image }) : {};
+      const last = demo.withdrawn ? new Date(`${demo.withdrawn.on}T15:00:00Z`) : top === "draft" ? timeline.createdAt : timeline[top as "review" | "validation" | "pilot" | "production"];
       const [b] = await tx
         .insert(builds)
         .values({
@@ -230,24 +224,24 @@ export async function seedBuilds(db: Db) {
           bankSha256: check.sha256,
           bankCrc32: check.crc32,
           releaseNotes: demo.releaseNotes ?? null,
-          withdrawnReason: demo.withdrawnReason ?? null,
+          withdrawnReason: demo.withdrawn?.reason ?? null,
+          createdAt: timeline.createdAt,
+          updatedAt: last,
           ...signature,
         })
         .returning({ id: builds.id });
       const buildId = b!.id;
       await tx.insert(buildSlots).values(versions.map((v, slotIndex) => ({ buildId, slotIndex, profileVersionId: v.pv.id })));
-      if (reachedIndex >= 1) {
-        const approvers = reachedIndex >= 2 ? reviewers : reviewers.slice(0, 1);
-        await tx.insert(buildReviews).values(approvers.map((reviewerUserId) => ({ buildId, reviewerUserId, verdict: "approve" as const, comment: "Curves and bank size checked." })));
-      }
-      const steps: { fromStage: BuildStage; toStage: BuildStage; actorUserId: string; reason: string | null }[] = [];
-      for (let i = 1; i <= reachedIndex; i++) {
-        steps.push({ fromStage: PATH[i - 1]!, toStage: PATH[i]!, actorUserId: i === 1 ? engineer : release, reason: PATH[i] === "production" ? (demo.releaseNotes ?? null) : null });
-      }
-      if (demo.stage === "withdrawn") steps.push({ fromStage: reached, toStage: "withdrawn", actorUserId: release, reason: demo.withdrawnReason ?? null });
-      // Spread the timeline over past days so it reads like a history.
-      const start = Date.now() - (steps.length + 1) * 86_400_000;
-      if (steps.length) await tx.insert(buildTransitions).values(steps.map((s, i) => ({ ...s, buildId, createdAt: new Date(start + (i + 1) * 86_400_000) })));
+      await insertDemoHistory(tx, {
+        buildId,
+        stage: demo.stage,
+        timeline,
+        askedByUserId: engineer,
+        releaseUserId: release,
+        reviewers,
+        releaseNotes: demo.releaseNotes ?? null,
+        withdrawn: demo.withdrawn ? { from: demo.withdrawn.from, at: new Date(`${demo.withdrawn.on}T15:00:00Z`), reason: demo.withdrawn.reason } : null,
+      });
     });
   }
   return db.select({ id: builds.id, stage: builds.stage }).from(builds).where(inArray(builds.boardModelId, [board.id]));

@@ -1,10 +1,13 @@
 import { and, eq, sql } from "drizzle-orm";
 import type { Database } from "../client";
-import { boardModels, boardRevisions, buildSlots, builds, buildTransitions, coolerModels, productionLots, profileVersions, profiles, users, type Build, type ProfileVersion } from "../schema";
+import { boardModels, boardRevisions, buildSlots, builds, components, coolerModels, productionLots, profileVersions, profiles, users, type Build, type ProfileVersion } from "../schema";
 import { bankSignatureFields } from "../bank-signatures";
 import { contentHashHex, crc32, encodeBank, sha256, toHex, type CoolingProfile } from "@/lib/engine";
 import { satisfiesRange, compareVersions } from "@/lib/versioning/semver-helpers";
 import { DEMO_BOARD } from "./hardware";
+import { toHardwareContext } from "@/lib/registry/hardware-context";
+import { assertDemoEvidencePasses, demoFirmware, demoMeasurementsCsv, demoTimeline, insertDemoHistory, storeDemoFile } from "./build-history";
+import { tinyPdf } from "./builds";
 
 /**
  * Support's demo data: a few published profile versions and builds (only where the
@@ -44,16 +47,18 @@ const DEMO_VERSIONS: { profile: string; version: string; doc: Doc; changelog: st
 ];
 
 const DEMO_BUILDS = [
-  { version: "3.0.0", stage: "production" as const, revisionRange: ">=1.1.0 <2.0.0", slots: [["Quiet", "1.0.0"], ["Performance", "1.0.0"]], withdrawnReason: null },
+  { version: "3.0.0", stage: "production" as const, createdOn: "2024-10-07", revisionRange: ">=1.1.0 <2.0.0", slots: [["Quiet", "1.0.0"], ["Performance", "1.0.0"]], withdrawn: null },
   {
     version: "3.0.1",
     stage: "withdrawn" as const,
+    createdOn: "2024-12-02",
     revisionRange: ">=1.1.0 <2.0.0",
     slots: [["Quiet", "1.1.0"], ["Performance", "1.0.0"]],
-    withdrawnReason: "Quiet 1.1.0 lets the liquid reach 52 °C at 250 W; replace with build 3.1.0.",
+    // Released, shipped in lot TW-2502, then withdrawn after field reports.
+    withdrawn: { from: "production" as const, on: "2025-02-24", reason: "Quiet 1.1.0 lets the liquid reach 52 °C at 250 W; replace with build 3.1.0." },
   },
-  { version: "3.1.0", stage: "production" as const, revisionRange: ">=1.1.0 <2.0.0", slots: [["Quiet", "1.2.0"], ["Performance", "1.1.0"]], withdrawnReason: null },
-  { version: "3.2.0", stage: "pilot" as const, revisionRange: ">=2.0.0 <3.0.0", slots: [["Quiet", "1.2.0"], ["Performance", "1.1.0"]], withdrawnReason: null },
+  { version: "3.1.0", stage: "production" as const, createdOn: "2025-01-20", revisionRange: ">=1.1.0 <2.0.0", slots: [["Quiet", "1.2.0"], ["Performance", "1.1.0"]], withdrawn: null },
+  { version: "3.2.0", stage: "production" as const, createdOn: "2025-02-17", revisionRange: ">=2.0.0 <3.0.0", slots: [["Quiet", "1.2.0"], ["Performance", "1.1.0"]], withdrawn: null },
 ];
 
 const DEMO_LOTS = [
@@ -107,7 +112,11 @@ export async function seedSupport(db: Database) {
   const [cooler] = await db.select().from(coolerModels).where(eq(coolerModels.name, "Tarn 240"));
   const [owner] = await db.select().from(users).where(sql`lower(${users.email}) = 'engineer@tarnwell.example'`);
   const [releaser] = await db.select().from(users).where(sql`lower(${users.email}) = 'release@tarnwell.example'`);
-  if (!board || !cooler || !owner || !releaser) throw new Error("support seed needs the demo board, cooler and users");
+  const [reviewer1] = await db.select().from(users).where(sql`lower(${users.email}) = 'engineer2@tarnwell.example'`);
+  const [reviewer2] = await db.select().from(users).where(sql`lower(${users.email}) = 'engineer3@tarnwell.example'`);
+  if (!board || !cooler || !owner || !releaser || !reviewer1 || !reviewer2) throw new Error("support seed needs the demo board, cooler and users");
+  // They wrote neither these builds nor their profile versions, so their approvals count.
+  const reviewers = [reviewer1.id, reviewer2.id] as const;
   const revisions = (await db.select().from(boardRevisions).where(eq(boardRevisions.boardModelId, board.id))).sort((a, b) => compareVersions(a.revision, b.revision));
 
   const byBuild = new Map<string, Build>();
@@ -129,9 +138,22 @@ export async function seedSupport(db: Database) {
     );
     if (!bank.ok) throw new Error(`demo build ${b.version} does not encode: ${bank.errors.map((e) => e.message).join("; ")}`);
     const image = bank.bytes;
+    const timeline = demoTimeline(new Date(`${b.createdOn}T09:00:00Z`));
+    const withdrawnAt = b.withdrawn ? new Date(`${b.withdrawn.on}T15:00:00Z`) : null;
     const created = await db.transaction(async (tx) => {
-      // Builds that reached pilot carry the bank signature made at that move.
-      const signature = ["pilot", "production", "withdrawn"].includes(b.stage) ? await bankSignatureFields(tx, { boardModelId: board.id, bankImage: image }) : {};
+      // Every demo build here reached the factory: firmware, lab evidence that passes the pilot gate, and a signed bank.
+      // The profiles are the Tarn 240's, so the gate compares with its estimate.
+      const [fan] = await tx.select().from(components).where(eq(components.id, cooler.fanComponentId));
+      const [pump] = await tx.select().from(components).where(eq(components.id, cooler.pumpComponentId));
+      const inRange = revisions.filter((r) => satisfiesRange(r.revision, b.revisionRange));
+      const hw = toHardwareContext({ cooler, fan: fan!, pump: pump!, revision: inRange[0]! });
+      const csv = demoMeasurementsCsv(hw, fan!.maxRpm);
+      assertDemoEvidencePasses(b.version, csv, hw, 3);
+      const evidence = { uploadedByUserId: releaser.id, createdAt: timeline.labEvidence };
+      const firmwareUploadId = await storeDemoFile(tx, { kind: "firmware", name: `tc1-fw-${b.version}.bin`, contentType: "application/octet-stream", bytes: demoFirmware(b.version), uploadedByUserId: releaser.id, createdAt: timeline.createdAt });
+      const labReportUploadId = await storeDemoFile(tx, { kind: "lab_report", name: `lab-report-${b.version}.pdf`, contentType: "application/pdf", bytes: tinyPdf(`Tarnwell lab report, build ${b.version} (demo)`), ...evidence });
+      const measurementsUploadId = await storeDemoFile(tx, { kind: "measurements", name: `measurements-${b.version}.csv`, contentType: "text/csv", bytes: Buffer.from(csv), ...evidence });
+      const signature = await bankSignatureFields(tx, { boardModelId: board.id, bankImage: image });
       const [row] = await tx
         .insert(builds)
         .values({
@@ -147,26 +169,32 @@ export async function seedSupport(db: Database) {
           bankSha256: toHex(sha256(image)),
           bankCrc32: new DataView(image.buffer, image.byteOffset).getUint32(image.length - 4, true),
           releaseNotes: `Demo build ${b.version}.`,
-          withdrawnReason: b.withdrawnReason,
+          withdrawnReason: b.withdrawn?.reason ?? null,
+          firmwareUploadId,
+          labReportUploadId,
+          measurementsUploadId,
+          createdAt: timeline.createdAt,
+          updatedAt: withdrawnAt ?? timeline.production,
           ...signature,
         })
         .onConflictDoNothing()
         .returning();
-      if (row) await tx.insert(buildSlots).values(slotVersions.map((v, i) => ({ buildId: row.id, slotIndex: i, profileVersionId: v!.id })));
+      if (row) {
+        await tx.insert(buildSlots).values(slotVersions.map((v, i) => ({ buildId: row.id, slotIndex: i, profileVersionId: v!.id })));
+        await insertDemoHistory(tx, {
+          buildId: row.id,
+          stage: b.stage,
+          timeline,
+          askedByUserId: releaser.id,
+          releaseUserId: releaser.id,
+          reviewers,
+          releaseNotes: `Demo build ${b.version}.`,
+          withdrawn: b.withdrawn && withdrawnAt ? { from: b.withdrawn.from, at: withdrawnAt, reason: b.withdrawn.reason } : null,
+        });
+      }
       return row;
     });
     if (created) byBuild.set(b.version, created);
-  }
-
-  // The withdrawal as the release manager made it, so screens can say when and by whom (also
-  // added to a database seeded before this was recorded).
-  for (const b of DEMO_BUILDS.filter((d) => d.stage === "withdrawn")) {
-    const build = byBuild.get(b.version);
-    if (!build) continue;
-    const [moved] = await db.select({ id: buildTransitions.id }).from(buildTransitions).where(and(eq(buildTransitions.buildId, build.id), eq(buildTransitions.toStage, "withdrawn"))).limit(1);
-    if (!moved) {
-      await db.insert(buildTransitions).values({ buildId: build.id, fromStage: "production", toStage: "withdrawn", actorUserId: releaser.id, reason: b.withdrawnReason, createdAt: new Date("2025-02-24T09:30:00Z") });
-    }
   }
 
   for (const lot of DEMO_LOTS) {

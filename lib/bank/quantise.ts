@@ -17,11 +17,16 @@ const clamp = (v: number, lo: number, hi: number): number => Math.min(hi, Math.m
 /*
  * Every value is rounded in the direction that gives more cooling, so the
  * as-flashed curve is never less safe than the authored one: duties and
- * ramp-up limits up, temperatures, hysteresis and ramp-down limits down.
+ * ramp-up limits up; point, critical and fan-stop temperatures down (the duty
+ * rises, full speed and the fan start come at a lower temperature); ramp-down
+ * limits down (the duty falls more slowly); hysteresis up, because the held
+ * temperature follows a falling liquid temperature only once it is more than
+ * the hysteresis below, so a wider band keeps the higher duty (and the fans
+ * turning) longer. docs/engine.md gives the whole rule.
  */
 export const tempCode = (tempC: number): number => clamp(Math.floor(tempC / TEMP_STEP_C + EPS), 0, MAX_TEMP_CODE);
 export const dutyCode = (dutyPct: number): number => clamp(Math.ceil(dutyPct / DUTY_STEP_PCT - EPS), 0, MAX_DUTY_CODE);
-export const hysteresisCode = (hysteresisC: number): number => clamp(Math.floor(hysteresisC / HYSTERESIS_STEP_C + EPS), 0, MAX_HYSTERESIS_CODE);
+export const hysteresisCode = (hysteresisC: number): number => clamp(Math.ceil(hysteresisC / HYSTERESIS_STEP_C - EPS), 0, MAX_HYSTERESIS_CODE);
 export const rampUpCode = (pctPerSec: number): number => clamp(Math.ceil(pctPerSec / RAMP_STEP_PCT_PER_SEC - EPS), 1, MAX_RAMP_CODE);
 export const rampDownCode = (pctPerSec: number): number => clamp(Math.floor(pctPerSec / RAMP_STEP_PCT_PER_SEC + EPS), 1, MAX_RAMP_CODE);
 
@@ -44,7 +49,7 @@ function quantiseCurve<C extends CurveSettings>(curve: C): C {
 /**
  * The profile as the board will run it after encoding: temperatures in 0.5 °C
  * steps (rounded down), duties in 0.5 % steps (rounded up), hysteresis in
- * 0.1 °C steps (down), ramp limits in 0.5 %/s steps (up for rising, down for
+ * 0.1 °C steps (up: a wider band holds the higher duty longer), ramp limits in 0.5 %/s steps (up for rising, down for
  * falling). Names and text are kept. For the editor's as-flashed preview.
  */
 export function quantise<P extends ProfileSettings | CoolingProfile>(profile: P): P {

@@ -112,5 +112,5 @@ export type { RevisionCompatibility, RevisionCompatibilityInput } from "../versi
 export { compareVersions, sortVersions, latestVersion, isValidVersion, isValidRange, satisfiesRange } from "../versioning/semver-helpers";
 
 // ── Tach ─────────────────────────────────────────────────────────────────────
-/** RPM = 60·f/p; real = reading × 2 / p (Intel 4-wire PWM fan spec rev 1.3 §2.1.4). */
+/** RPM = 60·f/p; real = reading × 2 / p (Intel 4-wire PWM fan spec rev 1.3 §2.1.3). */
 export { rpmFromTachHz, rpmFromPulsePeriodMs, realRpmFromReading, readingFromRealRpm, STANDARD_TACH_PULSES_PER_REV } from "../tach/tach";

@@ -32,6 +32,12 @@ const schema = z.object({
   SMTP_HOST: z.string().default("127.0.0.1"),
   SMTP_PORT: z.coerce.number().int().default(2525),
   MAIL_FROM: z.string().default("Loopkeeper <loopkeeper@loopkeeper.invalid>"),
+  /** The lab's addresses, comma-separated: told when a build enters lab validation. */
+  LAB_MAIL_LIST: z
+    .string()
+    .default("")
+    .transform((v) => v.split(",").map((a) => a.trim()).filter(Boolean))
+    .pipe(z.array(z.email("LAB_MAIL_LIST must be e-mail addresses separated by commas"))),
   REQUIRED_APPROVALS: z.coerce.number().int().min(1).max(10).default(2),
   SOUND_TOLERANCE_DB: z.coerce.number().min(0).max(20).default(3),
   API_RATE_LIMIT_PER_MIN: z.coerce.number().int().min(1).default(600),

@@ -2,13 +2,13 @@ import { requireFinite } from "../guards/input-error";
 
 /**
  * Pulses per revolution of a 4-wire PWM fan's tach output (Intel, "4-Wire Pulse
- * Width Modulation (PWM) Controlled Fans Specification", Rev 1.3, §2.1.4).
+ * Width Modulation (PWM) Controlled Fans Specification", Rev 1.3, §2.1.3).
  */
 export const STANDARD_TACH_PULSES_PER_REV = 2;
 
 /**
  * Speed from tach frequency: RPM = 60·f / p (p = 2 for a 4-wire PWM fan, Intel
- * 4-Wire PWM fan spec rev 1.3 §2.1.4: 50 Hz → 1,500 RPM).
+ * 4-Wire PWM fan spec rev 1.3 §2.1.3: 50 Hz → 1,500 RPM).
  */
 export function rpmFromTachHz(tachHz: number, pulsesPerRev = STANDARD_TACH_PULSES_PER_REV): number {
   requireFinite("tachHz", tachHz, 0);

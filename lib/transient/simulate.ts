@@ -22,13 +22,25 @@ export interface TransientMotor {
 export interface TransientSample {
   tSec: number;
   tempC: number | null;
+  /** The sensor-loss duty applies: the reading has been missing for more than SENSOR_GLITCH_SAMPLES samples. */
   sensorLost: boolean;
+  /** This sample had no reading and repeated the previous output (a bridged glitch). */
+  glitchHeld: boolean;
   pump: TransientMotor;
   fans: TransientMotor;
 }
 
 /** Longest trace accepted, samples. */
 export const MAX_TRACE_SAMPLES = 1_000_000;
+
+/**
+ * Consecutive samples without a reading that are bridged by keeping the last output
+ * and state. One missing reading (an ADC read during a spike, a loose contact) must
+ * neither reset the hysteresis nor cycle the fans through the sensor-loss duty and
+ * back; from the next missing sample on, the sensor counts as lost. The firmware's
+ * integer control law bridges the same number of ticks.
+ */
+export const SENSOR_GLITCH_SAMPLES = 1;
 
 interface CurveState {
   heldC: number | null;
@@ -50,22 +62,16 @@ export function applyRampPct(fromPct: number, targetPct: number, dtSec: number, 
   return Math.max(targetPct, fromPct - downPctPerSec * dtSec);
 }
 
-function step(curve: CurveSettings, profile: ProfileSettings, state: CurveState, tempC: number | null, dtSec: number, first: boolean): void {
-  if (tempC === null) {
-    // Sensor loss: jump to the fallback duty at once, no ramp (safety first).
-    state.heldC = null;
-    state.dutyPct = profile.sensorLossDutyPct;
-    return;
-  }
-  const held = state.heldC === null || first ? tempC : applyHysteresisC(state.heldC, tempC, curve.hysteresisC);
+function step(curve: CurveSettings, state: CurveState, tempC: number, critical: boolean, dtSec: number, started: boolean): void {
+  const held = state.heldC === null ? tempC : applyHysteresisC(state.heldC, tempC, curve.hysteresisC);
   state.heldC = held;
-  if (tempC >= profile.criticalTempC) {
+  if (critical) {
     // At the critical temperature full speed is not delayed by the ramp limit.
     state.dutyPct = 100;
     return;
   }
   const target = dutyAtTemp(curve.points, held);
-  state.dutyPct = first ? target : applyRampPct(state.dutyPct, target, dtSec, curve.rampUpPctPerSec, curve.rampDownPctPerSec);
+  state.dutyPct = started ? applyRampPct(state.dutyPct, target, dtSec, curve.rampUpPctPerSec, curve.rampDownPctPerSec) : target;
 }
 
 function motorOut(state: CurveState, component: MotorComponent, stopped: boolean): TransientMotor {
@@ -94,32 +100,58 @@ function checkTrace(trace: readonly TraceSample[]): void {
  * What the firmware does over a liquid temperature trace: per curve, the
  * hysteresis play operator (applyHysteresisC), the curve duty at the held
  * temperature, then the ramp-rate limits (%/s up and down) between samples.
- * Overrides, without ramp: sensor loss → sensor-loss duty; at or above the
- * critical temperature → 100 %. Fans stop while the held fan temperature is
- * below the stop temperature (so hysteresis also applies to fan stop). The
- * first sample starts in steady state. Throws EngineInputError on a bad trace.
+ * The first reading starts in steady state.
+ *
+ * Overrides, without ramp:
+ * - at or above the critical temperature → 100 %;
+ * - a missing reading (`tempC: null`) for at most SENSOR_GLITCH_SAMPLES samples
+ *   after a reading keeps the previous output and state (`glitchHeld`); longer,
+ *   or before any reading, → the sensor-loss duty at once and the fans run. The
+ *   held temperatures are kept through both, so when readings return the
+ *   hysteresis continues where it was and the duty ramps down from the
+ *   sensor-loss duty instead of cycling.
+ *
+ * Fan stop is an immediate cut, not a ramp: the fans stop while the held fan
+ * temperature is below the stop temperature (so the hysteresis also keeps the
+ * stop from chattering). Below the lowest duty it follows, a fan's speed no
+ * longer follows the duty (it holds its minimum speed or stops), so ramping the
+ * duty toward 0 would not slow it any further, only delay the stop. The fan
+ * duty keeps following the curve while stopped, so the fans restart at the
+ * curve's duty. Throws EngineInputError on a bad trace.
  */
 export function simulateTransient(profile: ProfileSettings, hw: HardwareContext, trace: readonly TraceSample[]): TransientSample[] {
   checkTrace(trace);
   const pump: CurveState = { heldC: null, dutyPct: 0 };
   const fans: CurveState = { heldC: null, dutyPct: 0 };
   const out: TransientSample[] = [];
-  let prevT = 0;
-  trace.forEach((s, i) => {
-    const dt = i === 0 ? 0 : s.tSec - prevT;
+  let started = false;
+  let missing = 0;
+  let prevT = trace[0]?.tSec ?? 0;
+  for (const s of trace) {
+    const dt = s.tSec - prevT;
     prevT = s.tSec;
-    step(profile.pump, profile, pump, s.tempC, dt, i === 0);
-    step(profile.fans, profile, fans, s.tempC, dt, i === 0);
+    const last = out[out.length - 1];
+    if (s.tempC === null) {
+      missing++;
+      if (last && !last.sensorLost && missing <= SENSOR_GLITCH_SAMPLES) {
+        out.push({ ...last, tSec: s.tSec, tempC: null, glitchHeld: true });
+        continue;
+      }
+      // Sensor lost: the fallback duty at once, no ramp (the liquid may be hot).
+      pump.dutyPct = profile.sensorLossDutyPct;
+      fans.dutyPct = profile.sensorLossDutyPct;
+      started = true;
+      out.push({ tSec: s.tSec, tempC: null, sensorLost: true, glitchHeld: false, pump: motorOut(pump, hw.pump, false), fans: motorOut(fans, hw.fan, false) });
+      continue;
+    }
+    missing = 0;
+    const critical = s.tempC >= profile.criticalTempC;
+    step(profile.pump, pump, s.tempC, critical, dt, started);
+    step(profile.fans, fans, s.tempC, critical, dt, started);
+    started = true;
     const stopC = profile.fans.stopBelowTempC;
-    const fansStopped =
-      s.tempC !== null && s.tempC < profile.criticalTempC && stopC !== undefined && fans.heldC !== null && fans.heldC < stopC;
-    out.push({
-      tSec: s.tSec,
-      tempC: s.tempC,
-      sensorLost: s.tempC === null,
-      pump: motorOut(pump, hw.pump, false),
-      fans: motorOut(fans, hw.fan, fansStopped),
-    });
-  });
+    const fansStopped = !critical && stopC !== undefined && fans.heldC !== null && fans.heldC < stopC;
+    out.push({ tSec: s.tSec, tempC: s.tempC, sensorLost: false, glitchHeld: false, pump: motorOut(pump, hw.pump, false), fans: motorOut(fans, hw.fan, fansStopped) });
+  }
   return out;
 }

@@ -49,6 +49,10 @@ function safetyRules(doc: CoolingProfile, out: ValidationIssue[]): void {
   if (stop !== undefined && stop >= doc.criticalTempC) {
     out.push(error("fans.stop_at_or_above_critical", "/fans/stopBelowTempC", `The fans would stop below ${fmt(stop)} °C, at or above the critical temperature ${fmt(doc.criticalTempC)} °C: set the stop temperature well below it.`));
   }
+  if (stop !== undefined && doc.fans.hysteresisC === 0) {
+    // The held temperature decides the stop; with no band every wobble of the reading around the stop temperature starts or stops the fans.
+    out.push(warning("fans.stop_without_hysteresis", "/fans/hysteresisC", `The fans stop below ${fmt(stop)} °C with no hysteresis: a reading wobbling around ${fmt(stop)} °C would stop and start them on every sample (chatter). Give the fan curve a hysteresis, e.g. 1.5 °C.`));
+  }
 }
 
 function hardwareRules(doc: CoolingProfile, hw: HardwareContext, out: ValidationIssue[]): void {

@@ -58,7 +58,17 @@ test.describe("sign-in", () => {
     await expect(user.getByRole("heading", { name: "Dashboard" })).toBeVisible();
 
     const row = admin.getByRole("row").filter({ hasText: email });
+    // A role change waits for confirmation; cancelling leaves the role as it was.
+    await row.getByLabel("Role of Temporary Tester").selectOption("support");
+    const roleDialog = admin.getByRole("dialog", { name: "Change Temporary Tester's role to Support?" });
+    await roleDialog.getByRole("button", { name: "Cancel" }).click();
+    await expect(row.getByLabel("Role of Temporary Tester")).toHaveValue("viewer");
+
     await row.getByRole("button", { name: /Disable/ }).click();
+    const dialog = admin.getByRole("dialog", { name: "Disable Temporary Tester's account?" });
+    await expect(dialog).toContainText(email);
+    await expect(row.getByText("active")).toBeVisible();
+    await dialog.getByRole("button", { name: "Disable account" }).click();
     await expect(row.getByText("disabled")).toBeVisible();
 
     // The open session stops working at its next request.
@@ -69,5 +79,29 @@ test.describe("sign-in", () => {
     await user.getByLabel("Password").fill("temporary-password-1");
     await user.getByRole("button", { name: "Sign in" }).click();
     await expect(user.getByTestId("sign-in-error")).toContainText("Sign-in failed");
+  });
+
+  test("revoking an API token asks first, naming the token, and then refuses it", async ({ page, playwright, baseURL }) => {
+    const name = `Dialog station ${Date.now()}`;
+    await signInPage(page, ACCOUNTS.support);
+    await page.goto("/account");
+    await page.getByLabel("Name", { exact: true }).fill(name);
+    await page.getByRole("button", { name: "Create token" }).click();
+    const secret = (await page.getByTestId("new-token-secret").textContent())?.trim() ?? "";
+    expect(secret.length).toBeGreaterThan(20);
+    const row = page.getByRole("row").filter({ hasText: name });
+    await row.getByRole("button", { name: `Revoke ${name}` }).click();
+    const dialog = page.getByRole("dialog", { name: `Revoke the token "${name}"?` });
+    await expect(dialog).toContainText("cannot be undone");
+    // Escape closes it and nothing happens.
+    await page.keyboard.press("Escape");
+    await expect(dialog).toBeHidden();
+    const station = await playwright.request.newContext({ baseURL, extraHTTPHeaders: { authorization: `Bearer ${secret}` } });
+    expect((await station.get("/api/v1/me")).status()).toBe(200);
+    await row.getByRole("button", { name: `Revoke ${name}` }).click();
+    await dialog.getByRole("button", { name: "Revoke token" }).click();
+    await expect(row.getByText("revoked")).toBeVisible();
+    expect((await station.get("/api/v1/me")).status()).toBe(401);
+    await station.dispose();
   });
 });

@@ -68,50 +68,94 @@ test("a build goes from draft to the factory and is withdrawn, with reviews, lab
   await expect(engineer.getByText("Estimates, not measurements")).toBeVisible();
   await engineer.getByRole("button", { name: "Ask for review" }).click();
   await expect(engineer.getByRole("heading", { level: 1 })).toContainText("In review");
-  // The author has no approve button: the server would refuse it anyway.
+  // The author has no approve button: the server would refuse it anyway, and says why.
   await expect(engineer.getByRole("button", { name: "Approve" })).toHaveCount(0);
+  await expect(engineer.getByTestId("review-refusal")).toContainText("You created this build");
 
-  // Two other engineers approve.
+  // The release manager watches the checklist of the next stage fill in.
+  const release = await as(browser, "release@tarnwell.example", buildUrl);
+  const checklist = (stage: string) => release.getByRole("list", { name: `Checklist for ${stage}` });
+  const line = (stage: string, text: string) => checklist(stage).getByRole("listitem").filter({ hasText: text });
+  const promote = release.getByRole("button", { name: "Promote to lab validation" });
+  await expect(line("lab validation", "Approvals 0 of 2")).toHaveAttribute("data-state", "unmet");
+  await expect(promote).toBeDisabled();
+
+  // Two other engineers approve; each approval is listed as counting.
   for (const [i, email] of ["engineer2@tarnwell.example", "engineer3@tarnwell.example"].entries()) {
     const reviewer = await as(browser, email, buildUrl);
     await reviewer.getByLabel("Comment").fill("Curves and bank size look right.");
     await reviewer.getByRole("button", { name: "Approve" }).click();
-    await expect(reviewer.getByRole("list", { name: "Reviews" }).getByText("approved", { exact: true })).toHaveCount(i + 1);
+    await expect(reviewer.getByRole("list", { name: "Reviews" }).getByText("Counts toward the approvals.")).toHaveCount(i + 1);
+    // A second approval would be refused: the form now changes the reviewer's verdict instead.
+    await expect(reviewer.getByText("You approved; sending again changes your verdict.")).toBeVisible();
     await reviewer.context().close();
+    await release.reload();
+    await expect(line("lab validation", `Approvals ${i + 1} of 2`)).toHaveAttribute("data-state", i === 0 ? "unmet" : "met");
+    await (i === 0 ? expect(promote).toBeDisabled() : expect(promote).toBeEnabled());
   }
-
-  // The release manager takes it through validation, pilot and production.
-  const release = await as(browser, "release@tarnwell.example", buildUrl);
-  await expect(release.getByText("Approvals: 2 of 2 needed")).toBeVisible();
-  await release.getByRole("button", { name: "Promote to lab validation" }).click();
+  await promote.click();
   await expect(release.getByRole("heading", { level: 1 })).toContainText("Lab validation");
+
+  // Lab evidence arrives; the pilot checklist follows it.
+  const toPilot = release.getByRole("button", { name: "Promote to pilot run" });
+  await expect(line("pilot run", "Lab report attached")).toHaveAttribute("data-state", "unmet");
+  await expect(line("pilot run", "Measured sound within tolerance")).toHaveAttribute("data-state", "unmet");
+  await expect(toPilot).toBeDisabled();
   await release.getByLabel("Lab report (PDF)").setInputFiles({ name: "lab-report.pdf", mimeType: "application/pdf", buffer: tinyPdf() });
   await expect(release.getByRole("link", { name: "lab-report.pdf" })).toBeVisible();
+  await expect(line("pilot run", "Lab report attached")).toHaveAttribute("data-state", "met");
+  await expect(toPilot).toBeDisabled();
   await release.getByLabel("Measurements (CSV)").setInputFiles({ name: "measurements.csv", mimeType: "text/csv", buffer: measurementsCsv() });
   await expect(release.getByTestId("sound-plot")).toBeVisible();
   // Measured, corrected for the room's background, and estimated.
   await expect(release.getByTestId("sound-plot").locator(".recharts-line")).toHaveCount(3);
   await expect(release.getByText("no compared point is louder than the estimate by more than that.")).toBeVisible();
+  await expect(line("pilot run", "Measurement CSV attached")).toHaveAttribute("data-state", "met");
+  await expect(line("pilot run", "Measured sound within tolerance")).toHaveAttribute("data-state", "met");
   await expectAccessible(release);
-  await release.getByRole("button", { name: "Promote to pilot run" }).click();
+  await toPilot.click();
   await expect(release.getByRole("heading", { level: 1 })).toContainText("Pilot run");
-  await release.getByLabel("Release notes").fill("First factory run of the e2e build.");
-  await release.getByRole("button", { name: "Release to the factory" }).click();
+
+  // Release to the factory happens only after confirming in a dialog that names the build.
+  await release.getByRole("button", { name: "Release to the factory…" }).click();
+  const dialog = release.getByRole("dialog", { name: `Release build ${title} to the factory?` });
+  await expect(dialog).toBeVisible();
+  await expect(dialog).toContainText("This cannot be undone.");
+  const confirmRelease = dialog.getByRole("button", { name: "Release to the factory" });
+  await expect(confirmRelease).toBeDisabled();
+  await expectAccessible(release);
+  // Cancelling changes nothing.
+  await dialog.getByRole("button", { name: "Cancel" }).click();
+  await expect(dialog).toBeHidden();
+  await expect(release.getByRole("heading", { level: 1 })).toContainText("Pilot run");
+  await release.getByRole("button", { name: "Release to the factory…" }).click();
+  await dialog.getByLabel("Release notes").fill("First factory run of the e2e build.");
+  await confirmRelease.click();
+  await expect(dialog).toBeHidden();
   await expect(release.getByRole("heading", { level: 1 })).toContainText("Factory release");
 
-  // The mails arrive in the local mailbox.
+  // The stage mails arrive in the local mailbox.
   const admin = await as(browser, "admin@tarnwell.example", "/admin/mailbox");
-  for (const subject of [`Review requested: build ${title}`, `approved build ${title}`, `Build ${title} promoted to factory release`]) {
+  for (const subject of [
+    `Build ${title} is waiting for your review`,
+    `Your build ${title} was approved`,
+    `Build ${title} has entered lab validation`,
+    `Build ${title} has entered the pilot run`,
+    `Build ${title} was released to the factory`,
+  ]) {
     await expect(admin.getByText(subject).first()).toBeVisible({ timeout: 30_000 });
   }
   await expectAccessible(admin);
 
-  // Then it turns out bad and is withdrawn with a reason.
-  await release.getByLabel("Reason for withdrawing").fill("Fan ramp too aggressive on returned units.");
-  await release.getByRole("button", { name: "Withdraw build" }).click();
+  // Then it turns out bad and is withdrawn with a reason, behind its own confirmation.
+  await expect(release.getByLabel("Reason for withdrawing")).toHaveCount(0);
+  await release.getByRole("button", { name: "Withdraw build…" }).click();
+  const withdraw = release.getByRole("dialog", { name: `Withdraw build ${title}?` });
+  await withdraw.getByLabel("Reason for withdrawing").fill("Fan ramp too aggressive on returned units.");
+  await withdraw.getByRole("button", { name: "Withdraw build" }).click();
   await expect(release.getByRole("heading", { level: 1 })).toContainText("Withdrawn");
   await expect(release.getByRole("alert").filter({ hasText: "This build was withdrawn" })).toContainText("Fan ramp too aggressive");
-  await expect(admin.getByText(`Build ${title} withdrawn`).first()).toBeVisible({ timeout: 30_000 });
+  await expect(admin.getByText(`Build ${title} was withdrawn`).first()).toBeVisible({ timeout: 30_000 });
   await expect(release.getByTestId("timeline")).toContainText("Withdrawn");
 });
 

@@ -126,7 +126,7 @@ describe("build stages", () => {
     err = await refusal(moveBuild(release, { id: b.id, from: "pilot", to: "production" }));
     expect(err.message).toMatch(/release notes/i);
     await moveBuild(release, { id: b.id, from: "pilot", to: "production", releaseNotes: "Factory release." });
-    const mails = await getDb().select().from(mailOutbox).where(eq(mailOutbox.subject, `[Loopkeeper] Build TC-1 cooler controller ${(await getDb().select().from(builds).where(eq(builds.id, b.id)))[0]!.version} promoted to factory release`));
+    const mails = await getDb().select().from(mailOutbox).where(eq(mailOutbox.subject, `[Loopkeeper] Build TC-1 cooler controller ${(await getDb().select().from(builds).where(eq(builds.id, b.id)))[0]!.version} was released to the factory`));
     expect(mails).toHaveLength(1);
     expect(mails[0]!.toAddresses).toEqual(expect.arrayContaining(["release@tarnwell.example", "support@tarnwell.example"]));
   });

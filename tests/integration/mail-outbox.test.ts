@@ -54,7 +54,7 @@ describe("outgoing mail", () => {
     const [row] = await db.select().from(builds).where(eq(builds.id, b.id));
     expect(row!.stage).toBe("review");
 
-    const subject = `[Loopkeeper] Review requested: build TC-1 cooler controller ${row!.version}`;
+    const subject = `[Loopkeeper] Build TC-1 cooler controller ${row!.version} is waiting for your review`;
     const smtp = { host: "127.0.0.1", port, from: "Loopkeeper <loopkeeper@loopkeeper.invalid>" };
     // Each pass stops at its first failure, so older due rows from other tests may come first.
     let [mail] = await db.select().from(mailOutbox).where(eq(mailOutbox.subject, subject));

@@ -6,7 +6,7 @@ import { checkPumpSpeed } from "@/lib/support/tach-check";
 const pump = { rpmAtMinDuty: 1200, maxRpm: 2800 };
 
 describe("pump speed from a customer's tach reading", () => {
-  it("a 4-pulse pump at full speed, read by a host that counts 2 pulses (Intel 4-Wire PWM fan spec rev 1.3 §2.1.4), is fine once converted", () => {
+  it("a 4-pulse pump at full speed, read by a host that counts 2 pulses (Intel 4-Wire PWM fan spec rev 1.3 §2.1.3), is fine once converted", () => {
     // The host shows twice the real speed: 5,600 RPM for 2,800 RPM real (common practice).
     const real = realRpmFromReading(5600, 4);
     expect(real).toBe(2800);

@@ -219,7 +219,7 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
               </p>
             )}
             {plotted.evaluation && hw ? (
-              <div className={plotted.stale ? "pointer-events-none opacity-40 grayscale" : undefined} aria-hidden={plotted.stale || undefined}>
+              <div className={plotted.stale ? "pointer-events-none [&_svg]:opacity-40 [&_svg]:grayscale" : undefined} aria-hidden={plotted.stale || undefined}>
                 <LiveCurvePlot
                   rows={plotted.evaluation.rows}
                   limits={limits}

@@ -6,10 +6,10 @@ import { getBuild } from "@/db/builds";
 import { emailsByRole } from "@/db/mail";
 import type { Build, BuildStage } from "@/db/schema";
 import { AppError } from "@/lib/api/errors";
-import { can, type Role } from "@/lib/auth/roles";
+import { can, ROLES, type Role } from "@/lib/auth/roles";
 import { reviewerEligibility } from "@/lib/release/approvals";
 import { gateIssues } from "@/lib/release/gates";
-import { releaseMail, reviewRequestedMail, verdictMail, type BuildMailFacts } from "@/lib/release/mail";
+import { buildMail, type BuildMailFacts } from "@/lib/release/mail";
 import { capabilityFor } from "@/lib/release/transitions";
 import { env } from "@/lib/platform/env";
 import { kickMailSender } from "@/lib/platform/mail/sender";
@@ -17,16 +17,38 @@ import { buildAuthorship, gateRequirements } from "./gate";
 
 type Mover = AuditActor & { userId: string; role: Role; name: string };
 
-async function mailFacts(tx: Tx, build: Build, actorName: string): Promise<BuildMailFacts> {
+async function mailFacts(tx: Tx, build: Build, actorName: string): Promise<BuildMailFacts & { authorEmail: string | null }> {
   const summary = await getBuild(tx, { id: build.id });
-  return { buildId: build.id, boardModel: summary?.boardModel ?? "Board", version: build.version, actorName, baseUrl: env().NEXTAUTH_URL };
+  return { buildId: build.id, boardModel: summary?.boardModel ?? "Board", version: build.version, actorName, baseUrl: env().NEXTAUTH_URL, authorEmail: summary?.authorEmail ?? null };
 }
 
-async function mailsFor(tx: Tx, build: Build, to: BuildStage, mover: Mover, reason: string | null) {
+/** Roles whose holders may review a build (and so be asked to). */
+const REVIEWING_ROLES = ROLES.filter((r) => can(r, "build:review"));
+
+/**
+ * Who hears of a stage change: review requests go only to people the server would let
+ * approve this build; lab validation to release managers and the lab's list; pilot, factory
+ * release and withdrawal to release managers and the build's author, the last two to support too.
+ */
+async function mailsFor(tx: Tx, build: Build, to: BuildStage, mover: Mover, note: string | null) {
   const facts = await mailFacts(tx, build, mover.name);
-  if (to === "review") return reviewRequestedMail(facts, await emailsByRole(tx, { roles: ["engineer", "admin"], exceptUserIds: [build.authorUserId] }));
-  if (to === "production" || to === "withdrawn") return releaseMail(facts, to, await emailsByRole(tx, { roles: ["release_manager", "support"] }), reason);
-  return [];
+  const author = facts.authorEmail ? [facts.authorEmail] : [];
+  switch (to) {
+    case "review": {
+      const authorship = await buildAuthorship(tx, build);
+      const except = [authorship.buildAuthorUserId, ...authorship.profileAuthorUserIds];
+      return buildMail("review_requested", facts, await emailsByRole(tx, { roles: REVIEWING_ROLES, exceptUserIds: except }));
+    }
+    case "validation":
+      return buildMail("validation", facts, [...(await emailsByRole(tx, { roles: ["release_manager"] })), ...env().LAB_MAIL_LIST]);
+    case "pilot":
+      return buildMail("pilot", facts, [...(await emailsByRole(tx, { roles: ["release_manager"] })), ...author]);
+    case "production":
+    case "withdrawn":
+      return buildMail(to, facts, [...(await emailsByRole(tx, { roles: ["release_manager", "support"] })), ...author], note);
+    default:
+      return [];
+  }
 }
 
 /** Moves a build to `to` when the mover's role and the stage's gate allow it; then nudges the mail sender. */
@@ -63,8 +85,8 @@ function reviewInput(reviewer: Mover, input: ReviewRequest) {
     ...input,
     ineligible: (tx: Tx, build: Build) => reviewerProblem(tx, build, reviewer),
     mails: async (tx: Tx, build: Build) => {
-      const author = await getBuild(tx, { id: build.id });
-      return author ? verdictMail(await mailFacts(tx, build, reviewer.name), author.authorEmail, input.verdict, input.comment) : [];
+      const facts = await mailFacts(tx, build, reviewer.name);
+      return facts.authorEmail ? buildMail(input.verdict === "approve" ? "approved" : "changes_requested", facts, [facts.authorEmail], input.comment) : [];
     },
   };
 }

@@ -34,10 +34,10 @@ export async function demoBoardId(): Promise<string> {
 }
 
 /** A draft build by `authorEmail`, made through the same check and insert the API uses. */
-export async function freshDraftBuild(opts: { authorEmail?: string; revisionRange?: string } = {}) {
+export async function freshDraftBuild(opts: { authorEmail?: string; revisionRange?: string; profileAuthorEmail?: string } = {}) {
   const db = getDb();
   const author = await demoActor(opts.authorEmail ?? "engineer@tarnwell.example");
-  const versions = await freshProfileVersions();
+  const versions = await freshProfileVersions(opts.profileAuthorEmail);
   const boardModelId = await demoBoardId();
   const revisionRange = opts.revisionRange ?? ">=1.0.0 <3.0.0";
   const { check } = await checkSlots(db, { boardModelId, revisionRange, profileVersionIds: versions.map((v) => v.id) });

@@ -26,7 +26,7 @@ describe("axis ticks", () => {
 describe("handle positions", () => {
   const fan = exampleHardware().fan; // 20 % → 500 RPM, 100 % → 2000 RPM (examples/cooler-360.hardware.json)
   it("sit on the motor's speed above its minimum duty and read back the same duty", () => {
-    // Intel 4-wire PWM fan spec rev 1.3 §2.1.3 behaviour as the engine models it: linear from (20 %, 500) to (100 %, 2000).
+    // Intel 4-wire PWM fan spec rev 1.3 §3.4 (holds minimum speed below minimum duty) as the engine models it: linear from (20 %, 500) to (100 %, 2000).
     expect(dutyToHandleRpm(60, fan)).toBe(1250);
     expect(dutyToHandleRpm(100, fan)).toBe(2000);
     expect(dutyToHandleRpm(10, fan)).toBe(250);

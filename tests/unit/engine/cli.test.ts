@@ -239,7 +239,7 @@ describe("cli bank and inspect", { timeout: 60_000 }, () => {
 
 describe("cli tach", { timeout: 60_000 }, () => {
   it("converts a reading and a frequency", () => {
-    // Intel 4-Wire PWM fan spec rev 1.3 §2.1.4: RPM = 60·f/2; 50 Hz → 1,500 RPM.
+    // Intel 4-Wire PWM fan spec rev 1.3 §2.1.3: RPM = 60·f/2; 50 Hz → 1,500 RPM.
     expect(JSON.parse(cli("tach", "--hz", "50", "--json").stdout).rpm).toBe(1500);
     // Common practice: a 4-pulse pump read by a 2-pulse host shows twice its speed.
     expect(cli("tach", "--reading", "5600", "--pulses", "4").stdout).toMatch(/2800 RPM real/);

@@ -24,7 +24,7 @@ describe("curve interpolation", () => {
 describe("duty → RPM", () => {
   const hw = exampleHardware();
   it("is linear from (min duty, RPM at min) to (100 %, max RPM)", () => {
-    // Intel 4-Wire PWM fan spec rev 1.3 §2.1.3: 100 % duty is full speed; below minimum duty the fan holds minimum speed.
+    // Intel 4-Wire PWM fan spec rev 1.3: 100 % duty is full speed (its PWM control input; from memory, section not checked); below minimum duty a fan of the "holds minimum speed" kind keeps its minimum speed (§3.4).
     const { minDutyPct, rpmAtMinDuty, maxRpm } = hw.fan;
     expect(dutyToRpm(100, hw.fan)).toBe(maxRpm);
     expect(dutyToRpm(minDutyPct, hw.fan)).toBe(rpmAtMinDuty);

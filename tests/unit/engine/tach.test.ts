@@ -3,13 +3,13 @@ import { EngineInputError, readingFromRealRpm, realRpmFromReading, rpmFromPulseP
 
 describe("tach", () => {
   it("converts tach frequency to RPM with 2 pulses per revolution", () => {
-    // Intel, "4-Wire Pulse Width Modulation (PWM) Controlled Fans Specification", Rev 1.3, §2.1.4: 50 Hz → 1,500 RPM.
+    // Intel, "4-Wire Pulse Width Modulation (PWM) Controlled Fans Specification", Rev 1.3, §2.1.3: 50 Hz → 1,500 RPM.
     expect(rpmFromTachHz(50)).toBeCloseTo(1500, 9);
     expect(rpmFromTachHz(50, 2)).toBeCloseTo(1500, 9);
   });
 
   it("converts the time between pulses to RPM", () => {
-    // Intel 4-Wire PWM fan spec rev 1.3 §2.1.4: 20 ms between pulses → 1,500 RPM.
+    // Intel 4-Wire PWM fan spec rev 1.3 §2.1.3: 20 ms between pulses → 1,500 RPM.
     expect(rpmFromPulsePeriodMs(20)).toBeCloseTo(1500, 9);
   });
 
