@@ -40,8 +40,10 @@ export function WithdrawnBuilds() {
                 <Td className="whitespace-nowrap font-medium">
                   <Link className="text-copper-700 underline" href={`/builds/${b.id}`}>{b.boardModelName} {b.version}</Link>
                 </Td>
-                <Td className="whitespace-nowrap text-sm" data-testid="withdrawn-when">
-                  {b.withdrawnAt ? <>{formatUtc(b.withdrawnAt)}<span className="block text-xs text-ink-600">by {b.withdrawnByName ?? "a deleted user"}</span></> : "—"}
+                <Td className="whitespace-nowrap text-sm">
+                  <span data-testid="withdrawn-when">
+                    {b.withdrawnAt ? <>{formatUtc(b.withdrawnAt)}<span className="block text-xs text-ink-600">by {b.withdrawnByName ?? "a deleted user"}</span></> : "—"}
+                  </span>
                 </Td>
                 <Td>{b.withdrawnReason}</Td>
                 <Td className="tabular-nums">{b.lots}</Td>
