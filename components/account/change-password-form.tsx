@@ -4,34 +4,37 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm } from "react-hook-form";
 import { useState } from "react";
 import { apiCall } from "@/lib/api/client";
-import { AppError } from "@/lib/api/errors";
 import { changePassword, changePasswordBody, type ChangePasswordBody } from "@/lib/api/operations/account";
 import { Button } from "@/components/ui/button";
 import { Field, Input, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 
 export function ChangePasswordForm() {
   const [done, setDone] = useState(false);
-  const { register, handleSubmit, setError, reset, formState } = useForm<ChangePasswordBody>({ resolver: zodResolver(changePasswordBody) });
+  const [serverError, setServerError] = useState<unknown>(null);
+  const form = useForm<ChangePasswordBody>({ resolver: zodResolver(changePasswordBody) });
+  const { register, handleSubmit, reset, formState } = form;
   const { errors, isSubmitting } = formState;
 
   const onSubmit = handleSubmit(async (values) => {
     setDone(false);
+    setServerError(null);
     try {
       await apiCall(changePassword, { body: values });
       reset();
       setDone(true);
     } catch (err) {
-      const e = err instanceof AppError ? err : new AppError("internal", "Could not change the password.");
-      if (e.issues?.some((i) => i.path === "/currentPassword")) setError("currentPassword", { message: "Not your current password." });
-      else setError("root", { message: e.message });
+      showServerIssues(form, err);
+      setServerError(err);
     }
   });
 
   return (
     <form onSubmit={(e) => void onSubmit(e)} className="max-w-sm space-y-3" noValidate>
       {done && <Notice tone="ok" role="status">Password changed.</Notice>}
-      {errors.root?.message && <Notice tone="fault" role="alert">{errors.root.message}</Notice>}
+      <ErrorNotice error={serverError} besideFields={fieldsOf(form)} />
       <Field id="currentPassword" label="Current password" error={errors.currentPassword?.message}>
         <Input type="password" autoComplete="current-password" {...describedBy("currentPassword", errors.currentPassword?.message)} {...register("currentPassword")} />
       </Field>

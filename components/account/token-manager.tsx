@@ -11,8 +11,10 @@ import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Field, Input, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { Badge } from "@/components/ui/badge";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 import { formatUtc } from "@/lib/time/format";
 
 function fmt(iso: string | null): string {
@@ -40,6 +42,7 @@ export function TokenManager() {
       form.reset({ name: "", expiresInDays: 90 });
       void qc.invalidateQueries({ queryKey: operationKey(listTokens) });
     },
+    onError: (err) => showServerIssues(form, err),
   });
   const [revoking, setRevoking] = useState<TokenView | null>(null);
   const revoke = useMutation({
@@ -79,7 +82,7 @@ export function TokenManager() {
           Create token
         </Button>
       </form>
-      {create.error && <Notice tone="fault" role="alert">{create.error.message}</Notice>}
+      <ErrorNotice error={create.error} besideFields={fieldsOf(form)} />
       <Table caption="Your API tokens">
         <thead>
           <tr>
@@ -93,11 +96,7 @@ export function TokenManager() {
         </thead>
         <tbody>
           {tokens.isPending && <SkeletonRows rows={2} cols={6} />}
-          {tokens.isError && (
-            <EmptyRow colSpan={6}>
-              Could not load tokens. <button className="underline" onClick={() => void tokens.refetch()}>Retry</button>
-            </EmptyRow>
-          )}
+          {tokens.isError && <ErrorRow colSpan={6} error={tokens.error} onRetry={() => void tokens.refetch()} />}
           {tokens.data?.items.length === 0 && <EmptyRow colSpan={6}>No tokens yet.</EmptyRow>}
           {tokens.data?.items.map((t) => {
             const st = tokenState(t);

@@ -4,12 +4,14 @@ import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useUrlParams } from "@/components/ui/use-url-params";
 import { apiQuery, queryFromUrl } from "@/lib/api/client";
+import { AUDIT_FILTERS, pagedQueryFromUrl } from "@/lib/api/screen-queries";
 import { formText } from "@/components/ui/form-data";
 import { auditQuery, listAudit } from "@/lib/api/operations/admin";
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { Pager } from "@/components/ui/pager";
 import { formatUtc } from "@/lib/time/format";
 
 const FILTERS = [
@@ -25,14 +27,10 @@ const KNOWN_ACTIONS = ["profile_version.publish", "build.create", "build.promote
 
 export function AuditLog() {
   const { sp, set: setParams } = useUrlParams();
-  const page = Math.max(1, Number(sp.get("page") ?? "1") || 1);
-  const qs = new URLSearchParams();
-  for (const f of FILTERS) {
-    const v = sp.get(f.key);
-    if (v) qs.set(f.key, v);
-  }
-  qs.set("page", String(page));
-  const q = useQuery(apiQuery(listAudit, { query: queryFromUrl(auditQuery, Object.fromEntries(qs)) }));
+  // The same reading of the URL the page made on the server for the first page it rendered.
+  const raw = pagedQueryFromUrl(AUDIT_FILTERS, sp);
+  const page = Number(raw.page);
+  const q = useQuery(apiQuery(listAudit, { query: queryFromUrl(auditQuery, raw) }));
 
 
   return (
@@ -74,11 +72,7 @@ export function AuditLog() {
         </thead>
         <tbody>
           {q.isPending && <SkeletonRows cols={4} />}
-          {q.isError && (
-            <EmptyRow colSpan={4}>
-              Could not load the audit log. <button className="underline" onClick={() => void q.refetch()}>Retry</button>
-            </EmptyRow>
-          )}
+          {q.isError && <ErrorRow colSpan={4} error={q.error} onRetry={() => void q.refetch()} />}
           {q.data?.items.length === 0 && <EmptyRow colSpan={4}>No events match.</EmptyRow>}
           {q.data?.items.map((e) => (
             <tr key={e.id}>
@@ -107,11 +101,7 @@ export function AuditLog() {
           ))}
         </tbody>
       </Table>
-      <div className="mt-3 flex items-center gap-2 text-sm">
-        <Button variant="secondary" disabled={page <= 1} onClick={() => setParams({ page: String(page - 1) })}>Newer</Button>
-        <span className="tabular-nums text-ink-600">Page {page}</span>
-        <Button variant="secondary" disabled={!q.data?.hasMore} onClick={() => setParams({ page: String(page + 1) })}>Older</Button>
-      </div>
+      <Pager page={page} hasMore={q.data?.hasMore} previousLabel="Newer" nextLabel="Older" label="Audit pages" />
     </Panel>
   );
 }

@@ -1,24 +1,21 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
-import { usePathname, useRouter, useSearchParams } from "next/navigation";
+import { useSearchParams } from "next/navigation";
 import { apiQuery } from "@/lib/api/client";
 import { listMailbox } from "@/lib/api/operations/builds";
-import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
-import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { Pager } from "@/components/ui/pager";
 import { formatUtc } from "@/lib/time/format";
 
 export function Mailbox() {
   const sp = useSearchParams();
-  const router = useRouter();
-  const pathname = usePathname();
   const page = Math.max(1, Number(sp.get("page") ?? "1") || 1);
   const q = useQuery({
     ...apiQuery(listMailbox, { query: { page } }),
     refetchInterval: 5000,
   });
-  const go = (p: number) => router.replace(`${pathname}?page=${p}`);
   return (
     <Panel>
       <Table caption="Received messages">
@@ -31,11 +28,7 @@ export function Mailbox() {
         </thead>
         <tbody>
           {q.isPending && <SkeletonRows cols={3} />}
-          {q.isError && (
-            <EmptyRow colSpan={3}>
-              Could not load the mailbox. <button className="underline" onClick={() => void q.refetch()}>Retry</button>
-            </EmptyRow>
-          )}
+          {q.isError && <ErrorRow colSpan={3} error={q.error} onRetry={() => void q.refetch()} />}
           {q.data?.items.length === 0 && <EmptyRow colSpan={3}>No messages yet.</EmptyRow>}
           {q.data?.items.map((m) => (
             <tr key={m.id} data-testid="mail-row">
@@ -51,11 +44,7 @@ export function Mailbox() {
           ))}
         </tbody>
       </Table>
-      <div className="mt-3 flex items-center gap-2 text-sm">
-        <Button variant="secondary" disabled={page <= 1} onClick={() => go(page - 1)}>Newer</Button>
-        <span className="tabular-nums text-ink-600">Page {page}</span>
-        <Button variant="secondary" disabled={!q.data?.hasMore} onClick={() => go(page + 1)}>Older</Button>
-      </div>
+      <Pager page={page} hasMore={q.data?.hasMore} previousLabel="Newer" nextLabel="Older" label="Mailbox pages" />
     </Panel>
   );
 }

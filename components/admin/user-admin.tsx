@@ -13,7 +13,9 @@ import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { Badge } from "@/components/ui/badge";
-import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 
 export function UserAdmin({ currentUserId }: { currentUserId: string }) {
   const qc = useQueryClient();
@@ -21,6 +23,7 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
   const form = useForm<CreateUserBody>({ resolver: zodResolver(createUserBody), defaultValues: { role: "viewer" } });
   const create = useMutation({
     mutationFn: (v: CreateUserBody) => apiCall(createUser, { body: v }),
+    onError: (err) => showServerIssues(form, err),
     onSuccess: () => {
       form.reset({ email: "", name: "", password: "", role: "viewer" });
       void qc.invalidateQueries({ queryKey: operationKey(listUsers) });
@@ -41,7 +44,7 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
   return (
     <div className="space-y-5">
       <Panel title="People">
-        {update.error && !pending && <div className="mb-3"><Notice tone="fault" role="alert">{update.error.message}</Notice></div>}
+        {update.error && !pending && <div className="mb-3"><ErrorNotice error={update.error} /></div>}
         <Table caption="Users">
           <thead>
             <tr>
@@ -54,11 +57,7 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
           </thead>
           <tbody>
             {users.isPending && <SkeletonRows cols={5} />}
-            {users.isError && (
-              <EmptyRow colSpan={5}>
-                Could not load users. <button className="underline" onClick={() => void users.refetch()}>Retry</button>
-              </EmptyRow>
-            )}
+            {users.isError && <ErrorRow colSpan={5} error={users.error} onRetry={() => void users.refetch()} />}
             {users.data?.items.map((u) => (
               <tr key={u.id}>
                 <Td className="font-medium">{u.name}</Td>
@@ -129,7 +128,7 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
       </ConfirmDialog>
       <Panel title="Add a user">
         <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-3xl gap-3 md:grid-cols-2" noValidate>
-          {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{create.error.message}</Notice></div>}
+          {create.error && <div className="md:col-span-2"><ErrorNotice error={create.error} besideFields={fieldsOf(form)} /></div>}
           {create.isSuccess && <div className="md:col-span-2"><Notice tone="ok" role="status">User created.</Notice></div>}
           <Field id="new-name" label="Name" error={errors.name?.message}>
             <Input {...describedBy("new-name", errors.name?.message)} {...form.register("name")} />

@@ -12,7 +12,7 @@ import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Field, Textarea } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
-import { ErrorNotice } from "./error-notice";
+import { ErrorNotice } from "@/components/ui/error-notice";
 import { useBuildMutation } from "./use-build";
 
 const PROMOTE_LABEL: Record<string, string> = {

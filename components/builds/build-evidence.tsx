@@ -10,7 +10,7 @@ import { Field, Textarea } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, Table, Td, Th } from "@/components/ui/table";
-import { ErrorNotice } from "./error-notice";
+import { ErrorNotice } from "@/components/ui/error-notice";
 import { SoundPlot } from "./sound-plot";
 import { useBuildMutation } from "./use-build";
 

@@ -3,15 +3,15 @@
 import Link from "next/link";
 import type { Role } from "@/lib/auth/roles";
 import { STAGE_LABELS } from "@/lib/release/stages";
-import { Button } from "@/components/ui/button";
 import { EstimateCaution, Notice } from "@/components/ui/notice";
 import { PageHeader, Panel } from "@/components/ui/panel";
 import { Table, Td, Th } from "@/components/ui/table";
 import { BuildActions } from "./build-actions";
 import { BuildEvidence } from "./build-evidence";
 import { BuildReviews } from "./build-reviews";
-import { StageBadge } from "./stage-badge";
+import { StageBadge } from "@/components/ui/stage-badge";
 import { useBuild, useBuildGate } from "./use-build";
+import { ErrorNotice } from "@/components/ui/error-notice";
 
 import { hex32 } from "@/lib/hex/address";
 import { profileVersionHref } from "@/lib/audit/describe";
@@ -23,9 +23,7 @@ export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string
   if (q.isPending) return <div aria-busy className="h-40 animate-pulse rounded-md bg-white shadow-panel" />;
   if (q.isError) {
     return (
-      <Notice tone="fault" role="alert" title={q.error.message}>
-        <Button variant="secondary" onClick={() => void q.refetch()}>Retry</Button>
-      </Notice>
+      <ErrorNotice error={q.error} onRetry={() => void q.refetch()} />
     );
   }
   const detail = q.data;
@@ -102,7 +100,7 @@ export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string
           </div>
           <div className="space-y-4">
             <BuildActions detail={detail} gate={gate.data} role={viewer.role} />
-            {gate.isError && <Notice tone="fault" role="alert" title={gate.error.message} />}
+            {gate.isError && <ErrorNotice error={gate.error} onRetry={() => void gate.refetch()} />}
             <BuildReviews detail={detail} gate={gate.data} viewer={viewer} />
             <Panel title="Stage timeline">
               <ol className="space-y-2 text-sm" aria-label="Stage timeline" data-testid="timeline">

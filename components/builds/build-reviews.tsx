@@ -8,7 +8,7 @@ import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { Field, Textarea } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import { ErrorNotice } from "./error-notice";
+import { ErrorNotice } from "@/components/ui/error-notice";
 import { useBuildMutation } from "./use-build";
 import { formatUtc } from "@/lib/time/format";
 

@@ -11,7 +11,8 @@ import { createBuild, createBuildBody, getBuildOptions, uploadFirmware, type Cre
 import { UPLOAD_MAX_BYTES } from "@/lib/release/upload-check";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
-import { Notice } from "@/components/ui/notice";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 import { Panel } from "@/components/ui/panel";
 import { BankFit } from "./bank-fit";
 import { bankBytesFromVersionImages } from "@/lib/release/bank-fit";
@@ -37,9 +38,9 @@ export function NewBuildForm() {
       return apiCall(createBuild, { body: { ...values, firmwareUploadId: up.upload.id } });
     },
     onSuccess: (r) => router.push(`/builds/${r.build.id}`),
+    onError: (err) => showServerIssues(form, err),
   });
   const { errors } = form.formState;
-  const serverError = create.error;
   const candidates = options.data?.candidates ?? [];
   const chosen = (chosenSlots ?? []).filter(Boolean).map((id) => candidates.find((c) => c.id === id)).filter((c) => c !== undefined);
   const bankBytes = bankBytesFromVersionImages(chosen.map((c) => c.encodedBytes));
@@ -120,15 +121,7 @@ export function NewBuildForm() {
             onChange={(e) => setFile(e.target.files?.[0] ?? null)}
           />
         </Field>
-        {serverError && (
-          <Notice tone="fault" role="alert" title={serverError.message}>
-            {serverError.issues && serverError.issues.length > 1 && (
-              <ul className="list-disc pl-5">
-                {serverError.issues.map((i, n) => <li key={n}>{i.message}</li>)}
-              </ul>
-            )}
-          </Notice>
-        )}
+        <ErrorNotice error={create.error} besideFields={fieldsOf(form)} />
         <div>
           <Button type="submit" disabled={create.isPending}>{create.isPending ? "Creating…" : "Create build"}</Button>
         </div>

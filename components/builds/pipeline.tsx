@@ -5,18 +5,16 @@ import { useQuery } from "@tanstack/react-query";
 import { apiQuery } from "@/lib/api/client";
 import { listBuilds } from "@/lib/api/operations/builds";
 import { STAGE_LABELS, STAGE_ORDER, type Stage } from "@/lib/release/stages";
-import { Notice } from "@/components/ui/notice";
-import { Button } from "@/components/ui/button";
+import { ErrorNotice } from "@/components/ui/error-notice";
 
 /** Builds in columns by stage, newest first in each; with `stage`, that stage's builds alone. */
 export function Pipeline({ stage: only }: { stage?: Stage }) {
+  // The page loads the first answer on the server under the same key: no placeholder on first paint.
   const q = useQuery(apiQuery(listBuilds, {}));
   const stages = only ? [only] : STAGE_ORDER;
   if (q.isError) {
     return (
-      <Notice tone="fault" role="alert" title="Could not load the builds.">
-        <Button variant="secondary" onClick={() => void q.refetch()}>Retry</Button>
-      </Notice>
+      <ErrorNotice error={q.error} onRetry={() => void q.refetch()} />
     );
   }
   return (

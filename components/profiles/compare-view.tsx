@@ -14,6 +14,7 @@ import { Select } from "@/components/ui/field";
 import { EstimateCaution, Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import type { CompareRow } from "./charts/compare-chart";
+import { ErrorNotice } from "@/components/ui/error-notice";
 
 const DiffView = dynamic(() => import("./editor/diff-view"), { ssr: false, loading: () => <div className="h-[480px] animate-pulse rounded bg-ink-100" /> });
 const CompareChart = dynamic(() => import("./charts/compare-chart"), { ssr: false, loading: () => <div className="h-80 animate-pulse rounded bg-ink-100" /> });
@@ -65,9 +66,7 @@ export function CompareView({ id }: { id: string }) {
   if (detail.isPending) return <div className="h-96 animate-pulse rounded-md bg-white shadow-panel" />;
   if (detail.isError)
     return (
-      <Notice tone="fault" role="alert" title="Could not load the profile">
-        {detail.error.message} <button className="underline" onClick={() => void detail.refetch()}>Retry</button>
-      </Notice>
+      <ErrorNotice error={detail.error} onRetry={() => void detail.refetch()} />
     );
   if (versions.length < 2) return <Notice title="Nothing to compare">This profile has fewer than two published versions.</Notice>;
 
@@ -93,9 +92,7 @@ export function CompareView({ id }: { id: string }) {
         ))}
       </div>
       {docs.some((d) => d.isError) && (
-        <Notice tone="fault" role="alert">
-          Could not load a version. <button className="underline" onClick={() => docs.forEach((d) => void d.refetch())}>Retry</button>
-        </Notice>
+        <ErrorNotice error={docs.find((d) => d.isError)?.error} onRetry={() => docs.forEach((d) => void d.refetch())} />
       )}
       {va && vb && (
         <>

@@ -7,18 +7,20 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { apiCall, apiQuery, queryFromUrl } from "@/lib/api/client";
+import { PROFILE_FILTERS } from "@/lib/api/screen-queries";
 import { createProfileBody, type CreateProfileBody, type ProfileSummaryView } from "@/lib/api/operations/profile-schemas";
 import { createProfile, listProfiles, profilesQuery } from "@/lib/api/operations/profiles";
 import { ALL_COOLERS, listCoolerModels } from "@/lib/api/operations/registry";
 import type { CoolerModelView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
-import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { Badge } from "@/components/ui/badge";
 import { DataTable } from "@/components/registry/data-table";
 import { FilterBar } from "@/components/registry/filter-bar";
 import { useListParams, serverTableProps } from "@/components/registry/use-list-params";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 import { formatUtc } from "@/lib/time/format";
 
 const columns: ColumnDef<ProfileSummaryView>[] = [
@@ -40,13 +42,13 @@ const columns: ColumnDef<ProfileSummaryView>[] = [
 ];
 
 export function ProfilesList({ canWrite }: { canWrite: boolean }) {
-  const list = useListParams(["q", "coolerModelId"]);
+  const list = useListParams(PROFILE_FILTERS);
   const coolers = useQuery(apiQuery(listCoolerModels, { query: ALL_COOLERS }));
   const q = useQuery(apiQuery(listProfiles, { query: queryFromUrl(profilesQuery, list.query) }));
   return (
     <div className="space-y-5">
       <Panel title="Profiles">
-        <FilterBar fields={["q", "coolerModelId"]} onApply={list.set}>
+        <FilterBar fields={[...PROFILE_FILTERS]} onApply={list.set}>
           <label className="text-sm">
             <span className="mb-1 block font-medium text-ink-800">Name contains</span>
             <Input name="q" defaultValue={list.sp.get("q") ?? ""} className="w-56" />
@@ -76,12 +78,13 @@ function CreateProfileForm({ coolers }: { coolers: CoolerModelView[] }) {
   const create = useMutation({
     mutationFn: (v: CreateProfileBody) => apiCall(createProfile, { body: v }),
     onSuccess: (res) => router.push(`/profiles/${res.profile.id}`),
+    onError: (err) => showServerIssues(form, err),
   });
   const { errors } = form.formState;
   return (
     <Panel title="Start a profile">
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-3xl gap-3 md:grid-cols-2" noValidate>
-        {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{create.error.message}</Notice></div>}
+        {create.error && <div className="md:col-span-2"><ErrorNotice error={create.error} besideFields={fieldsOf(form)} /></div>}
         <Field id="p-cooler" label="Cooler model" error={errors.coolerModelId?.message}>
           <Select {...describedBy("p-cooler", errors.coolerModelId?.message)} {...form.register("coolerModelId")}>
             <option value="">Choose…</option>

@@ -9,10 +9,10 @@ import { createBoardModel, createBoardRevision, getBoardRevision, listBoardModel
 import { boardModelBody, boardRevisionBody, type BoardModelBody, type BoardModelView, type BoardRevisionBody, type BoardRevisionView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
-import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { NumberField } from "./number-field";
-import { showServerIssues } from "./server-issues";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 
 /** Adds a board model, or edits `editing` (same schema as the API body). */
 export function BoardModelForm({ editing, onDone }: { editing?: BoardModelView; onDone?: () => void }) {
@@ -36,7 +36,7 @@ export function BoardModelForm({ editing, onDone }: { editing?: BoardModelView; 
   return (
     <Panel title={editing ? `Edit ${editing.name}` : "Add a board model"}>
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="space-y-3" noValidate>
-        {create.error && <Notice tone="fault" role="alert">{create.error.message}</Notice>}
+        {create.error && <ErrorNotice error={create.error} besideFields={fieldsOf(form)} />}
         <Field id={`${p}-name`} label="Name" error={errors.name?.message}>
           <Input {...describedBy(`${p}-name`, errors.name?.message)} {...form.register("name")} />
         </Field>
@@ -69,13 +69,14 @@ export function BoardRevisionForm({ boardModels }: { boardModels: BoardModelView
       form.reset(REVISION_DEFAULTS);
       void qc.invalidateQueries({ queryKey: operationKey(listBoardModels) });
     },
+    onError: (err) => showServerIssues(form, err),
   });
   const { errors } = form.formState;
   const num = (name: keyof BoardRevisionBody) => form.register(name, { setValueAs: (v: string) => (v === "" ? Number.NaN : Number(v)) });
   return (
     <Panel title="Add a board revision">
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid gap-3 md:grid-cols-2" noValidate>
-        {create.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{create.error.message}</Notice></div>}
+        {create.error && <div className="md:col-span-2"><ErrorNotice error={create.error} besideFields={fieldsOf(form)} /></div>}
         <Field id="br-model" label="Board model">
           <Select id="br-model" value={boardModelId} onChange={(e) => setBoardModelId(e.target.value)}>
             {boardModels.map((b) => <option key={b.id} value={b.id}>{b.name}</option>)}
@@ -137,7 +138,7 @@ export function BoardRevisionEditForm({ revision, onDone }: { revision: BoardRev
   return (
     <Panel title={`Edit revision ${revision.revision}`}>
       <form onSubmit={(e) => void form.handleSubmit((v) => save.mutate(v))(e)} className="grid gap-3 md:grid-cols-2" noValidate>
-        {save.error && <div className="md:col-span-2"><Notice tone="fault" role="alert">{save.error.message}</Notice></div>}
+        {save.error && <div className="md:col-span-2"><ErrorNotice error={save.error} besideFields={fieldsOf(form)} /></div>}
         <Field id="bre-rev" label="Revision" hint="Semantic version, e.g. 2.1.0." error={errors.revision?.message}>
           <Input {...describedBy("bre-rev", errors.revision?.message)} {...form.register("revision")} />
         </Field>

@@ -5,13 +5,13 @@ import Link from "next/link";
 import { useState } from "react";
 import { apiQuery } from "@/lib/api/client";
 import { getBoardRevision } from "@/lib/api/operations/registry";
-import { Notice } from "@/components/ui/notice";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { BoardRevisionEditForm } from "./board-forms";
 import { CompatibilityMatrix } from "./compatibility-matrix";
 import { hex32 } from "@/lib/hex/address";
+import { ErrorNotice } from "@/components/ui/error-notice";
 
 export function BoardRevisionView({ id, canWrite }: { id: string; canWrite: boolean }) {
   const q = useQuery(apiQuery(getBoardRevision, { params: { id } }));
@@ -19,9 +19,7 @@ export function BoardRevisionView({ id, canWrite }: { id: string; canWrite: bool
   if (q.isPending) return <Panel title="Board revision"><Table caption="Loading"><tbody><SkeletonRows cols={4} rows={4} /></tbody></Table></Panel>;
   if (q.isError)
     return (
-      <Notice tone="fault" role="alert" title="Could not load the board revision">
-        {q.error.message} <button className="underline" onClick={() => void q.refetch()}>Retry</button>
-      </Notice>
+      <ErrorNotice error={q.error} onRetry={() => void q.refetch()} />
     );
   const { revision: r, boardModelName, compatibility } = q.data;
   const column = compatibility.revisions.findIndex((x) => x.id === r.id);

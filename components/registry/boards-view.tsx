@@ -11,6 +11,7 @@ import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { BoardModelForm, BoardRevisionForm } from "./board-forms";
 import { BoardSigningKeys } from "./board-signing-keys";
+import { ErrorNotice } from "@/components/ui/error-notice";
 
 
 export function BoardsView({ canWrite }: { canWrite: boolean }) {
@@ -25,9 +26,7 @@ export function BoardsView({ canWrite }: { canWrite: boolean }) {
       )}
       {q.isError && (
         <Panel title="Board models">
-          <p className="text-sm text-ink-700">
-            Could not load the boards. <button className="underline" onClick={() => void q.refetch()}>Retry</button>
-          </p>
+          <ErrorNotice error={q.error} onRetry={() => void q.refetch()} />
         </Panel>
       )}
       {q.data?.items.map((b) => (

@@ -11,6 +11,8 @@ import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { NumberField } from "./number-field";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 
 const DEFAULTS: Partial<ComponentBody> = { kind: "fan", tachPulsesPerRev: 2, soundExponent: 50, flowAtMaxRpmLpm: null };
 
@@ -23,13 +25,14 @@ export function ComponentForm() {
       form.reset(DEFAULTS);
       void qc.invalidateQueries({ queryKey: operationKey(listComponents) });
     },
+    onError: (err) => showServerIssues(form, err),
   });
   const { errors } = form.formState;
   const num = (name: keyof ComponentBody) => form.register(name, { setValueAs: (v: string) => (v === "" ? Number.NaN : Number(v)) });
   return (
     <Panel title="Add a fan or pump">
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-4xl gap-3 md:grid-cols-3" noValidate>
-        {create.error && <div className="md:col-span-3"><Notice tone="fault" role="alert">{create.error.message}</Notice></div>}
+        {create.error && <div className="md:col-span-3"><ErrorNotice error={create.error} besideFields={fieldsOf(form)} /></div>}
         {create.isSuccess && <div className="md:col-span-3"><Notice tone="ok" role="status">Component added.</Notice></div>}
         <Field id="c-name" label="Name" error={errors.name?.message}>
           <Input {...describedBy("c-name", errors.name?.message)} {...form.register("name")} />

@@ -4,6 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
 import { apiQuery, queryFromUrl } from "@/lib/api/client";
 import { componentsQuery, listComponents } from "@/lib/api/operations/registry";
+import { COMPONENT_FILTERS } from "@/lib/api/screen-queries";
 import type { ComponentView } from "@/lib/api/operations/registry-schemas";
 import { Badge } from "@/components/ui/badge";
 import { Input, Select } from "@/components/ui/field";
@@ -25,14 +26,14 @@ const columns: ColumnDef<ComponentView>[] = [
 ];
 
 export function ComponentsList({ canWrite }: { canWrite: boolean }) {
-  const list = useListParams(["q", "kind"]);
+  const list = useListParams(COMPONENT_FILTERS);
   const q = useQuery({
     ...apiQuery(listComponents, { query: queryFromUrl(componentsQuery, list.query) }),
   });
   return (
     <div className="space-y-5">
       <Panel title="Fans and pumps">
-        <FilterBar fields={["q", "kind"]} onApply={list.set}>
+        <FilterBar fields={[...COMPONENT_FILTERS]} onApply={list.set}>
           <label className="text-sm">
             <span className="mb-1 block font-medium text-ink-800">Name contains</span>
             <Input name="q" defaultValue={list.sp.get("q") ?? ""} className="w-56" />

@@ -11,7 +11,8 @@ import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { NumberField } from "./number-field";
-import { showServerIssues } from "./server-issues";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 
 const bodyOf = (c: CoolerModelView): CoolerModelBody => ({
   name: c.name,
@@ -48,7 +49,7 @@ export function CoolerModelForm({ editing, onDone }: { editing?: CoolerModelView
   return (
     <Panel title={editing ? `Edit ${editing.name}` : "Add a cooler model"}>
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-4xl gap-3 md:grid-cols-3" noValidate>
-        {create.error && <div className="md:col-span-3"><Notice tone="fault" role="alert">{create.error.message}</Notice></div>}
+        {create.error && <div className="md:col-span-3"><ErrorNotice error={create.error} besideFields={fieldsOf(form)} /></div>}
         {create.isSuccess && !editing && <div className="md:col-span-3"><Notice tone="ok" role="status">Cooler model added.</Notice></div>}
         {editing && editing.profileCount > 0 && (
           <div className="md:col-span-3">

@@ -5,6 +5,7 @@ import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { apiQuery, queryFromUrl } from "@/lib/api/client";
 import { coolerModelsQuery, listCoolerModels } from "@/lib/api/operations/registry";
+import { COOLER_FILTERS } from "@/lib/api/screen-queries";
 import type { CoolerModelView } from "@/lib/api/operations/registry-schemas";
 import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
@@ -53,7 +54,7 @@ function editColumn(onEdit: (c: CoolerModelView) => void): ColumnDef<CoolerModel
 }
 
 export function CoolerModelsList({ canWrite }: { canWrite: boolean }) {
-  const list = useListParams(["q"]);
+  const list = useListParams(COOLER_FILTERS);
   const [editing, setEditing] = useState<CoolerModelView | null>(null);
   const shown = useMemo(() => (canWrite ? [...columns, editColumn(setEditing)] : columns), [canWrite]);
   const q = useQuery({
@@ -62,7 +63,7 @@ export function CoolerModelsList({ canWrite }: { canWrite: boolean }) {
   return (
     <div className="space-y-5">
       <Panel title="Cooler models">
-        <FilterBar fields={["q"]} onApply={list.set}>
+        <FilterBar fields={[...COOLER_FILTERS]} onApply={list.set}>
           <label className="text-sm">
             <span className="mb-1 block font-medium text-ink-800">Name contains</span>
             <Input name="q" defaultValue={list.sp.get("q") ?? ""} className="w-56" />

@@ -1,8 +1,8 @@
 "use client";
 
 import { flexRender, getCoreRowModel, useReactTable, type ColumnDef, type SortingState } from "@tanstack/react-table";
-import { Button } from "@/components/ui/button";
-import { EmptyRow, SkeletonRows, Table } from "@/components/ui/table";
+import { Pager } from "@/components/ui/pager";
+import { EmptyRow, ErrorRow, SkeletonRows, Table } from "@/components/ui/table";
 
 export interface ServerPage<T> {
   items: T[];
@@ -20,26 +20,24 @@ export function DataTable<T>({
   columns,
   data,
   isPending,
-  isError,
+  error,
   onRetry,
   sort,
   dir,
   onSort,
   page,
-  onPage,
   empty = "Nothing matches.",
 }: {
   caption: string;
   columns: ColumnDef<T>[];
   data: ServerPage<T> | undefined;
   isPending: boolean;
-  isError: boolean;
+  error: unknown;
   onRetry: () => void;
   sort: string;
   dir: "asc" | "desc";
   onSort: (sort: string, dir: "asc" | "desc") => void;
   page: number;
-  onPage: (page: number) => void;
   empty?: string;
 }) {
   const sorting: SortingState = sort ? [{ id: sort, desc: dir === "desc" }] : [];
@@ -53,7 +51,6 @@ export function DataTable<T>({
     manualPagination: true,
     getCoreRowModel: getCoreRowModel(),
   });
-  const lastPage = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
   const cols = columns.length;
   return (
     <div>
@@ -87,14 +84,7 @@ export function DataTable<T>({
         </thead>
         <tbody>
           {isPending && <SkeletonRows cols={cols} />}
-          {isError && (
-            <EmptyRow colSpan={cols}>
-              Could not load the list.{" "}
-              <button className="underline" onClick={onRetry}>
-                Retry
-              </button>
-            </EmptyRow>
-          )}
+          {!!error && <ErrorRow colSpan={cols} error={error} onRetry={onRetry} />}
           {data && data.items.length === 0 && <EmptyRow colSpan={cols}>{empty}</EmptyRow>}
           {table.getRowModel().rows.map((row) => (
             <tr key={row.id}>
@@ -107,18 +97,7 @@ export function DataTable<T>({
           ))}
         </tbody>
       </Table>
-      <div className="mt-3 flex items-center gap-2 text-sm">
-        <Button variant="secondary" disabled={page <= 1} onClick={() => onPage(page - 1)}>
-          Previous
-        </Button>
-        <span className="tabular-nums text-ink-600">
-          Page {page} of {lastPage}
-          {data ? ` · ${data.total} in all` : ""}
-        </span>
-        <Button variant="secondary" disabled={page >= lastPage} onClick={() => onPage(page + 1)}>
-          Next
-        </Button>
-      </div>
+      <Pager page={page} total={data?.total} pageSize={data?.pageSize} />
     </div>
   );
 }

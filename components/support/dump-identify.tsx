@@ -9,6 +9,7 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { Table, Td, Th } from "@/components/ui/table";
+import { ErrorNotice } from "@/components/ui/error-notice";
 
 const MATCH_LABEL = { exact: "Exact registry version", altered: "Altered", unknown: "Unknown to the registry", undecodable: "Cannot be read" } as const;
 const MATCH_TONE = { exact: "ok", altered: "fault", unknown: "neutral", undecodable: "fault" } as const;
@@ -47,7 +48,7 @@ export function DumpIdentify() {
         </div>
         <Button type="submit" disabled={!file || identify.isPending}>{identify.isPending ? "Reading…" : "Identify"}</Button>
       </form>
-      {identify.error && <div className="mt-3"><Notice tone="fault" role="alert">{identify.error.message}</Notice></div>}
+      {identify.error && <div className="mt-3"><ErrorNotice error={identify.error} /></div>}
       {r && (
         <div className="mt-4 space-y-3" data-testid="dump-result">
           {r.status === "ok" && r.faults.length === 0 && <Notice tone="ok" role="status" title="Dump is intact">CRC-32 {r.crc?.stored} matches; {r.slots.length} slot(s) read, every one checked by content.</Notice>}

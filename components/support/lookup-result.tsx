@@ -5,7 +5,7 @@ import Link from "next/link";
 import type { LookupResult } from "@/lib/api/operations/support";
 import { Notice, EstimateCaution } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
-import { StageBadge } from "./stage-badge";
+import { StageBadge } from "@/components/ui/stage-badge";
 
 // recharts is large: load it only when a result with curves is on screen.
 const SlotCurveChart = dynamic(() => import("./slot-curve-chart"), {

@@ -10,9 +10,9 @@ import type { LotInput } from "@/lib/lots/input";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 import { Panel } from "@/components/ui/panel";
-
-const FIELDS = ["lotCode", "boardRevision", "buildVersion", "serialFrom", "serialTo", "producedOn", "line"] as const;
 
 export function LotForm({ options }: { options: LotOptions | undefined }) {
   const qc = useQueryClient();
@@ -23,12 +23,7 @@ export function LotForm({ options }: { options: LotOptions | undefined }) {
       form.reset({ producedOn: form.getValues("producedOn"), line: form.getValues("line") });
       void qc.invalidateQueries({ queryKey: operationKey(listLots) });
     },
-    onError: (err) => {
-      for (const issue of err.issues ?? []) {
-        const key = issue.path.slice(1) as (typeof FIELDS)[number];
-        if ((FIELDS as readonly string[]).includes(key)) form.setError(key, { message: issue.message });
-      }
-    },
+    onError: (err) => showServerIssues(form, err),
   });
   const { errors } = form.formState;
   const revisions = [...new Set((options?.boardModels ?? []).flatMap((m) => m.revisions))];
@@ -67,7 +62,7 @@ export function LotForm({ options }: { options: LotOptions | undefined }) {
           <Button type="submit" disabled={create.isPending}>{create.isPending ? "Recording…" : "Record lot"}</Button>
         </div>
       </form>
-      {create.error && <div className="mt-3"><Notice tone="fault" role="alert">{create.error.message}</Notice></div>}
+      {create.error && <div className="mt-3"><ErrorNotice error={create.error} besideFields={fieldsOf(form)} /></div>}
       {create.data && <div className="mt-3"><Notice tone="ok" role="status">Lot {create.data.lot.lotCode} recorded: {create.data.lot.boards.toLocaleString("en")} boards.</Notice></div>}
     </Panel>
   );

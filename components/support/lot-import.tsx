@@ -9,6 +9,7 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { Table, Td, Th } from "@/components/ui/table";
+import { ErrorNotice } from "@/components/ui/error-notice";
 
 /** CSV import in two steps: a preview that checks every row, then one all-or-nothing commit. */
 export function LotImport() {
@@ -48,7 +49,7 @@ export function LotImport() {
         <Button variant="secondary" disabled={text === null || run.isPending} onClick={() => run.mutate({ dryRun: true })}>Preview</Button>
         <Button disabled={text === null || run.isPending || !r?.dryRun || r.issues.length > 0} onClick={() => run.mutate({ dryRun: false })}>Import</Button>
       </div>
-      {run.error && <div className="mt-3"><Notice tone="fault" role="alert">{run.error.message}</Notice></div>}
+      {run.error && <div className="mt-3"><ErrorNotice error={run.error} /></div>}
       {r && r.issues.length > 0 && (
         <div className="mt-3 space-y-2">
           <Notice tone="fault" role="alert" title={`${fileName || "The file"}: ${r.issues.length} problem(s); nothing was imported`}>Fix these rows and preview again.</Notice>

@@ -6,12 +6,14 @@ import { useUrlParams } from "@/components/ui/use-url-params";
 import { apiQuery, queryFromUrl } from "@/lib/api/client";
 import { listLots, lotsQuery } from "@/lib/api/operations/support";
 import type { LotOptions } from "@/lib/api/operations/support";
+import { LOT_FILTERS, pagedQueryFromUrl } from "@/lib/api/screen-queries";
 import { formText } from "@/components/ui/form-data";
 import { Button } from "@/components/ui/button";
 import { Input, Select } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
-import { StageBadge } from "./stage-badge";
+import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { Pager } from "@/components/ui/pager";
+import { StageBadge } from "@/components/ui/stage-badge";
 
 const SORTS = [
   { value: "serial", label: "First serial" },
@@ -21,14 +23,10 @@ const SORTS = [
 
 export function LotsList({ options }: { options: LotOptions | undefined }) {
   const { sp, set: setParams } = useUrlParams();
-  const page = Math.max(1, Number(sp.get("page") ?? "1") || 1);
-  const qs = new URLSearchParams();
-  for (const k of ["board", "build", "code", "sort", "dir"]) {
-    const v = sp.get(k);
-    if (v) qs.set(k, v);
-  }
-  qs.set("page", String(page));
-  const q = useQuery(apiQuery(listLots, { query: queryFromUrl(lotsQuery, Object.fromEntries(qs)) }));
+  // The same reading of the URL the page made on the server for the first page it rendered.
+  const raw = pagedQueryFromUrl(LOT_FILTERS, sp);
+  const page = Number(raw.page);
+  const q = useQuery(apiQuery(listLots, { query: queryFromUrl(lotsQuery, raw) }));
   const builds = (options?.boardModels ?? []).flatMap((m) => m.builds.map((b) => ({ ...b, model: m.name })));
 
 
@@ -88,11 +86,7 @@ export function LotsList({ options }: { options: LotOptions | undefined }) {
         </thead>
         <tbody>
           {q.isPending && <SkeletonRows cols={6} />}
-          {q.isError && (
-            <EmptyRow colSpan={6}>
-              Could not load lots. <button className="underline" onClick={() => void q.refetch()}>Retry</button>
-            </EmptyRow>
-          )}
+          {q.isError && <ErrorRow colSpan={6} error={q.error} onRetry={() => void q.refetch()} />}
           {q.data?.items.length === 0 && <EmptyRow colSpan={6}>No lots match.</EmptyRow>}
           {q.data?.items.map((l) => (
             <tr key={l.id}>
@@ -108,11 +102,7 @@ export function LotsList({ options }: { options: LotOptions | undefined }) {
           ))}
         </tbody>
       </Table>
-      <div className="mt-3 flex items-center gap-2 text-sm">
-        <Button variant="secondary" disabled={page <= 1} onClick={() => setParams({ page: String(page - 1) })}>Previous</Button>
-        <span className="tabular-nums text-ink-600">Page {page}</span>
-        <Button variant="secondary" disabled={!q.data?.hasMore} onClick={() => setParams({ page: String(page + 1) })}>Next</Button>
-      </div>
+      <Pager page={page} hasMore={q.data?.hasMore} label="Lot pages" />
     </Panel>
   );
 }

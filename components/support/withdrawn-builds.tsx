@@ -7,8 +7,8 @@ import { apiQuery } from "@/lib/api/client";
 import { getShippedWithBuild, listWithdrawnBuilds } from "@/lib/api/operations/support";
 import { buttonClass } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
-import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
-import { Notice } from "@/components/ui/notice";
+import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
+import { ErrorNotice } from "@/components/ui/error-notice";
 import { formatUtc } from "@/lib/time/format";
 
 
@@ -31,9 +31,7 @@ export function WithdrawnBuilds() {
           </thead>
           <tbody>
             {list.isPending && <SkeletonRows cols={6} rows={2} />}
-            {list.isError && (
-              <EmptyRow colSpan={6}>Could not load withdrawn builds. <button className="underline" onClick={() => void list.refetch()}>Retry</button></EmptyRow>
-            )}
+            {list.isError && <ErrorRow colSpan={6} error={list.error} onRetry={() => void list.refetch()} />}
             {list.data?.items.length === 0 && <EmptyRow colSpan={6}>No build has been withdrawn.</EmptyRow>}
             {list.data?.items.map((b) => (
               <tr key={b.id} aria-current={b.id === selected ? "true" : undefined} className={b.id === selected ? "bg-copper-50" : ""}>
@@ -59,7 +57,7 @@ export function WithdrawnBuilds() {
           title={shipped.data ? `Shipped with ${shipped.data.build.boardModelName} ${shipped.data.build.version}` : "Shipped lots"}
           actions={<a className={buttonClass("secondary")} href={`/api/v1/support/withdrawn/${selected}/shipped.csv`} download>Export CSV</a>}
         >
-          {shipped.isError && <Notice tone="fault" role="alert">{shipped.error.message}</Notice>}
+          {shipped.isError && <ErrorNotice error={shipped.error} onRetry={() => void shipped.refetch()} />}
           {shipped.data && <p className="mb-3 text-sm text-ink-800">{shipped.data.boards.toLocaleString("en")} boards in {shipped.data.lots.length} lot(s).</p>}
           <Table caption="Lots shipped with the build">
             <thead>

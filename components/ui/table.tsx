@@ -1,4 +1,5 @@
 import type { ReactNode } from "react";
+import { ErrorNotice } from "./error-notice";
 
 /**
  * Dense, readable table chrome; columns and rows come from the caller. The wrapper scrolls
@@ -28,6 +29,17 @@ export function EmptyRow({ colSpan, children }: { colSpan: number; children: Rea
     <tr>
       <td colSpan={colSpan} className="px-3 py-6 text-center text-sm text-ink-500">
         {children}
+      </td>
+    </tr>
+  );
+}
+
+/** A list that could not be loaded: the one error notice, across the whole row, with Retry. */
+export function ErrorRow({ colSpan, error, onRetry }: { colSpan: number; error: unknown; onRetry: () => void }) {
+  return (
+    <tr>
+      <td colSpan={colSpan} className="px-3 py-3">
+        <ErrorNotice error={error} onRetry={onRetry} />
       </td>
     </tr>
   );

@@ -36,7 +36,8 @@ export const dutyFromCode = (code: number): number => code * DUTY_STEP_PCT;
 export const hysteresisFromCode = (code: number): number => Math.round(code) / 10;
 export const rampFromCode = (code: number): number => code * RAMP_STEP_PCT_PER_SEC;
 
-function quantiseCurve<C extends CurveSettings>(curve: C): C {
+/** One curve as stored: points, hysteresis and ramp limits on their steps, rounded toward more cooling. */
+export function quantiseCurve<C extends CurveSettings>(curve: C): C {
   return {
     ...curve,
     points: curve.points.map((p) => ({ tempC: tempFromCode(tempCode(p.tempC)), dutyPct: dutyFromCode(dutyCode(p.dutyPct)) })),

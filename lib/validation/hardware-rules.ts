@@ -1,4 +1,4 @@
-import type { HardwareContext, MotorComponent } from "../hardware/types";
+import type { BoardRevision, HardwareContext, MotorComponent, RadiatorThermal } from "../hardware/types";
 import type { ValidationIssue } from "./types";
 
 /**
@@ -20,21 +20,34 @@ function componentRules(path: string, c: MotorComponent, kind: "fan" | "pump", o
   }
 }
 
-/** Semantic rules of a hardware context that passed the schema. */
-export function hardwareRuleIssues(hw: HardwareContext): ValidationIssue[] {
+/** The parts of a hardware context the rules read; each present only when it could be read. */
+export type ReadableHardware = Partial<Pick<HardwareContext, "fan" | "pump" | "radiator" | "boardRevision">>;
+
+/**
+ * Semantic rules of a hardware context that passed the schema, or of the parts of
+ * one that could be read (each rule runs when the parts it reads are there).
+ */
+export function hardwareRuleIssues(hw: HardwareContext | ReadableHardware): ValidationIssue[] {
   const out: ValidationIssue[] = [];
-  componentRules("/fan", hw.fan, "fan", out);
-  componentRules("/pump", hw.pump, "pump", out);
-  const r = hw.radiator;
+  if (hw.fan) componentRules("/fan", hw.fan, "fan", out);
+  if (hw.pump) componentRules("/pump", hw.pump, "pump", out);
+  if (hw.radiator) radiatorRules(hw.radiator, out);
+  if (hw.boardRevision) boardRules(hw.boardRevision, out);
+  return out;
+}
+
+function radiatorRules(r: RadiatorThermal, out: ValidationIssue[]): void {
   if (r.thermalResistanceAtMaxFanKPerW > r.thermalResistanceAtMinFanKPerW) {
     out.push({ code: "radiator.resistance_order", path: "/radiator/thermalResistanceAtMaxFanKPerW", severity: "error", message: "The resistance at maximum fan speed is above the one at minimum speed; faster fans cool better, so swap or correct them." });
   }
   if (r.thermalResistanceFansStoppedKPerW !== undefined && r.thermalResistanceFansStoppedKPerW < r.thermalResistanceAtMinFanKPerW) {
     out.push({ code: "radiator.resistance_order", path: "/radiator/thermalResistanceFansStoppedKPerW", severity: "error", message: "The resistance with fans stopped is below the one at minimum fan speed; correct it." });
   }
-  const f = hw.boardRevision.pwmFrequencyHz;
+}
+
+function boardRules(board: BoardRevision, out: ValidationIssue[]): void {
+  const f = board.pwmFrequencyHz;
   if (f < PWM_MIN_HZ || f > PWM_MAX_HZ) {
     out.push({ code: "board.pwm_frequency_outside_fan_spec", path: "/boardRevision/pwmFrequencyHz", severity: "warning", message: `${f} Hz is outside the 21–28 kHz that 4-wire PWM fans expect (25 kHz target); check the fans follow it.` });
   }
-  return out;
 }

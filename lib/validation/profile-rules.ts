@@ -1,7 +1,7 @@
 import { bankBytes, DUTY_STEP_PCT, TEMP_STEP_C } from "../bank/layout";
-import { quantise } from "../bank/quantise";
+import { dutyCode, dutyFromCode, quantiseCurve, tempCode, tempFromCode } from "../bank/quantise";
 import type { HardwareContext } from "../hardware/types";
-import type { CoolingProfile, CurveKind, CurveSettings } from "../profile/types";
+import type { CoolingProfile, CurveKind, CurveSettings, FanCurve, PumpCurve } from "../profile/types";
 import { dutyAtTemp, maxDutyPct } from "../speeds/curve";
 import type { ValidationIssue } from "./types";
 
@@ -28,65 +28,83 @@ function orderRules(kind: CurveKind, curve: CurveSettings, out: ValidationIssue[
   });
 }
 
-function safetyRules(doc: CoolingProfile, out: ValidationIssue[]): void {
-  for (const kind of CURVES) {
-    const curve = doc[kind];
-    const atCritical = dutyAtTemp(curve.points, doc.criticalTempC);
-    if (atCritical < 100) {
-      out.push(error("curve.no_full_speed_at_critical", `/${kind}/points`, `The ${LABEL[kind]} curve reaches only ${fmt(atCritical)} % at the critical temperature ${fmt(doc.criticalTempC)} °C: add a point with 100 % at or below ${fmt(doc.criticalTempC)} °C.`));
+/**
+ * The parts of a profile the rules read. Each is present only when it could be read
+ * (it passed its part of the schema), so a schema error in one part does not hide the
+ * rule errors of the others.
+ */
+export interface ReadableProfile {
+  criticalTempC?: number;
+  sensorLossDutyPct?: number;
+  pump?: PumpCurve;
+  fans?: FanCurve;
+}
+
+const readableCurves = (doc: ReadableProfile): [CurveKind, CurveSettings][] => CURVES.flatMap((k): [CurveKind, CurveSettings][] => (doc[k] ? [[k, doc[k]]] : []));
+
+function safetyRules(doc: ReadableProfile, out: ValidationIssue[]): void {
+  const critical = doc.criticalTempC;
+  const curves = readableCurves(doc);
+  if (critical !== undefined) {
+    for (const [kind, curve] of curves) {
+      const atCritical = dutyAtTemp(curve.points, critical);
+      if (atCritical < 100) {
+        out.push(error("curve.no_full_speed_at_critical", `/${kind}/points`, `The ${LABEL[kind]} curve reaches only ${fmt(atCritical)} % at the critical temperature ${fmt(critical)} °C: add a point with 100 % at or below ${fmt(critical)} °C.`));
+      }
     }
   }
-  const highest = Math.max(maxDutyPct(doc.pump.points), maxDutyPct(doc.fans.points));
-  if (doc.sensorLossDutyPct < highest) {
+  // With one curve unreadable its duties are unknown, but a sensor-loss duty below the readable curve's highest is wrong whatever the other says.
+  const highest = Math.max(...curves.map(([, c]) => maxDutyPct(c.points)));
+  if (doc.sensorLossDutyPct !== undefined && curves.length > 0 && doc.sensorLossDutyPct < highest) {
     out.push(error("sensor_loss.below_curve_duty", "/sensorLossDutyPct", `The sensor-loss duty ${fmt(doc.sensorLossDutyPct)} % is below the highest curve duty ${fmt(highest)} %: with the sensor lost the liquid may be hot, so set it to at least ${fmt(highest)} % (100 % is usual).`));
   }
-  doc.pump.points.forEach((p, i) => {
+  doc.pump?.points.forEach((p, i) => {
     if (p.dutyPct <= 0) {
       out.push(error("pump.zero_duty", `/pump/points/${i}/dutyPct`, "A pump must never stop while the CPU makes heat: give this point a duty above 0 %, at least the pump's minimum duty."));
     }
   });
-  const stop = doc.fans.stopBelowTempC;
-  if (stop !== undefined && stop >= doc.criticalTempC) {
-    out.push(error("fans.stop_at_or_above_critical", "/fans/stopBelowTempC", `The fans would stop below ${fmt(stop)} °C, at or above the critical temperature ${fmt(doc.criticalTempC)} °C: set the stop temperature well below it.`));
+  const stop = doc.fans?.stopBelowTempC;
+  if (stop !== undefined && critical !== undefined && stop >= critical) {
+    out.push(error("fans.stop_at_or_above_critical", "/fans/stopBelowTempC", `The fans would stop below ${fmt(stop)} °C, at or above the critical temperature ${fmt(critical)} °C: set the stop temperature well below it.`));
   }
-  if (stop !== undefined && doc.fans.hysteresisC === 0) {
+  if (stop !== undefined && doc.fans?.hysteresisC === 0) {
     // The held temperature decides the stop; with no band every wobble of the reading around the stop temperature starts or stops the fans.
     out.push(warning("fans.stop_without_hysteresis", "/fans/hysteresisC", `The fans stop below ${fmt(stop)} °C with no hysteresis: a reading wobbling around ${fmt(stop)} °C would stop and start them on every sample (chatter). Give the fan curve a hysteresis, e.g. 1.5 °C.`));
   }
 }
 
-function hardwareRules(doc: CoolingProfile, hw: HardwareContext, out: ValidationIssue[]): void {
-  doc.pump.points.forEach((p, i) => {
+function hardwareRules(doc: ReadableProfile, hw: HardwareContext, out: ValidationIssue[]): void {
+  doc.pump?.points.forEach((p, i) => {
     if (p.dutyPct > 0 && p.dutyPct < hw.pump.minDutyPct) {
       out.push(error("pump.below_min_duty", `/pump/points/${i}/dutyPct`, `${fmt(p.dutyPct)} % is below the pump's minimum duty ${fmt(hw.pump.minDutyPct)} %: raise it to at least ${fmt(hw.pump.minDutyPct)} %.`));
     }
   });
-  doc.fans.points.forEach((p, i) => {
+  doc.fans?.points.forEach((p, i) => {
     if (p.dutyPct < hw.fan.minDutyPct) {
       out.push(warning("fans.below_min_duty", `/fans/points/${i}/dutyPct`, `${fmt(p.dutyPct)} % is below the fan's minimum duty ${fmt(hw.fan.minDutyPct)} %: the fans hold their minimum ${fmt(hw.fan.rpmAtMinDuty)} RPM there. Raise it, or use stopBelowTempC to stop them.`));
     }
   });
   const limit = hw.boardRevision.maxPointsPerCurve;
-  for (const kind of CURVES) {
-    const n = doc[kind].points.length;
+  for (const [kind, curve] of readableCurves(doc)) {
+    const n = curve.points.length;
     if (n > limit) {
       out.push(error("board.too_many_points", `/${kind}/points`, `The ${LABEL[kind]} curve has ${n} points; board revision ${hw.boardRevision.version} stores at most ${limit}: remove ${n - limit}.`));
     }
   }
+  if (!doc.pump || !doc.fans) return;
   const imageBytes = bankBytes([{ pumpPoints: doc.pump.points.length, fanPoints: doc.fans.points.length }]);
   if (imageBytes > hw.boardRevision.memoryBytes) {
     out.push(error("bank.exceeds_memory", "", `A bank holding this profile alone takes ${imageBytes} bytes; board revision ${hw.boardRevision.version} has ${hw.boardRevision.memoryBytes}: remove curve points.`));
   }
 }
 
-function quantisationRules(doc: CoolingProfile, out: ValidationIssue[]): void {
-  const q = quantise(doc);
-  for (const kind of CURVES) {
-    const qPoints = q[kind].points;
-    doc[kind].points.forEach((p, i) => {
-      const qp = qPoints[i]!;
-      const prev = qPoints[i - 1];
-      if (prev && doc[kind].points[i - 1]!.tempC < p.tempC && !(qp.tempC > prev.tempC)) {
+function quantisationRules(doc: ReadableProfile, out: ValidationIssue[]): void {
+  for (const [kind, curve] of readableCurves(doc)) {
+    const q = quantiseCurve(curve);
+    curve.points.forEach((p, i) => {
+      const qp = q.points[i]!;
+      const prev = q.points[i - 1];
+      if (prev && curve.points[i - 1]!.tempC < p.tempC && !(qp.tempC > prev.tempC)) {
         out.push(error("quantisation.temps_collide", `/${kind}/points/${i}/tempC`, `Stored in ${TEMP_STEP_C} °C steps this point falls on ${fmt(qp.tempC)} °C like the point before: space the points at least ${TEMP_STEP_C} °C apart.`));
       }
       if (qp.tempC !== p.tempC) {
@@ -97,20 +115,21 @@ function quantisationRules(doc: CoolingProfile, out: ValidationIssue[]): void {
       }
     });
     for (const field of ["hysteresisC", "rampUpPctPerSec", "rampDownPctPerSec"] as const) {
-      if (q[kind][field] !== doc[kind][field]) {
-        out.push(warning("quantisation.loss", `/${kind}/${field}`, `Stored as ${fmt(q[kind][field])}; write that value to see exactly what the board runs.`));
+      if (q[field] !== curve[field]) {
+        out.push(warning("quantisation.loss", `/${kind}/${field}`, `Stored as ${fmt(q[field])}; write that value to see exactly what the board runs.`));
       }
     }
   }
-  const single: [Extract<keyof CoolingProfile, string>, number | undefined, number | undefined][] = [
-    ["criticalTempC", doc.criticalTempC, q.criticalTempC],
-    ["sensorLossDutyPct", doc.sensorLossDutyPct, q.sensorLossDutyPct],
+  const storedTemp = (c: number): number => tempFromCode(tempCode(c));
+  const single: [string, number | undefined, (v: number) => number][] = [
+    ["/criticalTempC", doc.criticalTempC, storedTemp],
+    ["/sensorLossDutyPct", doc.sensorLossDutyPct, (d) => dutyFromCode(dutyCode(d))],
+    ["/fans/stopBelowTempC", doc.fans?.stopBelowTempC, storedTemp],
   ];
-  for (const [field, before, after] of single) {
-    if (before !== after) out.push(warning("quantisation.loss", `/${field}`, `Stored as ${fmt(after ?? 0)}; write that value to see exactly what the board runs.`));
-  }
-  if (doc.fans.stopBelowTempC !== q.fans.stopBelowTempC) {
-    out.push(warning("quantisation.loss", "/fans/stopBelowTempC", `Stored as ${fmt(q.fans.stopBelowTempC ?? 0)} °C; write that value to see exactly what the board runs.`));
+  for (const [path, before, store] of single) {
+    if (before === undefined) continue;
+    const after = store(before);
+    if (before !== after) out.push(warning("quantisation.loss", path, `Stored as ${fmt(after)}${path.endsWith("TempC") ? " °C" : ""}; write that value to see exactly what the board runs.`));
   }
 }
 
@@ -118,11 +137,13 @@ function quantisationRules(doc: CoolingProfile, out: ValidationIssue[]): void {
  * Semantic rules of a profile that passed the schema: point order, safety
  * (full speed at the critical temperature, sensor-loss duty, a pump that never
  * stops, fan stop below critical), board and component limits when `hw` is
- * given, and the effects of quantisation to the stored format.
+ * given, and the effects of quantisation to the stored format. Takes a whole
+ * document, or only the parts of one that could be read: each rule runs when the
+ * parts it reads are there.
  */
-export function profileRuleIssues(doc: CoolingProfile, hw?: HardwareContext): ValidationIssue[] {
+export function profileRuleIssues(doc: CoolingProfile | ReadableProfile, hw?: HardwareContext): ValidationIssue[] {
   const out: ValidationIssue[] = [];
-  for (const kind of CURVES) orderRules(kind, doc[kind], out);
+  for (const [kind, curve] of readableCurves(doc)) orderRules(kind, curve, out);
   safetyRules(doc, out);
   if (hw) hardwareRules(doc, hw, out);
   quantisationRules(doc, out);

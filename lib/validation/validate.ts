@@ -1,10 +1,10 @@
 import type { HardwareContext } from "../hardware/types";
 import type { CoolingProfile } from "../profile/types";
-import { hardwareRuleIssues } from "./hardware-rules";
+import { hardwareRuleIssues, type ReadableHardware } from "./hardware-rules";
 import { hostileValueIssues } from "./hostile";
 import { scanJson } from "./json-scan";
 import { lineStarts, offsetFromParseError, PointerLocator } from "./positions";
-import { profileRuleIssues } from "./profile-rules";
+import { profileRuleIssues, type ReadableProfile } from "./profile-rules";
 import { hardwareSchemaIssues, profileSchemaIssues } from "./schema";
 import type { ValidationIssue, ValidationResult } from "./types";
 
@@ -19,12 +19,36 @@ function internalIssue(e: unknown): ValidationIssue {
   return { code: "internal.error", path: "", severity: "error", message: `Validation stopped on an internal error (${detail}); please report it with the document.` };
 }
 
-function validateDoc<T>(doc: unknown, schemaIssues: (d: unknown) => ValidationIssue[], rules: (d: T) => ValidationIssue[]): ValidationResult<T> {
+/** Schema findings that concern only a property the part does not need; the rest of the part can still be read. */
+const DOES_NOT_SPOIL_PART = new Set(["schema.unknown_property", "pump.stop_not_allowed"]);
+
+/**
+ * The top-level parts of `doc` that passed their part of the schema: present, and no
+ * schema issue at or below them (an unknown extra property does not count). The rules
+ * then run on these, so one pass shows the schema errors and the rule errors of the
+ * parts that could be read.
+ */
+function readableParts<P extends object>(doc: unknown, keys: readonly (keyof P & string)[], schema: readonly ValidationIssue[]): Partial<P> {
+  const parts: Partial<P> = {};
+  if (typeof doc !== "object" || doc === null || Array.isArray(doc)) return parts;
+  for (const key of keys) {
+    if (!Object.prototype.hasOwnProperty.call(doc, key)) continue;
+    const at = `/${key}`;
+    const spoiled = schema.some((i) => !DOES_NOT_SPOIL_PART.has(i.code) && (i.path === at || i.path.startsWith(`${at}/`)));
+    if (!spoiled) parts[key] = (doc as P)[key];
+  }
+  return parts;
+}
+
+const PROFILE_PARTS = ["criticalTempC", "sensorLossDutyPct", "pump", "fans"] as const;
+const HARDWARE_PARTS = ["fan", "pump", "radiator", "boardRevision"] as const;
+
+function validateDoc<T>(doc: unknown, schemaIssues: (d: unknown) => ValidationIssue[], rules: (d: T) => ValidationIssue[], partRules: (d: unknown, schema: readonly ValidationIssue[]) => ValidationIssue[]): ValidationResult<T> {
   try {
     const hostile = hostileValueIssues(doc);
     if (hostile.length > 0) return { ok: false, issues: hostile };
     const schema = schemaIssues(doc);
-    if (schema.length > 0) return { ok: false, issues: schema };
+    if (schema.length > 0) return { ok: false, issues: [...schema, ...partRules(doc, schema)] };
     const issues = rules(doc as T);
     return { ok: !hasErrors(issues), issues, value: doc as T };
   } catch (e) {
@@ -35,16 +59,23 @@ function validateDoc<T>(doc: unknown, schemaIssues: (d: unknown) => ValidationIs
 /**
  * Validates a profile document: JSON Schema (draft 2020-12) first, then the
  * semantic rules (profileRuleIssues), with board and component limits when a
- * hardware context is given (it should have passed validateHardware). Semantic
- * rules run only on a document that passed the schema. Never throws.
+ * hardware context is given (it should have passed validateHardware). When the
+ * schema fails, the semantic rules still run on the parts that passed it (each
+ * curve, the critical temperature, the sensor-loss duty), so one pass lists both.
+ * `value` is set only when the whole document passed the schema. Never throws.
  */
 export function validateProfile(doc: unknown, hardware?: HardwareContext): ValidationResult<CoolingProfile> {
-  return validateDoc<CoolingProfile>(doc, profileSchemaIssues, (d) => profileRuleIssues(d, hardware));
+  return validateDoc<CoolingProfile>(
+    doc,
+    profileSchemaIssues,
+    (d) => profileRuleIssues(d, hardware),
+    (d, schema) => profileRuleIssues(readableParts<ReadableProfile>(d, PROFILE_PARTS, schema), hardware),
+  );
 }
 
-/** Validates a hardware context document: JSON Schema, then semantic rules. Never throws. */
+/** Validates a hardware context document: JSON Schema, then semantic rules (on the readable parts when the schema fails). Never throws. */
 export function validateHardware(doc: unknown): ValidationResult<HardwareContext> {
-  return validateDoc<HardwareContext>(doc, hardwareSchemaIssues, hardwareRuleIssues);
+  return validateDoc<HardwareContext>(doc, hardwareSchemaIssues, hardwareRuleIssues, (d, schema) => hardwareRuleIssues(readableParts<ReadableHardware>(d, HARDWARE_PARTS, schema)));
 }
 
 function validateText<T>(text: string, validate: (doc: unknown) => ValidationResult<T>): ValidationResult<T> {

@@ -1,6 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { ROLES } from "./access/types";
 import { ACCOUNTS, signInPage } from "./support/accounts";
+import { UsersAdmin } from "./pages/admin";
 
 test.describe("sign-in", () => {
   for (const role of ROLES) {
@@ -43,29 +44,25 @@ test.describe("sign-in", () => {
 
   test("a disabled user is shut out, including an open session", async ({ browser }) => {
     const email = `temp-${Date.now()}@tarnwell.example`;
-    const admin = await browser.newPage();
-    await signInPage(admin, ACCOUNTS.admin);
-    await admin.goto("/admin/users");
-    await admin.getByLabel("Name").fill("Temporary Tester");
-    await admin.getByLabel("E-mail").fill(email);
-    await admin.getByLabel("Role", { exact: true }).selectOption("viewer");
-    await admin.getByLabel("First password").fill("temporary-password-1");
-    await admin.getByRole("button", { name: "Create user" }).click();
-    await expect(admin.getByRole("cell", { name: email })).toBeVisible();
+    const adminPage = await browser.newPage();
+    await signInPage(adminPage, ACCOUNTS.admin);
+    const admin = await new UsersAdmin(adminPage).goto();
+    await admin.add({ name: "Temporary Tester", email, role: "viewer", password: "temporary-password-1" });
+    await expect(adminPage.getByRole("cell", { name: email })).toBeVisible();
 
     const user = await browser.newPage();
     await signInPage(user, email, "temporary-password-1");
     await expect(user.getByRole("heading", { name: "Dashboard" })).toBeVisible();
 
-    const row = admin.getByRole("row").filter({ hasText: email });
+    const row = admin.row(email);
     // A role change waits for confirmation; cancelling leaves the role as it was.
     await row.getByLabel("Role of Temporary Tester").selectOption("support");
-    const roleDialog = admin.getByRole("dialog", { name: "Change Temporary Tester's role to Support?" });
+    const roleDialog = admin.dialog("Change Temporary Tester's role to Support?");
     await roleDialog.getByRole("button", { name: "Cancel" }).click();
     await expect(row.getByLabel("Role of Temporary Tester")).toHaveValue("viewer");
 
-    await row.getByRole("button", { name: /Disable/ }).click();
-    const dialog = admin.getByRole("dialog", { name: "Disable Temporary Tester's account?" });
+    await admin.disable(email);
+    const dialog = admin.dialog("Disable Temporary Tester's account?");
     await expect(dialog).toContainText(email);
     await expect(row.getByText("active")).toBeVisible();
     await dialog.getByRole("button", { name: "Disable account" }).click();

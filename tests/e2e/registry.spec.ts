@@ -1,14 +1,11 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test } from "@playwright/test";
 import { ACCOUNTS, signInPage } from "./support/accounts";
+import { ProfileCompare, ProfileEditor, ProfilesList } from "./pages/profiles";
+import { BoardsPage, CoolerModelsList } from "./pages/registry";
 
 interface Doc {
   pump: { points: { tempC: number; dutyPct: number }[] };
   fans: { points: { tempC: number; dutyPct: number }[] };
-}
-
-async function setEditorText(page: Page, text: string) {
-  await page.waitForFunction(() => Boolean(window.__loopkeeperEditor));
-  await page.evaluate((t) => window.__loopkeeperEditor!.setText(t), text);
 }
 
 test.describe("profile editor, as an engineer", () => {
@@ -19,26 +16,22 @@ test.describe("profile editor, as an engineer", () => {
       if ((url.protocol === "http:" || url.protocol === "https:") && url.hostname !== "127.0.0.1") offHost.push(req.url());
     });
     await signInPage(page, ACCOUNTS.engineer);
-    await page.goto("/profiles");
-    const name = `Field test ${Date.now()}`;
-    await page.getByLabel("Cooler model", { exact: true }).last().selectOption({ label: "Tarn 360" });
-    await page.getByLabel("Profile name").fill(name);
-    await page.getByRole("button", { name: "Create and open the editor" }).click();
-    await page.waitForURL(/\/profiles\/[0-9a-f-]{36}$/);
-    await expect(page.getByTestId("cooler-name")).toHaveText("Tarn 360");
-    await expect(page.locator(".monaco-editor")).toBeVisible();
-    await expect(page.getByTestId("curve-chart")).toBeVisible();
+    const list = await new ProfilesList(page).goto();
+    const id = await list.start({ cooler: "Tarn 360", name: `Field test ${Date.now()}` });
+    const editor = new ProfileEditor(page);
+    await expect(editor.coolerName).toHaveText("Tarn 360");
+    await expect(editor.editor).toBeVisible();
+    await expect(editor.chart).toBeVisible();
 
     // The starter draft, read back through the API, then an invalid pump point.
-    const id = page.url().split("/").pop()!;
     const detail = (await (await page.request.get(`/api/v1/profiles/${id}`)).json()) as { profile: { draftText: string } };
     const doc = JSON.parse(detail.profile.draftText) as Doc;
     doc.pump.points[0]!.dutyPct = 10;
-    await setEditorText(page, `${JSON.stringify(doc, null, 2)}\n`);
-    const problem = page.getByTestId("problems").getByRole("button", { name: /below the pump's minimum duty/ });
+    await editor.setText(`${JSON.stringify(doc, null, 2)}\n`);
+    const problem = editor.problem(/below the pump's minimum duty/);
     await expect(problem).toBeVisible();
-    await expect(page.locator(".monaco-editor .squiggly-error").first()).toBeVisible();
-    const chart = page.getByTestId("curve-chart");
+    await expect(editor.editor.locator(".squiggly-error").first()).toBeVisible();
+    const chart = editor.chart;
     const pumpRpmBefore = Number(await chart.getAttribute("data-first-pump-rpm"));
 
     // Jump to the problem and fix it by typing: the cursor lands on the value 10.
@@ -48,13 +41,11 @@ test.describe("profile editor, as an engineer", () => {
     await page.keyboard.type("55");
     await expect(problem).toBeHidden();
     await expect.poll(async () => Number(await chart.getAttribute("data-first-pump-rpm"))).toBeGreaterThan(pumpRpmBefore);
-    await expect(page.getByTestId("save-state")).toHaveText("Draft saved");
+    await expect(editor.saveState).toHaveText("Draft saved");
 
     // Publish 1.0.0.
-    await expect(page.getByTestId("suggestion")).toContainText("1.0.0");
-    await expect(page.getByLabel("Version", { exact: true })).toHaveValue("1.0.0");
-    await page.getByLabel("Changelog").fill("First release from the browser test.");
-    await page.getByRole("button", { name: "Publish version" }).click();
+    await editor.expectSuggested("1.0.0");
+    await editor.publish({ changelog: "First release from the browser test." });
     await expect(page.getByText(/Published 1\.0\.0/)).toBeVisible();
 
     // Change a fan point: a curve change suggests a minor bump.
@@ -62,26 +53,23 @@ test.describe("profile editor, as an engineer", () => {
     const next = JSON.parse(current.profile.draftText) as Doc;
     next.fans.points[1]!.dutyPct = Math.min(100, next.fans.points[1]!.dutyPct + 10);
     const fanBefore = await chart.getAttribute("data-fan-rpm-40c");
-    await setEditorText(page, `${JSON.stringify(next, null, 2)}\n`);
+    await editor.setText(`${JSON.stringify(next, null, 2)}\n`);
     await expect.poll(() => chart.getAttribute("data-fan-rpm-40c")).not.toBe(fanBefore);
-    await expect(page.getByTestId("suggestion")).toContainText("1.1.0");
-    await expect(page.getByLabel("Version", { exact: true })).toHaveValue("1.1.0");
-    await page.getByLabel("Changelog").fill("Fans faster at 40 °C.");
-    await page.getByRole("button", { name: "Publish version" }).click();
+    await editor.expectSuggested("1.1.0");
+    await editor.publish({ changelog: "Fans faster at 40 °C." });
     await expect(page.getByText(/Published 1\.1\.0/)).toBeVisible();
 
     // A second publish of the same number is a clear conflict.
-    await expect(page.getByTestId("suggestion")).toContainText("1.1.1");
-    await page.getByLabel("Version", { exact: true }).fill("1.1.0");
-    await page.getByLabel("Changelog").fill("again");
-    await page.getByRole("button", { name: "Publish version" }).click();
-    await expect(page.getByRole("alert").filter({ hasText: /not greater than 1\.1\.0/ })).toBeVisible();
+    await expect(editor.suggestion).toContainText("1.1.1");
+    await editor.publish({ version: "1.1.0", changelog: "again" });
+    await expect(editor.alert(/not greater than 1\.1\.0/)).toBeVisible();
 
     // Compare the two versions.
     await page.getByRole("link", { name: "Compare with 1.0.0" }).click();
     await page.waitForURL(/\/compare\?a=.*&b=/);
-    await expect(page.getByTestId("compare-chart")).toBeVisible();
-    await expect(page.getByTestId("diff-view").locator(".monaco-diff-editor")).toBeVisible();
+    const compare = new ProfileCompare(page);
+    await expect(compare.chart).toBeVisible();
+    await expect(compare.diff).toBeVisible();
 
     expect(offHost, "requests that left 127.0.0.1").toEqual([]);
   });
@@ -92,19 +80,19 @@ test.describe("registry, as a viewer", () => {
     await signInPage(page, ACCOUNTS.viewer);
     const list = (await (await page.request.get("/api/v1/profiles?q=Hush")).json()) as { items: { id: string; name: string }[] };
     const hush = list.items.find((p) => p.name === "Hush")!;
-    await page.goto(`/profiles/${hush.id}`);
-    await expect(page.locator(".monaco-editor")).toBeVisible();
+    const editor = await new ProfileEditor(page).goto(hush.id);
+    await expect(editor.editor).toBeVisible();
     await expect(page.getByText("Read only: your role may not edit profiles.")).toBeVisible();
     // A reader is not told to edit or that drafts save themselves.
-    await expect(page.getByText(/Drafts save themselves/)).toHaveCount(0);
-    await expect(page.getByText(/Edit the JSON/)).toHaveCount(0);
-    await expect(page.getByRole("button", { name: "Publish version" })).toHaveCount(0);
+    await expect(editor.page.getByText(/Drafts save themselves/)).toHaveCount(0);
+    await expect(editor.page.getByText(/Edit the JSON/)).toHaveCount(0);
+    await editor.expectNoButton("Publish version");
     await expect(page.getByText("Import .json")).toHaveCount(0);
 
     // Filtered: earlier runs leave other profiles that can push it to a later page.
-    await page.goto("/profiles?q=Hush");
-    await expect(page.getByRole("link", { name: "Hush" })).toBeVisible();
-    await expect(page.getByRole("button", { name: "Create and open the editor" })).toHaveCount(0);
+    const profiles = await new ProfilesList(page).goto({ q: "Hush" });
+    await expect(profiles.link("Hush")).toBeVisible();
+    await profiles.expectNoButton("Create and open the editor");
 
     const text = `${JSON.stringify({ formatVersion: 1 })}\n`;
     expect((await page.request.put(`/api/v1/profiles/${hush.id}/draft`, { data: { text, baseRevision: 0 } })).status()).toBe(403);
@@ -114,22 +102,21 @@ test.describe("registry, as a viewer", () => {
 
   test("the board revision page shows why a version does not fit", async ({ page }) => {
     await signInPage(page, ACCOUNTS.viewer);
-    await page.goto("/boards");
-    await page.getByRole("link", { name: "0.9.0" }).click();
+    const revision = await (await new BoardsPage(page).goto()).openRevision("0.9.0");
     await expect(page.getByText(/99 bytes but the revision has 96/).first()).toBeVisible();
-    await expect(page.getByRole("button", { name: "Add revision" })).toHaveCount(0);
-    await expect(page.getByRole("button", { name: "Edit limits" })).toHaveCount(0);
+    await revision.expectNoButton("Add revision");
+    await revision.expectNoButton("Edit limits");
   });
 
   test("the editor evaluates a profile on another cooler of the same board, and says whose profile it is", async ({ page }) => {
     await signInPage(page, ACCOUNTS.viewer);
     const list = (await (await page.request.get("/api/v1/profiles?q=Hush")).json()) as { items: { id: string; name: string }[] };
     const hush = list.items.find((p) => p.name === "Hush")!;
-    await page.goto(`/profiles/${hush.id}`);
-    const own = (await page.getByTestId("cooler-name").textContent())!;
-    const chart = page.getByTestId("curve-chart");
+    const editor = await new ProfileEditor(page).goto(hush.id);
+    const own = (await editor.coolerName.textContent())!;
+    const chart = editor.chart;
     await expect(chart).toBeVisible();
-    const picker = page.getByLabel("Evaluate on cooler");
+    const picker = editor.coolerPicker;
     // Its own cooler plus the other coolers of the TC-1 board (tests may have added more).
     await expect.poll(() => picker.locator("option").count()).toBeGreaterThanOrEqual(2);
     await expect(picker.locator("option:checked")).toContainText(`${own} (this profile's cooler)`);
@@ -140,12 +127,12 @@ test.describe("registry, as a viewer", () => {
     await picker.selectOption({ label: otherLabel });
     // The two coolers use different fans, so the plotted fan speed at 40 °C moves.
     await expect.poll(() => chart.getAttribute("data-fan-rpm-40c")).not.toBe(fanBefore);
-    await expect(page.getByTestId("evaluating-other-cooler")).toContainText(`on ${other}`);
-    await expect(page.getByTestId("evaluating-other-cooler")).toContainText(`still belongs to ${own}`);
-    await expect(page.getByTestId("cooler-name")).toHaveText(own);
+    await expect(editor.otherCoolerNote).toContainText(`on ${other}`);
+    await expect(editor.otherCoolerNote).toContainText(`still belongs to ${own}`);
+    await expect(editor.coolerName).toHaveText(own);
 
-    await page.getByRole("button", { name: `Back to ${own}` }).click();
-    await expect(page.getByTestId("evaluating-other-cooler")).toHaveCount(0);
+    await editor.button(`Back to ${own}`).click();
+    await expect(editor.otherCoolerNote).toHaveCount(0);
     await expect.poll(() => chart.getAttribute("data-fan-rpm-40c")).toBe(fanBefore);
   });
 });
@@ -161,9 +148,8 @@ test.describe("registry edits, as an engineer", () => {
     });
     expect(created.status()).toBe(201);
 
-    await page.goto(`/cooler-models?q=${encodeURIComponent(name)}`);
-    await page.getByRole("button", { name: `Edit ${name}` }).click();
-    const form = page.locator("form").filter({ has: page.getByRole("button", { name: "Save changes" }) });
+    const coolers = await new CoolerModelsList(page).goto({ q: name });
+    const form = await coolers.edit(name);
     const fans = form.getByLabel("Number of fans");
     await expect(fans).toHaveValue("2");
     await fans.fill("0");
@@ -171,7 +157,7 @@ test.describe("registry edits, as an engineer", () => {
     await expect(form.getByText("At least 1 fan.")).toBeVisible();
     await fans.fill("3");
     await form.getByRole("button", { name: "Save changes" }).click();
-    await expect(page.getByRole("button", { name: "Save changes" })).toHaveCount(0);
-    await expect(page.getByRole("table", { name: "Cooler models" }).getByRole("row", { name: new RegExp(name) })).toContainText("3 ×");
+    await coolers.expectNoButton("Save changes");
+    await expect(coolers.row(name)).toContainText("3 ×");
   });
 });

@@ -3,6 +3,7 @@ import { expect, request as playwrightRequest, test, type APIRequestContext } fr
 import { Client } from "pg";
 import { writeIntelHex } from "../../lib/engine";
 import { ACCOUNTS, signInPage, signInRequest } from "./support/accounts";
+import { LookupPage, LotsPage } from "./pages/support";
 
 /** The bank image of a seeded demo build, read straight from the test database. */
 async function demoBankImage(version: string): Promise<{ bytes: Buffer; baseAddress: number }> {
@@ -35,8 +36,8 @@ test.describe("support lookup", () => {
 
   test("a demo serial shows its build, curves, newer build and the tach converter", async ({ page }) => {
     await page.getByRole("link", { name: "Serial lookup" }).click();
-    await page.getByLabel("Serial number").fill("tc1-12345");
-    await page.getByRole("button", { name: "Look up" }).click();
+    const lookup = new LookupPage(page);
+    await lookup.lookUp("tc1-12345");
     await expect(page.getByRole("heading", { name: "Serial TC1-00012345" })).toBeVisible();
     await expect(page.getByText("TW-2501", { exact: true })).toBeVisible();
     await expect(page.getByRole("heading", { name: "Slot 1: Quiet 1.0.0" })).toBeVisible();
@@ -48,32 +49,28 @@ test.describe("support lookup", () => {
     await expect(page.getByLabel("Motor pulses per revolution")).toHaveValue("4");
     await page.getByLabel("Reading the customer sees (RPM)").fill("5600");
     await expect(page.getByTestId("tach-real-rpm")).toHaveText("2,800 RPM");
-    await expect(page.getByRole("navigation", { name: "Recent lookups" }).getByText("TC1-00012345")).toBeVisible();
+    await expect(lookup.recentLookups.getByText("TC1-00012345")).toBeVisible();
   });
 
   test("a serial from the withdrawn build's lot shows the warning with its reason", async ({ page }) => {
-    await page.goto("/lookup?serial=TC1-00031000");
-    const warning = page.getByRole("alert").filter({ hasText: "Build 3.0.1 was withdrawn" });
+    const lookup = await new LookupPage(page).goto("TC1-00031000");
+    const warning = lookup.alert("Build 3.0.1 was withdrawn");
     await expect(warning).toBeVisible();
     await expect(warning).toContainText("Quiet 1.1.0");
     await expect(page.getByText(/Quiet\s*1\.1\.0 → 1\.2\.0/)).toBeVisible();
   });
 
   test("an unknown serial and a malformed one say so clearly", async ({ page }) => {
-    await page.goto("/lookup?serial=TC1-00099999");
-    await expect(page.getByRole("alert").filter({ hasText: "Not found" })).toContainText("Serial TC1-00099999 was not found");
-    await page.getByLabel("Serial number").fill("hello");
-    await page.getByRole("button", { name: "Look up" }).click();
+    const lookup = await new LookupPage(page).goto("TC1-00099999");
+    await expect(lookup.alert("Not found")).toContainText("Serial TC1-00099999 was not found");
+    await lookup.lookUp("hello");
     await expect(page.getByText(/"hello" is not a serial number/)).toBeVisible();
   });
 
   test("a good dump is identified, a corrupted one is reported corrupt", async ({ page }) => {
     const { bytes, baseAddress } = await demoBankImage("3.0.0");
-    await page.goto("/lookup");
-    const file = page.getByLabel("Dump file (.bin or .hex)");
-    await file.setInputFiles({ name: "returned-board.hex", mimeType: "text/plain", buffer: Buffer.from(writeIntelHex(new Uint8Array(bytes), baseAddress)) });
-    await page.getByRole("button", { name: "Identify" }).click();
-    const result = page.getByTestId("dump-result");
+    const lookup = await new LookupPage(page).goto();
+    const result = await lookup.identify({ name: "returned-board.hex", mimeType: "text/plain", buffer: Buffer.from(writeIntelHex(new Uint8Array(bytes), baseAddress)) });
     await expect(result.getByText("Dump is intact")).toBeVisible();
     await expect(result.getByText("Exact registry version")).toHaveCount(2);
     await expect(result.getByText(/Quiet v1\.0\.0/)).toBeVisible();
@@ -84,16 +81,14 @@ test.describe("support lookup", () => {
     const at = 8 + 19 + 2 * 1 + 1; // slot 0, pump point 2 duty (docs/bank-format.md)
     altered[at] = altered[at]! + 4;
     altered.writeUInt32LE(zlib.crc32(altered.subarray(0, altered.length - 4)), altered.length - 4);
-    await file.setInputFiles({ name: "altered.bin", mimeType: "application/octet-stream", buffer: altered });
-    await page.getByRole("button", { name: "Identify" }).click();
+    await lookup.identify({ name: "altered.bin", mimeType: "application/octet-stream", buffer: altered });
     await expect(result.getByText("Altered", { exact: true })).toBeVisible();
     await expect(result.getByText("Exact registry version")).toHaveCount(1);
     await expect(result.getByTestId("dump-faults")).toContainText(`pump point 2: ${altered[at] / 2} % here, ${bytes[at]! / 2} % in v1.0.0`);
 
     const corrupted = Buffer.from(bytes);
     corrupted[20] = corrupted[20]! ^ 0xff;
-    await file.setInputFiles({ name: "corrupted.bin", mimeType: "application/octet-stream", buffer: corrupted });
-    await page.getByRole("button", { name: "Identify" }).click();
+    await lookup.identify({ name: "corrupted.bin", mimeType: "application/octet-stream", buffer: corrupted });
     await expect(result.getByText("Dump is corrupt")).toBeVisible();
     await expect(result).toContainText("CRC-32 mismatch");
   });
@@ -141,27 +136,25 @@ test.describe("lots API", () => {
 test.describe("lots page", () => {
   test("a release manager previews a CSV with a bad row: the row is listed and nothing can be imported", async ({ page }) => {
     await signInPage(page, ACCOUNTS.release_manager);
-    await page.goto("/lots");
-    await expect(page.getByRole("cell", { name: "TW-2501" })).toBeVisible();
+    const lots = await new LotsPage(page).goto();
+    await expect(lots.lot("TW-2501")).toBeVisible();
     const base = 600_000 + (Date.now() % 1000) * 100;
     const csv = [
       "lot_code,board_revision,build_version,serial_from,serial_to,produced_on,line",
       `CSV-${base},1.1.0,3.1.0,TC1-${base},TC1-${base + 9},2025-05-02,Line A`,
       `CSV-${base + 1},1.1.0,3.1.0,TC1-${base + 10},TC1-00000001,2025-05-02,Line A`,
     ].join("\n");
-    await page.getByLabel("CSV file").setInputFiles({ name: "lots.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
-    await page.getByRole("button", { name: "Preview" }).click();
+    await lots.previewCsv("lots.csv", csv);
     await expect(page.getByText("1 problem(s); nothing was imported")).toBeVisible();
-    const problems = page.getByRole("table", { name: "Problems by row" });
-    await expect(problems.getByRole("row").nth(1)).toContainText("3serial_toThe last serial must not be below the first.");
-    await expect(page.getByRole("button", { name: "Import", exact: true })).toBeDisabled();
+    await expect(lots.importProblems.getByRole("row").nth(1)).toContainText("3serial_toThe last serial must not be below the first.");
+    await expect(lots.button("Import")).toBeDisabled();
   });
 
   test("a viewer sees the lots but no form to record them", async ({ page }) => {
     await signInPage(page, ACCOUNTS.viewer);
-    await page.goto("/lots");
-    await expect(page.getByRole("cell", { name: "TW-2502" })).toBeVisible();
-    await expect(page.getByRole("heading", { name: "Record a lot" })).toHaveCount(0);
-    await expect(page.getByRole("heading", { name: "Import lots from CSV" })).toHaveCount(0);
+    const lots = await new LotsPage(page).goto();
+    await expect(lots.lot("TW-2502")).toBeVisible();
+    await expect(lots.recordForm).toHaveCount(0);
+    await expect(lots.importForm).toHaveCount(0);
   });
 });

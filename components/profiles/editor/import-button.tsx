@@ -5,7 +5,7 @@ import { apiCall } from "@/lib/api/client";
 import { AppError } from "@/lib/api/errors";
 import { importDraft } from "@/lib/api/operations/profiles";
 import { MAX_PROFILE_BYTES } from "@/lib/api/operations/profile-schemas";
-import { Notice } from "@/components/ui/notice";
+import { ErrorNotice } from "@/components/ui/error-notice";
 import { buttonClass } from "@/components/ui/button";
 
 /** Uploads a .json profile; the server validates it and replaces the draft, then the editor shows it. */
@@ -38,11 +38,7 @@ export function ImportButton({ profileId, onImported }: { profileId: string; onI
         Import .json
         <input ref={input} type="file" accept=".json,application/json" className="sr-only" disabled={busy} onChange={(e) => { const f = e.target.files?.[0]; if (f) void upload(f); }} />
       </label>
-      {error && (
-        <Notice tone="fault" role="alert" title={error.message}>
-          {error.issues && <ul className="list-disc pl-5">{error.issues.map((i, n) => <li key={n}><code className="text-xs">{i.path}</code> {i.message}</li>)}</ul>}
-        </Notice>
-      )}
+      <ErrorNotice error={error} />
     </div>
   );
 }

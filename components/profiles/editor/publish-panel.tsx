@@ -13,6 +13,8 @@ import type { VersionSuggestion } from "@/lib/engine";
 import { Button } from "@/components/ui/button";
 import { Field, Input, Textarea, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { ErrorNotice } from "@/components/ui/error-notice";
+import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 
 const formSchema = publishBody.omit({ text: true });
 type PublishForm = z.infer<typeof formSchema>;
@@ -46,9 +48,9 @@ export function PublishPanel({
       setFollowSuggestion(true);
       void qc.invalidateQueries({ queryKey: operationKey(getProfile, { params: { id: profileId } }) });
     },
+    onError: (err) => showServerIssues(form, err),
   });
   const { errors } = form.formState;
-  const err = publish.error;
   return (
     <form onSubmit={(e) => void form.handleSubmit((v) => publish.mutate(v))(e)} className="space-y-3" noValidate aria-label="Publish a version">
       {suggestion && (
@@ -68,15 +70,7 @@ export function PublishPanel({
       <Field id="pub-changelog" label="Changelog" error={errors.changelog?.message}>
         <Textarea rows={2} {...describedBy("pub-changelog", errors.changelog?.message)} {...form.register("changelog")} />
       </Field>
-      {err && (
-        <Notice tone="fault" role="alert" title={err.message}>
-          {err.issues && err.issues.length > 0 && (
-            <ul className="list-disc pl-5">
-              {err.issues.map((i, n) => <li key={n}>{i.path && <code className="text-xs">{i.path}</code>} {i.message}</li>)}
-            </ul>
-          )}
-        </Notice>
-      )}
+      <ErrorNotice error={publish.error} besideFields={fieldsOf(form)} />
       {publish.isSuccess && <Notice tone="ok" role="status">Published {publish.data.version.version} ({publish.data.version.encodedBytes} B, CRC-32 {hex32(publish.data.version.crc32)}).</Notice>}
       {blocked && <p className="text-sm text-signal-fault">Fix the errors in the problems list before publishing.</p>}
       <Button type="submit" disabled={publish.isPending || blocked}>Publish version</Button>

@@ -13,6 +13,7 @@ import { evaluateEditorText } from "@/lib/registry/editor-evaluation";
 import { Select } from "@/components/ui/field";
 import { CoolerPicker, useCoolerChoices } from "./hardware-picker";
 import { EstimateCaution, Notice } from "@/components/ui/notice";
+import { ErrorNotice } from "@/components/ui/error-notice";
 import { Panel } from "@/components/ui/panel";
 import type { EditorHandle } from "./json-editor";
 import { ImportButton } from "./import-button";
@@ -51,9 +52,7 @@ export function ProfileWorkspace({ id, canWrite }: { id: string; canWrite: boole
   if (q.isPending) return <div className="h-96 animate-pulse rounded-md bg-white shadow-panel" aria-label="Loading the profile" />;
   if (q.isError)
     return (
-      <Notice tone="fault" role="alert" title="Could not load the profile">
-        {q.error.message} <button className="underline" onClick={() => void q.refetch()}>Retry</button>
-      </Notice>
+      <ErrorNotice error={q.error} onRetry={() => void q.refetch()} />
     );
   return <Workspace detail={q.data} canWrite={canWrite} />;
 }

@@ -5,9 +5,9 @@ const REVIEW = ["admin", "engineer"] as const;
 const PROMOTE = ["admin", "release_manager"] as const;
 
 export const buildRows: AccessRow[] = [
-  { file: "app/(app)/builds/page.tsx", kind: "page", method: "GET", url: "/builds", allowed: "all" },
+  { file: "app/(app)/builds/(pipeline)/page.tsx", kind: "page", method: "GET", url: "/builds", allowed: "all" },
   { file: "app/(app)/builds/new/page.tsx", kind: "page", method: "GET", url: "/builds/new", allowed: CREATE },
-  { file: "app/(app)/builds/[id]/page.tsx", kind: "page", method: "GET", url: `/builds/${ANY_UUID}`, allowed: "all" },
+  { file: "app/(app)/builds/[id]/page.tsx", kind: "page", method: "GET", url: `/builds/${ANY_UUID}`, allowed: "all", ok: [200, 404] },
   { file: "app/(app)/admin/mailbox/page.tsx", kind: "page", method: "GET", url: "/admin/mailbox", allowed: ["admin"] },
 
   { file: "app/api/v1/builds/route.ts", kind: "api", method: "GET", url: "/api/v1/builds", allowed: "all" },

@@ -7,10 +7,10 @@ export const registryRows: AccessRow[] = [
   { file: "app/(app)/components/page.tsx", kind: "page", method: "GET", url: "/components", allowed: "all" },
   { file: "app/(app)/cooler-models/page.tsx", kind: "page", method: "GET", url: "/cooler-models", allowed: "all" },
   { file: "app/(app)/boards/page.tsx", kind: "page", method: "GET", url: "/boards", allowed: "all" },
-  { file: "app/(app)/board-revisions/[id]/page.tsx", kind: "page", method: "GET", url: `/board-revisions/${ANY_UUID}`, allowed: "all" },
+  { file: "app/(app)/board-revisions/[id]/page.tsx", kind: "page", method: "GET", url: `/board-revisions/${ANY_UUID}`, allowed: "all", ok: [200, 404] },
   { file: "app/(app)/profiles/page.tsx", kind: "page", method: "GET", url: "/profiles", allowed: "all" },
-  { file: "app/(app)/profiles/[id]/page.tsx", kind: "page", method: "GET", url: `/profiles/${ANY_UUID}`, allowed: "all" },
-  { file: "app/(app)/profiles/[id]/compare/page.tsx", kind: "page", method: "GET", url: `/profiles/${ANY_UUID}/compare`, allowed: "all" },
+  { file: "app/(app)/profiles/[id]/page.tsx", kind: "page", method: "GET", url: `/profiles/${ANY_UUID}`, allowed: "all", ok: [200, 404] },
+  { file: "app/(app)/profiles/[id]/compare/page.tsx", kind: "page", method: "GET", url: `/profiles/${ANY_UUID}/compare`, allowed: "all", ok: [200, 404] },
 
   { file: "app/api/v1/components/route.ts", kind: "api", method: "GET", url: "/api/v1/components?sort=maxRpm&dir=desc", allowed: "all" },
   { file: "app/api/v1/components/route.ts", kind: "api", method: "POST", url: "/api/v1/components", body: { kind: "fan" }, allowed: WRITERS, ok: 422 },

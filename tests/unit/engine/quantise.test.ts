@@ -46,13 +46,15 @@ describe("quantisation of the hysteresis", () => {
         longest = Math.max(longest, trace.length);
         const a = simulateTransient(authored, hw, trace);
         const q = simulateTransient(quantise(authored), hw, trace);
+        // One check per trace (not per sample): the smallest margin of the as-flashed drive over the authored one.
+        let margin = Infinity;
         a.forEach((s, i) => {
-          expect(fanDrive(q[i]!)).toBeGreaterThanOrEqual(fanDrive(s) - 1e-9);
-          expect(q[i]!.pump.dutyPct).toBeGreaterThanOrEqual(s.pump.dutyPct - 1e-9);
+          margin = Math.min(margin, fanDrive(q[i]!) - fanDrive(s), q[i]!.pump.dutyPct - s.pump.dutyPct);
         });
+        expect(margin).toBeGreaterThanOrEqual(-1e-9);
       }),
-      { numRuns: 150 },
+      { numRuns: 100 },
     );
     expect(longest).toBeGreaterThanOrEqual(300);
-  });
+  }, 60_000);
 });

@@ -1,6 +1,11 @@
 import type { Metadata } from "next";
+import { HydrationBoundary } from "@tanstack/react-query";
 import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { can } from "@/lib/auth/roles";
+import { prefetchScreen, screenQuery } from "@/lib/platform/screens/prefetch";
+import { getDb } from "@/db/client";
+import { getProfile } from "@/lib/api/operations/profiles";
+import { profileDetail } from "@/lib/use-cases/profiles/read";
 import { PageHeader } from "@/components/ui/panel";
 import { ProfileWorkspace } from "@/components/profiles/editor/workspace";
 
@@ -10,6 +15,7 @@ export default async function ProfileEditorPage({ params }: { params: Promise<{ 
   const actor = await requirePageActor("read");
   const { id } = await params;
   const canWrite = can(actor.role, "registry:write");
+  const state = await prefetchScreen(actor, [screenQuery(getProfile, { params: { id } }, ({ params: parsed }) => profileDetail(getDb(), parsed))]);
   return (
     <>
       {canWrite ? (
@@ -17,7 +23,9 @@ export default async function ProfileEditorPage({ params }: { params: Promise<{ 
       ) : (
         <PageHeader title="Profile" subtitle="The working draft with its problems, plots and memory for the chosen hardware. Your role may read it, not change it." />
       )}
-      <ProfileWorkspace id={id} canWrite={canWrite} />
+      <HydrationBoundary state={state}>
+        <ProfileWorkspace id={id} canWrite={canWrite} />
+      </HydrationBoundary>
     </>
   );
 }

@@ -5,8 +5,9 @@ import * as builds from "@/db/builds";
 import { auditActor } from "@/lib/platform/auth/actor";
 import { AppError } from "@/lib/api/errors";
 import { checkSlots } from "@/lib/use-cases/builds/check";
+import { listBuildsForPipeline } from "@/lib/use-cases/builds/list";
 
-export const GET = apiRoute(listBuilds, async ({ query }) => ({ items: await builds.listBuilds(getDb(), { stage: query.stage, limit: 500 }) }));
+export const GET = apiRoute(listBuilds, async ({ query }) => listBuildsForPipeline(getDb(), query));
 
 export const POST = apiRoute(createBuild, async ({ actor, body, requestId }) => {
   const db = getDb();

@@ -4,20 +4,10 @@ import { getDb } from "@/db/client";
 import { createLot, listLots } from "@/db/lots";
 import { auditActor } from "@/lib/platform/auth/actor";
 import { toLotView } from "@/lib/use-cases/lots/lot-view";
+import { lotsPage } from "@/lib/use-cases/lots/read";
 import { AppError } from "@/lib/api/errors";
 
-export const GET = apiRoute(listLotsOp, async ({ query }) => {
-  const rows = await listLots(getDb(), {
-    boardModelId: query.board,
-    buildId: query.build,
-    lotCode: query.code,
-    sort: query.sort,
-    dir: query.dir,
-    limit: query.pageSize + 1,
-    offset: (query.page - 1) * query.pageSize,
-  });
-  return { items: rows.slice(0, query.pageSize).map(toLotView), page: query.page, pageSize: query.pageSize, hasMore: rows.length > query.pageSize };
-});
+export const GET = apiRoute(listLotsOp, async ({ query }) => lotsPage(getDb(), query));
 
 export const POST = apiRoute(createLotOp, async ({ actor, body, requestId }) => {
   const db = getDb();

@@ -1,0 +1,5 @@
+import { PageSkeleton } from "@/components/ui/skeleton";
+
+export default function AdminLoading() {
+  return <PageSkeleton title="the administration page" kind="table" />;
+}

@@ -1,0 +1,5 @@
+import { PageSkeleton } from "@/components/ui/skeleton";
+
+export default function BoardRevisionLoading() {
+  return <PageSkeleton title="the board revision" kind="detail" />;
+}

@@ -1,0 +1,5 @@
+import { PageSkeleton } from "@/components/ui/skeleton";
+
+export default function BoardsLoading() {
+  return <PageSkeleton title="the boards" kind="table" />;
+}

@@ -1,0 +1,5 @@
+import { PageSkeleton } from "@/components/ui/skeleton";
+
+export default function BuildsLoading() {
+  return <PageSkeleton title="the builds" kind="columns" />;
+}

@@ -1,0 +1,19 @@
+import "server-only";
+import type { z } from "zod";
+import type { Executor } from "@/db/client";
+import { getProfileDetail, listProfiles } from "@/db/profiles";
+import { AppError } from "@/lib/api/errors";
+import type { profilesQuery } from "@/lib/api/operations/profiles";
+
+/** One page of the profile list with each profile's latest version. Read by the API and the profiles page. */
+export async function profilesPage(db: Executor, query: z.output<typeof profilesQuery>) {
+  const page = await listProfiles(db, query);
+  return { ...page, items: page.items.map((p) => ({ ...p, updatedAt: p.updatedAt.toISOString() })) };
+}
+
+/** A profile with its draft, hardware and published versions. Read by the API and the profile editor page. */
+export async function profileDetail(db: Executor, { id }: { id: string }) {
+  const detail = await getProfileDetail(db, { id });
+  if (!detail) throw new AppError("not_found", "No such profile.");
+  return detail;
+}

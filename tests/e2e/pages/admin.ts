@@ -1,0 +1,51 @@
+import type { Locator } from "@playwright/test";
+import { Screen } from "./screen";
+
+/** /admin/users: people, their roles and state, and the form that adds one. */
+export class UsersAdmin extends Screen {
+  async goto(): Promise<this> {
+    await this.page.goto("/admin/users");
+    return this;
+  }
+
+  async add({ name, email, role, password }: { name: string; email: string; role: string; password: string }): Promise<void> {
+    await this.page.getByLabel("Name").fill(name);
+    await this.page.getByLabel("E-mail").fill(email);
+    await this.page.getByLabel("Role", { exact: true }).selectOption(role);
+    await this.page.getByLabel("First password").fill(password);
+    await this.button("Create user").click();
+  }
+
+  row(email: string): Locator {
+    return this.page.getByRole("row").filter({ hasText: email });
+  }
+
+  async disable(email: string): Promise<void> {
+    await this.row(email).getByRole("button", { name: /Disable/ }).click();
+  }
+}
+
+/** /admin/mailbox: what the app sent, as the local stand-in for mail received it. */
+export class MailboxPage extends Screen {
+  async goto(): Promise<this> {
+    await this.page.goto("/admin/mailbox");
+    return this;
+  }
+
+  message(subject: string): Locator {
+    return this.page.getByText(subject).first();
+  }
+}
+
+/** /admin/audit: every change with who made it, filtered and paged. */
+export class AuditLogPage extends Screen {
+  async goto(filter: Record<string, string> = {}): Promise<this> {
+    const qs = new URLSearchParams(filter).toString();
+    await this.page.goto(qs ? `/admin/audit?${qs}` : "/admin/audit");
+    return this;
+  }
+
+  get table(): Locator {
+    return this.page.getByRole("table", { name: "Audit events" });
+  }
+}

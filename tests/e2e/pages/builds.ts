@@ -1,0 +1,122 @@
+import { expect, type Locator } from "@playwright/test";
+import { Screen } from "./screen";
+
+const STAGES = ["draft", "review", "validation", "pilot", "production", "withdrawn"] as const;
+
+/** /builds: the pipeline, one column per stage. */
+export class BuildsPipeline extends Screen {
+  static readonly stages = STAGES;
+
+  async goto(): Promise<this> {
+    await this.page.goto("/builds");
+    return this;
+  }
+
+  column(stage: (typeof STAGES)[number]): Locator {
+    return this.page.getByTestId(`pipeline-${stage}`);
+  }
+
+  card(version: string): Locator {
+    return this.page.getByRole("link").filter({ hasText: version });
+  }
+
+  get newBuildLink(): Locator {
+    return this.page.getByRole("link", { name: "New build" });
+  }
+}
+
+/** /builds/new: board, version, revision range, slots and the firmware image. */
+export class NewBuildForm extends Screen {
+  async goto(): Promise<this> {
+    await this.page.goto("/builds/new");
+    return this;
+  }
+
+  async describe({ board, version, revisions }: { board: string; version: string; revisions: string }): Promise<void> {
+    await this.page.getByLabel("Board model").selectOption({ label: board });
+    await this.page.getByLabel("Build version").fill(version);
+    await this.page.getByLabel("Board revisions").fill(revisions);
+  }
+
+  slot(n: number): Locator {
+    return this.page.getByLabel(`Slot ${n}`, { exact: true });
+  }
+
+  /** Picks the first profile version whose option text contains `text` (the list is filled once the board is chosen). */
+  async pickSlot(n: number, text: string): Promise<void> {
+    const select = this.slot(n);
+    const option = select.locator("option", { hasText: text }).first();
+    await expect(option).toBeAttached();
+    const value = await option.getAttribute("value");
+    expect(value, `a profile version for slot ${n} containing "${text}"`).toBeTruthy();
+    await select.selectOption(value ?? "");
+  }
+
+  async attachFirmware(name: string, bytes: Buffer): Promise<void> {
+    await this.page.getByLabel("Firmware image").setInputFiles({ name, mimeType: "application/octet-stream", buffer: bytes });
+  }
+
+  /** Submits and waits for the new build's page; answers its path. */
+  async create(): Promise<string> {
+    await this.button("Create build").click();
+    await this.page.waitForURL(/\/builds\/[0-9a-f-]{36}$/);
+    return new URL(this.page.url()).pathname;
+  }
+}
+
+/** /builds/{id}: the bank, slots, evidence, reviews, stage actions and timeline. */
+export class BuildDetail extends Screen {
+  async goto(path: string): Promise<this> {
+    await this.page.goto(path);
+    return this;
+  }
+
+  get bankSha256(): Locator {
+    return this.page.getByTestId("bank-sha256");
+  }
+
+  get timeline(): Locator {
+    return this.page.getByTestId("timeline");
+  }
+
+  get reviews(): Locator {
+    return this.page.getByRole("list", { name: "Reviews" });
+  }
+
+  async expectStage(label: string): Promise<void> {
+    await expect(this.heading).toContainText(label);
+  }
+
+  /** Presses a stage button ("Ask for review", "Promote to lab validation", …) and waits for the heading to show the new stage. */
+  async move(button: string, stageLabel: string): Promise<void> {
+    await this.button(button).click();
+    await this.expectStage(stageLabel);
+  }
+
+  async approve(comment: string): Promise<void> {
+    await this.page.getByLabel("Comment").fill(comment);
+    await this.button("Approve").click();
+  }
+
+  async attachLabReport(name: string, pdf: Buffer): Promise<void> {
+    await this.page.getByLabel("Lab report (PDF)").setInputFiles({ name, mimeType: "application/pdf", buffer: pdf });
+  }
+
+  async attachMeasurements(name: string, csv: Buffer): Promise<void> {
+    await this.page.getByLabel("Measurements (CSV)").setInputFiles({ name, mimeType: "text/csv", buffer: csv });
+  }
+
+  get soundPlot(): Locator {
+    return this.page.getByTestId("sound-plot");
+  }
+
+  async releaseToFactory(notes: string): Promise<void> {
+    await this.page.getByLabel("Release notes").fill(notes);
+    await this.move("Release to the factory", "Factory release");
+  }
+
+  async withdraw(reason: string): Promise<void> {
+    await this.page.getByLabel("Reason for withdrawing").fill(reason);
+    await this.move("Withdraw build", "Withdrawn");
+  }
+}
