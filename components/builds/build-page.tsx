@@ -66,6 +66,9 @@ export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string
                     Download .hex at {hex32(r.baseAddress)} (revision {r.revision})
                   </a>
                 ))}
+                <a href={`/api/v1/builds/${build.id}/vectors`} download title="Stored codes, duty over a temperature sweep and per-tick traces the board's firmware must reproduce (docs/firmware-vectors.md)">
+                  Download firmware test vectors
+                </a>
               </div>
             </Panel>
             <Panel title="Slots">

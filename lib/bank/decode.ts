@@ -18,6 +18,8 @@ import {
   SLOT_FIXED_BYTES,
 } from "./layout";
 import { dutyFromCode, hysteresisFromCode, rampFromCode, tempFromCode } from "./quantise";
+import type { CurveCodes } from "../firmware/codes";
+import { parseSignatureBlock, SIGNATURE_BLOCK_BYTES } from "../signing/signature-block";
 import type { BankIssue, DecodeBankResult, DecodedSlot } from "./types";
 
 /** Smallest slot: fixed fields and two curves of one point each. */
@@ -58,20 +60,25 @@ class SlotReader {
   }
 }
 
-function readCurve(r: SlotReader, name: string): CurveSettings | null {
+function readCurve(r: SlotReader, name: string): { settings: CurveSettings; codes: CurveCodes } | null {
   const count = r.code(`${name} point count`, 255, 1);
   const hyst = r.code(`${name} hysteresis`, MAX_HYSTERESIS_CODE);
   const up = r.code(`${name} ramp-up`, MAX_RAMP_CODE, 1);
   const down = r.code(`${name} ramp-down`, MAX_RAMP_CODE, 1);
   if (count === null || hyst === null || up === null || down === null) return null;
   const points = [];
+  const pointCodes = [];
   for (let i = 0; i < count; i++) {
     const t = r.code(`${name} point ${i} temperature`, MAX_TEMP_CODE);
     const d = r.code(`${name} point ${i} duty`, MAX_DUTY_CODE);
     if (t === null || d === null) return null;
     points.push({ tempC: tempFromCode(t), dutyPct: dutyFromCode(d) });
+    pointCodes.push({ tempCode: t, dutyCode: d });
   }
-  return { points, hysteresisC: hysteresisFromCode(hyst), rampUpPctPerSec: rampFromCode(up), rampDownPctPerSec: rampFromCode(down) };
+  return {
+    settings: { points, hysteresisC: hysteresisFromCode(hyst), rampUpPctPerSec: rampFromCode(up), rampDownPctPerSec: rampFromCode(down) },
+    codes: { hysteresisCode: hyst, rampUpCode: up, rampDownCode: down, points: pointCodes },
+  };
 }
 
 function readSlot(bytes: Uint8Array, offset: number, limit: number, index: number, errors: BankIssue[]): { slot: DecodedSlot | null; next: number } {
@@ -98,9 +105,10 @@ function readSlot(bytes: Uint8Array, offset: number, limit: number, index: numbe
     errors.push({ code: "bank.bad_slot_length", message: `Slot ${index + 1} says it is ${length} bytes but its contents take ${r.at - offset}.`, offset, expected: length, actual: r.at - offset });
     return { slot: null, next: end };
   }
-  const fans: FanCurve = stop === NO_FAN_STOP ? fansCurve : { ...fansCurve, stopBelowTempC: tempFromCode(stop) };
-  const settings: ProfileSettings = { criticalTempC: tempFromCode(critical), sensorLossDutyPct: dutyFromCode(sensorLoss), pump, fans };
-  return { slot: { index, offset, contentHashPrefix: hash, version, settings }, next: end };
+  const fans: FanCurve = stop === NO_FAN_STOP ? fansCurve.settings : { ...fansCurve.settings, stopBelowTempC: tempFromCode(stop) };
+  const settings: ProfileSettings = { criticalTempC: tempFromCode(critical), sensorLossDutyPct: dutyFromCode(sensorLoss), pump: pump.settings, fans };
+  const codes = { criticalTempCode: critical, sensorLossDutyCode: sensorLoss, fanStopTempCode: stop === NO_FAN_STOP ? null : stop, pump: pump.codes, fans: fansCurve.codes };
+  return { slot: { index, offset, contentHashPrefix: hash, version, settings, codes }, next: end };
 }
 
 /**
@@ -151,9 +159,13 @@ export function decodeBank(bytes: Uint8Array): DecodeBankResult {
   if (stored !== computed) {
     errors.push({ code: "bank.crc_mismatch", message: `CRC-32 mismatch: the image stores ${hex32(stored)} at offset ${crcAt} but its bytes give ${hex32(computed)}; the image is damaged.`, offset: crcAt, expected: stored, actual: computed });
   }
-  const erased = bytes.subarray(byteLength).findIndex((b) => b !== ERASED_BYTE);
+  // A board with room keeps the image's signature block right after the CRC (docs/bank-format.md, "Signature").
+  const storedSignature = parseSignatureBlock(bytes, byteLength);
+  if (storedSignature.ok) result.signatureBlock = storedSignature.block;
+  const afterImage = storedSignature.ok ? byteLength + SIGNATURE_BLOCK_BYTES : byteLength;
+  const erased = bytes.subarray(afterImage).findIndex((b) => b !== ERASED_BYTE);
   if (erased !== -1) {
-    const at = byteLength + erased;
+    const at = afterImage + erased;
     errors.push({ code: "bank.trailing_data", message: `Byte ${at} after the bank's CRC holds 0x${bytes[at]!.toString(16).toUpperCase().padStart(2, "0")}; past the image the memory must be erased (0xFF). The header's length is wrong or something else was written there.`, offset: at, expected: ERASED_BYTE, actual: bytes[at] });
   }
   if (result.slotCount === 0) {
