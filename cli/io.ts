@@ -1,4 +1,4 @@
-import { readFileSync } from "node:fs";
+import { readFileSync, writeFileSync } from "node:fs";
 import type { ValidationIssue } from "../lib/engine";
 import { UsageError } from "./args";
 
@@ -16,6 +16,15 @@ export function readBytes(file: string): Uint8Array {
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
     throw new UsageError(code === "ENOENT" ? `${file}: no such file.` : `${file}: cannot be read (${code ?? "error"}).`);
+  }
+}
+
+/** Writes a file; an unwritable path is a usage error. */
+export function writeOutput(file: string, data: Uint8Array | string): void {
+  try {
+    writeFileSync(file, data);
+  } catch (e) {
+    throw new UsageError(`${file}: cannot be written (${(e as NodeJS.ErrnoException).code ?? "error"}).`);
   }
 }
 

@@ -18,6 +18,8 @@ import {
   SLOT_FIXED_BYTES,
 } from "./layout";
 import { dutyFromCode, hysteresisFromCode, rampFromCode, tempFromCode } from "./quantise";
+import type { CurveCodes } from "../firmware/codes";
+import { parseSignatureBlock, SIGNATURE_BLOCK_BYTES } from "../signing/signature-block";
 import type { BankIssue, DecodeBankResult, DecodedSlot } from "./types";
 
 /** Smallest slot: fixed fields and two curves of one point each. */
@@ -39,7 +41,7 @@ class SlotReader {
   /** Next byte, or null (with an error) past the slot end. */
   byte(): number | null {
     if (this.at >= this.end) {
-      this.errors.push({ code: "bank.slot_truncated", message: `Slot ${this.slotIndex} ends at byte ${this.end} but its contents go on; the image is damaged.`, offset: this.at });
+      this.errors.push({ code: "bank.slot_truncated", message: `Slot ${this.slotIndex + 1} ends at byte ${this.end} but its contents go on; the image is damaged.`, offset: this.at });
       return null;
     }
     return this.bytes[this.at++]!;
@@ -51,34 +53,39 @@ class SlotReader {
     const v = this.byte();
     if (v === null) return null;
     if (v > max || v < min) {
-      this.errors.push({ code: "bank.value_out_of_range", message: `Slot ${this.slotIndex}: ${field} byte ${v} at offset ${offset} is outside ${min}–${max}.`, offset, actual: v });
+      this.errors.push({ code: "bank.value_out_of_range", message: `Slot ${this.slotIndex + 1}: ${field} byte ${v} at offset ${offset} is outside ${min}–${max}.`, offset, actual: v });
       return null;
     }
     return v;
   }
 }
 
-function readCurve(r: SlotReader, name: string): CurveSettings | null {
+function readCurve(r: SlotReader, name: string): { settings: CurveSettings; codes: CurveCodes } | null {
   const count = r.code(`${name} point count`, 255, 1);
   const hyst = r.code(`${name} hysteresis`, MAX_HYSTERESIS_CODE);
   const up = r.code(`${name} ramp-up`, MAX_RAMP_CODE, 1);
   const down = r.code(`${name} ramp-down`, MAX_RAMP_CODE, 1);
   if (count === null || hyst === null || up === null || down === null) return null;
   const points = [];
+  const pointCodes = [];
   for (let i = 0; i < count; i++) {
     const t = r.code(`${name} point ${i} temperature`, MAX_TEMP_CODE);
     const d = r.code(`${name} point ${i} duty`, MAX_DUTY_CODE);
     if (t === null || d === null) return null;
     points.push({ tempC: tempFromCode(t), dutyPct: dutyFromCode(d) });
+    pointCodes.push({ tempCode: t, dutyCode: d });
   }
-  return { points, hysteresisC: hysteresisFromCode(hyst), rampUpPctPerSec: rampFromCode(up), rampDownPctPerSec: rampFromCode(down) };
+  return {
+    settings: { points, hysteresisC: hysteresisFromCode(hyst), rampUpPctPerSec: rampFromCode(up), rampDownPctPerSec: rampFromCode(down) },
+    codes: { hysteresisCode: hyst, rampUpCode: up, rampDownCode: down, points: pointCodes },
+  };
 }
 
 function readSlot(bytes: Uint8Array, offset: number, limit: number, index: number, errors: BankIssue[]): { slot: DecodedSlot | null; next: number } {
   const length = bytes[offset]!;
   const minLength = MIN_SLOT_BYTES;
   if (length < minLength || offset + length > limit) {
-    errors.push({ code: "bank.bad_slot_length", message: `Slot ${index} at offset ${offset} says it is ${length} bytes, which does not fit the image (${minLength} bytes at least, ${limit - offset} left).`, offset, actual: length });
+    errors.push({ code: "bank.bad_slot_length", message: `Slot ${index + 1} at offset ${offset} says it is ${length} bytes, which does not fit the image (${minLength} bytes at least, ${limit - offset} left).`, offset, actual: length });
     return { slot: null, next: limit };
   }
   const end = offset + length;
@@ -90,17 +97,18 @@ function readSlot(bytes: Uint8Array, offset: number, limit: number, index: numbe
   const sensorLoss = r.code("sensor-loss duty", MAX_DUTY_CODE);
   const stop = r.byte();
   const stopOk = stop === NO_FAN_STOP || (stop !== null && stop <= MAX_TEMP_CODE);
-  if (!stopOk && stop !== null) errors.push({ code: "bank.value_out_of_range", message: `Slot ${index}: fan stop byte ${stop} is neither 0xFF (none) nor 0–${MAX_TEMP_CODE}.`, offset: r.at - 1, actual: stop });
+  if (!stopOk && stop !== null) errors.push({ code: "bank.value_out_of_range", message: `Slot ${index + 1}: fan stop byte ${stop} is neither 0xFF (none) nor 0–${MAX_TEMP_CODE}.`, offset: r.at - 1, actual: stop });
   const pump = readCurve(r, "pump");
   const fansCurve = pump ? readCurve(r, "fan") : null;
   if (critical === null || sensorLoss === null || !stopOk || pump === null || fansCurve === null) return { slot: null, next: end };
   if (r.at !== end) {
-    errors.push({ code: "bank.bad_slot_length", message: `Slot ${index} says it is ${length} bytes but its contents take ${r.at - offset}.`, offset, expected: length, actual: r.at - offset });
+    errors.push({ code: "bank.bad_slot_length", message: `Slot ${index + 1} says it is ${length} bytes but its contents take ${r.at - offset}.`, offset, expected: length, actual: r.at - offset });
     return { slot: null, next: end };
   }
-  const fans: FanCurve = stop === NO_FAN_STOP ? fansCurve : { ...fansCurve, stopBelowTempC: tempFromCode(stop) };
-  const settings: ProfileSettings = { criticalTempC: tempFromCode(critical), sensorLossDutyPct: dutyFromCode(sensorLoss), pump, fans };
-  return { slot: { index, offset, contentHashPrefix: hash, version, settings }, next: end };
+  const fans: FanCurve = stop === NO_FAN_STOP ? fansCurve.settings : { ...fansCurve.settings, stopBelowTempC: tempFromCode(stop) };
+  const settings: ProfileSettings = { criticalTempC: tempFromCode(critical), sensorLossDutyPct: dutyFromCode(sensorLoss), pump: pump.settings, fans };
+  const codes = { criticalTempCode: critical, sensorLossDutyCode: sensorLoss, fanStopTempCode: stop === NO_FAN_STOP ? null : stop, pump: pump.codes, fans: fansCurve.codes };
+  return { slot: { index, offset, contentHashPrefix: hash, version, settings, codes }, next: end };
 }
 
 /**
@@ -151,9 +159,13 @@ export function decodeBank(bytes: Uint8Array): DecodeBankResult {
   if (stored !== computed) {
     errors.push({ code: "bank.crc_mismatch", message: `CRC-32 mismatch: the image stores ${hex32(stored)} at offset ${crcAt} but its bytes give ${hex32(computed)}; the image is damaged.`, offset: crcAt, expected: stored, actual: computed });
   }
-  const erased = bytes.subarray(byteLength).findIndex((b) => b !== ERASED_BYTE);
+  // A board with room keeps the image's signature block right after the CRC (docs/bank-format.md, "Signature").
+  const storedSignature = parseSignatureBlock(bytes, byteLength);
+  if (storedSignature.ok) result.signatureBlock = storedSignature.block;
+  const afterImage = storedSignature.ok ? byteLength + SIGNATURE_BLOCK_BYTES : byteLength;
+  const erased = bytes.subarray(afterImage).findIndex((b) => b !== ERASED_BYTE);
   if (erased !== -1) {
-    const at = byteLength + erased;
+    const at = afterImage + erased;
     errors.push({ code: "bank.trailing_data", message: `Byte ${at} after the bank's CRC holds 0x${bytes[at]!.toString(16).toUpperCase().padStart(2, "0")}; past the image the memory must be erased (0xFF). The header's length is wrong or something else was written there.`, offset: at, expected: ERASED_BYTE, actual: bytes[at] });
   }
   if (result.slotCount === 0) {
@@ -174,7 +186,7 @@ export function decodeBank(bytes: Uint8Array): DecodeBankResult {
     if (at >= crcAt) {
       const message = `The header gives ${result.slotCount} slots but only ${i} fit before the CRC.`;
       errors.push({ code: "bank.slot_truncated", message, offset: at });
-      for (let j = i; j < result.slotCount; j++) result.undecodable.push({ index: j, offset: at, code: "bank.slot_truncated", reason: `Slot ${j} does not fit before the CRC: ${message}` });
+      for (let j = i; j < result.slotCount; j++) result.undecodable.push({ index: j, offset: at, code: "bank.slot_truncated", reason: `Slot ${j + 1} does not fit before the CRC: ${message}` });
       break;
     }
     const before = errors.length;
@@ -182,7 +194,7 @@ export function decodeBank(bytes: Uint8Array): DecodeBankResult {
     if (slot) result.slots.push(slot);
     else {
       const first = errors[before];
-      result.undecodable.push({ index: i, offset: at, code: first?.code ?? "bank.bad_slot", reason: first?.message ?? `Slot ${i} could not be read.` });
+      result.undecodable.push({ index: i, offset: at, code: first?.code ?? "bank.bad_slot", reason: first?.message ?? `Slot ${i + 1} could not be read.` });
     }
     at = next;
   }

@@ -1,5 +1,5 @@
 import { contentHashHex } from "../profile/canonical";
-import type { CurveSettings } from "../profile/types";
+import { slotCodes, type CurveCodes } from "../firmware/codes";
 import { crc32 } from "../checksums/crc32";
 import {
   BANK_FORMAT_VERSION,
@@ -13,7 +13,6 @@ import {
   NO_FAN_STOP,
   slotBytes,
 } from "./layout";
-import { dutyCode, hysteresisCode, rampDownCode, rampUpCode, tempCode } from "./quantise";
 import type { BankIssue, BankSlotInput, EncodeBankResult } from "./types";
 
 const VERSION_RE = /^(0|[1-9]\d*)\.(0|[1-9]\d*)\.(0|[1-9]\d*)$/;
@@ -26,14 +25,14 @@ export function versionBytes(version: string): [number, number, number] | null {
   return parts.every((p) => p <= 255) ? parts : null;
 }
 
-function writeCurve(out: Uint8Array, at: number, curve: CurveSettings): number {
+function writeCurve(out: Uint8Array, at: number, curve: CurveCodes): number {
   out[at++] = curve.points.length;
-  out[at++] = hysteresisCode(curve.hysteresisC);
-  out[at++] = rampUpCode(curve.rampUpPctPerSec);
-  out[at++] = rampDownCode(curve.rampDownPctPerSec);
+  out[at++] = curve.hysteresisCode;
+  out[at++] = curve.rampUpCode;
+  out[at++] = curve.rampDownCode;
   for (const p of curve.points) {
-    out[at++] = tempCode(p.tempC);
-    out[at++] = dutyCode(p.dutyPct);
+    out[at++] = p.tempCode;
+    out[at++] = p.dutyCode;
   }
   return at;
 }
@@ -44,10 +43,10 @@ function checkSlots(slots: readonly BankSlotInput[], memoryBytes: number | undef
   if (slots.length > MAX_SLOTS) errors.push({ code: "bank.too_many_slots", message: `A bank holds at most ${MAX_SLOTS} slots; remove ${slots.length - MAX_SLOTS}.` });
   slots.forEach((s, i) => {
     if (!versionBytes(s.version)) {
-      errors.push({ code: "bank.version_not_encodable", message: `Slot ${i}: version "${s.version}" must be x.y.z with each part 0–255 and no pre-release or build suffix.` });
+      errors.push({ code: "bank.version_not_encodable", message: `Slot ${i + 1}: version "${s.version}" must be x.y.z with each part 0–255 and no pre-release or build suffix.` });
     }
     if (s.contentHashHex !== undefined && !/^[0-9a-fA-F]{16,64}$/.test(s.contentHashHex)) {
-      errors.push({ code: "bank.bad_content_hash", message: `Slot ${i}: content hash must be 16 to 64 hex digits.` });
+      errors.push({ code: "bank.bad_content_hash", message: `Slot ${i + 1}: content hash must be 16 to 64 hex digits.` });
     }
     const numbers = [s.profile.criticalTempC, s.profile.sensorLossDutyPct, s.profile.fans.stopBelowTempC ?? 0];
     for (const curve of [s.profile.pump, s.profile.fans]) {
@@ -55,15 +54,15 @@ function checkSlots(slots: readonly BankSlotInput[], memoryBytes: number | undef
       for (const p of curve.points) numbers.push(p.tempC, p.dutyPct);
     }
     if (!numbers.every((n) => typeof n === "number" && Number.isFinite(n))) {
-      errors.push({ code: "bank.value_not_finite", message: `Slot ${i}: every stored value must be a finite number; validate the profile first.` });
+      errors.push({ code: "bank.value_not_finite", message: `Slot ${i + 1}: every stored value must be a finite number; validate the profile first.` });
     }
     for (const [name, curve] of [["pump", s.profile.pump], ["fans", s.profile.fans]] as const) {
       if (curve.points.length < 1) {
-        errors.push({ code: "bank.bad_point_count", message: `Slot ${i}: the ${name} curve needs at least 1 point.` });
+        errors.push({ code: "bank.bad_point_count", message: `Slot ${i + 1}: the ${name} curve needs at least 1 point.` });
       }
     }
     if (slotBytes(s.profile.pump.points.length, s.profile.fans.points.length) > 255) {
-      errors.push({ code: "bank.slot_too_large", message: `Slot ${i}: a slot holds at most 255 bytes; use at most 32 points per curve.` });
+      errors.push({ code: "bank.slot_too_large", message: `Slot ${i + 1}: a slot holds at most 255 bytes; use at most 32 points per curve.` });
     }
   });
   if (errors.length > 0) return errors;
@@ -112,11 +111,13 @@ function encode(slots: readonly BankSlotInput[], options: { memoryBytes?: number
     const hash = (slot.contentHashHex ?? contentHashHex(profile)).slice(0, HASH_PREFIX_BYTES * 2);
     for (let i = 0; i < HASH_PREFIX_BYTES; i++) out[at++] = parseInt(hash.slice(i * 2, i * 2 + 2), 16);
     for (const part of versionBytes(slot.version)!) out[at++] = part;
-    out[at++] = tempCode(profile.criticalTempC);
-    out[at++] = dutyCode(profile.sensorLossDutyPct);
-    out[at++] = profile.fans.stopBelowTempC === undefined ? NO_FAN_STOP : tempCode(profile.fans.stopBelowTempC);
-    at = writeCurve(out, at, profile.pump);
-    at = writeCurve(out, at, profile.fans);
+    // The same integers the as-flashed preview and the firmware vectors are computed from.
+    const codes = slotCodes(profile);
+    out[at++] = codes.criticalTempCode;
+    out[at++] = codes.sensorLossDutyCode;
+    out[at++] = codes.fanStopTempCode ?? NO_FAN_STOP;
+    at = writeCurve(out, at, codes.pump);
+    at = writeCurve(out, at, codes.fans);
   }
   const crc = crc32(out, 0, 0, size - CRC_BYTES);
   new DataView(out.buffer).setUint32(size - CRC_BYTES, crc, true);

@@ -1,3 +1,5 @@
+import type { SlotCodes } from "../firmware/codes";
+import type { SignatureBlock } from "../signing/signature-block";
 import type { ProfileSettings } from "../profile/types";
 
 /** A problem found while encoding or decoding a bank image. */
@@ -34,6 +36,8 @@ export interface DecodedSlot {
   version: string;
   /** Quantised settings as stored. */
   settings: ProfileSettings;
+  /** The stored integers themselves, as firmware reads them. */
+  codes: SlotCodes;
 }
 
 /** A slot the header announces but whose bytes cannot be read as a slot. */
@@ -55,6 +59,8 @@ export interface DecodeBankResult {
   /** Length the header gives, bytes (the image may be followed by unused memory). */
   byteLength?: number;
   crc?: { stored: number; computed: number };
+  /** The signature block a board with room stores right after the CRC, when present. */
+  signatureBlock?: SignatureBlock;
   /** Slots that could be read (also when the CRC does not match, to help support). */
   slots: DecodedSlot[];
   /** Slots the header announces that could not be read, each with why. */

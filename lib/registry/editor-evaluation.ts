@@ -16,6 +16,7 @@ import {
   type ProfileSettings,
   type ValidationIssue,
 } from "@/lib/engine";
+import { flashedStateAt, slotCodes } from "@/lib/firmware";
 import { fitRange, misfitReasons, rangeFitMessage, type RevisionCapacity } from "./range-fit";
 
 /** One plotted temperature: authored and as-flashed speeds, and the estimated sound level. */
@@ -74,7 +75,8 @@ export function coolingBranchRpm(profile: ProfileSettings, hw: HardwareContext, 
 
 /**
  * What the editor shows for one text: the engine's issues for the chosen hardware,
- * and speeds (authored and after quantise, the board's 0.5 °C / 0.5 % steps) and noise
+ * and speeds (authored, and as flashed: the stored codes through the firmware's integer
+ * control law, lib/firmware, the same path as the firmware vectors) and noise
  * (coolerNoise, via evaluateCurves) over the plot range (plotRangeC).
  */
 export function evaluateEditorText(text: string, hw: HardwareContext): EditorEvaluation {
@@ -85,17 +87,21 @@ export function evaluateEditorText(text: string, hw: HardwareContext): EditorEva
   const opts = { ...plotRangeC(profile), stepC: PLOT_STEP_C };
   try {
     const authored = evaluateCurves(profile, hw, opts);
-    const flashed = evaluateCurves(flashedProfile, hw, opts);
-    const rows = authored.map((r, i) => ({
-      tempC: r.tempC,
-      pumpRpm: Math.round(r.pumpRpm),
-      fanRpm: Math.round(r.fanRpm),
-      pumpRpmFlashed: Math.round(flashed[i]?.pumpRpm ?? r.pumpRpm),
-      fanRpmFlashed: Math.round(flashed[i]?.fanRpm ?? r.fanRpm),
-      soundDbA: Math.round(r.soundDbA1m * 10) / 10,
-      pumpRpmFalling: Math.round(coolingBranchRpm(profile, hw, "pump", r.tempC)),
-      fanRpmFalling: Math.round(coolingBranchRpm(profile, hw, "fans", r.tempC)),
-    }));
+    // As flashed: the stored integer codes through the firmware's integer control law, the path the firmware vectors use.
+    const codes = slotCodes(profile);
+    const rows = authored.map((r) => {
+      const flashed = flashedStateAt(codes, hw, r.tempC);
+      return {
+        tempC: r.tempC,
+        pumpRpm: Math.round(r.pumpRpm),
+        fanRpm: Math.round(r.fanRpm),
+        pumpRpmFlashed: Math.round(flashed.pumpRpm),
+        fanRpmFlashed: Math.round(flashed.fanRpm),
+        soundDbA: Math.round(r.soundDbA1m * 10) / 10,
+        pumpRpmFalling: Math.round(coolingBranchRpm(profile, hw, "pump", r.tempC)),
+        fanRpmFalling: Math.round(coolingBranchRpm(profile, hw, "fans", r.tempC)),
+      };
+    });
     return { issues: result.issues, profile, rows, flashed: flashedProfile };
   } catch {
     // A document that passed the schema but that the evaluator refuses (e.g. an extreme value) shows its issues without plots.

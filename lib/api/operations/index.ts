@@ -4,6 +4,7 @@ import * as admin from "./admin";
 import * as registry from "./registry";
 import * as profiles from "./profiles";
 import * as builds from "./builds";
+import * as firmware from "./firmware";
 import * as support from "./support";
 
 function opsOf(mod: Record<string, unknown>): Operation[] {
@@ -19,5 +20,6 @@ export const allOperations: Operation[] = [
   ...opsOf(registry),
   ...opsOf(profiles),
   ...opsOf(builds),
+  ...opsOf(firmware),
   ...opsOf(support),
 ];

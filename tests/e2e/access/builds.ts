@@ -22,6 +22,7 @@ export const buildRows: AccessRow[] = [
   { file: "app/api/v1/builds/[id]/waiver/route.ts", kind: "api", method: "POST", url: `/api/v1/builds/${ANY_UUID}/waiver`, body: { reason: "" }, allowed: PROMOTE, ok: 422 },
   { file: "app/api/v1/builds/[id]/evidence/route.ts", kind: "api", method: "POST", url: `/api/v1/builds/${ANY_UUID}/evidence`, allowed: PROMOTE, ok: 400 },
   { file: "app/api/v1/builds/[id]/bank/route.ts", kind: "api", method: "GET", url: `/api/v1/builds/${ANY_UUID}/bank?format=bin`, allowed: "all", ok: 404 },
+  { file: "app/api/v1/builds/[id]/vectors/route.ts", kind: "api", method: "GET", url: `/api/v1/builds/${ANY_UUID}/vectors`, allowed: "all", ok: 404 },
   { file: "app/api/v1/uploads/route.ts", kind: "api", method: "POST", url: "/api/v1/uploads", allowed: CREATE, ok: 400 },
   { file: "app/api/v1/uploads/[id]/route.ts", kind: "api", method: "GET", url: `/api/v1/uploads/${ANY_UUID}`, allowed: "all", ok: 404 },
   { file: "app/api/v1/mailbox/route.ts", kind: "api", method: "GET", url: "/api/v1/mailbox", allowed: ["admin"] },

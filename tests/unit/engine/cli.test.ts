@@ -36,7 +36,7 @@ beforeAll(() => {
 
 describe("cli help and usage", { timeout: 120_000 }, () => {
   it("--help and -h exit 0 for every command, with its options and an example", () => {
-    expect(COMMANDS.map((c) => c.name)).toEqual(expect.arrayContaining(["validate", "evaluate", "bank", "inspect", "tach"]));
+    expect(COMMANDS.map((c) => c.name)).toEqual(expect.arrayContaining(["validate", "evaluate", "bank", "inspect", "verify", "vectors", "header", "tach"]));
     for (const command of COMMANDS) {
       const r = cli(command.name, "--help");
       expect(r.code, `${command.name} --help`).toBe(0);
@@ -175,8 +175,40 @@ describe("cli bank and inspect", { timeout: 60_000 }, () => {
       const i = cli("inspect", f);
       expect(i.code).toBe(0);
       expect(i.stdout).toMatch(/CRC-32 stored 0x[0-9A-F]{8}, computed 0x[0-9A-F]{8}: match/);
-      expect(i.stdout).toMatch(/slot 1: v2\.3\.1/);
+      // Slots are counted from 1 in what people read (the JSON keeps the 0-based position).
+      expect(i.stdout).toMatch(/slot 1: v1\.0\.0[\s\S]*slot 2: v2\.3\.1/);
     }
+  });
+
+  it("vectors: writes the same bank as `bank` with its stored codes, sweep and traces; refuses a profile that breaks the board's limits", () => {
+    const bin2 = tmp("bank-for-vectors.bin");
+    const out = tmp("vectors.json");
+    expect(cli("bank", quiet, perf, "--hardware", hw, "--out", bin2, "--versions", "1.0.0,2.3.1").code).toBe(0);
+    const r = cli("vectors", quiet, perf, "--hardware", hw, "--out", out, "--versions", "1.0.0,2.3.1");
+    expect(r.code, r.stderr).toBe(0);
+    expect(r.stdout).toMatch(/Wrote .*vectors\.json: 2 slots/);
+    const v = JSON.parse(readFileSync(out, "utf8")) as { bank: { hex: string }; slots: { version: string; sweep: { tempCode: number[] }; traces: { name: string; tempDeciC: (number | null)[]; pumpDutyCode: number[] }[] }[] };
+    // The vectors describe exactly the image `bank` writes.
+    expect(v.bank.hex).toBe(Buffer.from(readFileSync(bin2)).toString("hex"));
+    expect(v.slots.map((s) => s.version)).toEqual(["1.0.0", "2.3.1"]);
+    for (const s of v.slots) {
+      expect(s.sweep.tempCode).toHaveLength(201);
+      expect(s.traces.some((t) => t.tempDeciC.includes(null))).toBe(true);
+      for (const t of s.traces) expect(t.pumpDutyCode).toHaveLength(t.tempDeciC.length);
+    }
+    const broken = tmp("broken-sensor-loss.json", readFileSync(quiet, "utf8").replace(/"sensorLossDutyPct":\s*100/, '"sensorLossDutyPct": 0'));
+    const bad = cli("vectors", broken, "--hardware", hw, "--out", tmp("never.json"));
+    expect(bad.code).toBe(1);
+    noStack(bad.stderr);
+  });
+
+  it("header: writes the C header and source into the folder; a missing --out is a usage error", () => {
+    const out = path.join(dir, "c-ref");
+    const r = cli("header", "--out", out);
+    expect(r.code, r.stderr).toBe(0);
+    expect(readFileSync(path.join(out, "loopkeeper_bank.h"), "utf8")).toMatch(/#define LK_CRC32_CHECK 0xCBF43926u/);
+    expect(readFileSync(path.join(out, "loopkeeper_bank.c"), "utf8")).toMatch(/lk_control_tick/);
+    expect(cli("header").code).toBe(2);
   });
 
   it("identifies slots against a known list", () => {
