@@ -1,9 +1,11 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useState } from "react";
 import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
-import { clearSignInThrottle, listEveryonesTokens, listSignInThrottle, revokeAnyToken } from "@/lib/api/operations/admin";
-import { ConfirmButton } from "@/components/ui/confirm-button";
+import { clearSignInThrottle, listEveryonesTokens, listSignInThrottle, revokeAnyToken, type OwnedTokenView } from "@/lib/api/operations/admin";
+import { Button } from "@/components/ui/button";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { Badge } from "@/components/ui/badge";
@@ -24,12 +26,16 @@ export function AccessAdmin() {
   const qc = useQueryClient();
   const throttle = useQuery(apiQuery(listSignInThrottle, {}));
   const tokens = useQuery(apiQuery(listEveryonesTokens, { query: { live: "true" } }));
+  const [unlocking, setUnlocking] = useState<{ email: string; failures: number } | null>(null);
+  const [revoking, setRevoking] = useState<OwnedTokenView | null>(null);
   const unlock = useMutation({
     mutationFn: (email: string) => apiCall(clearSignInThrottle, { body: { email } }),
+    onSuccess: () => setUnlocking(null),
     onSettled: () => void qc.invalidateQueries({ queryKey: operationKey(listSignInThrottle) }),
   });
   const revoke = useMutation({
     mutationFn: (id: string) => apiCall(revokeAnyToken, { params: { id } }),
+    onSuccess: () => setRevoking(null),
     onSettled: () => void qc.invalidateQueries({ queryKey: operationKey(listEveryonesTokens) }),
   });
   const windowMinutes = throttle.data?.windowMinutes ?? 15;
@@ -41,7 +47,6 @@ export function AccessAdmin() {
           Wrong passwords slow down the client that sent them (2 free tries, then a doubling wait); the account&apos;s owner on a device with no recent failure still signs in.
           Counts cover the last {windowMinutes} minutes. Unlock an account only after its owner confirms the failures were theirs.
         </p>
-        {unlock.error && <div className="mb-3"><Notice tone="fault" role="alert">{unlock.error.message}</Notice></div>}
         {unlock.isSuccess && <div className="mb-3"><Notice tone="ok" role="status">Failed sign-ins forgotten ({unlock.data.cleared} records).</Notice></div>}
         <Table caption="Accounts with failed sign-ins">
           <thead>
@@ -66,9 +71,9 @@ export function AccessAdmin() {
                 <Td className="tabular-nums">{waitText(a.longestWaitSec)}</Td>
                 <Td className="tabular-nums">{utc(a.windowEndsAt)}</Td>
                 <Td>
-                  <ConfirmButton label="Unlock" title={`Unlock ${a.email}?`} confirmLabel="Unlock" disabled={unlock.isPending} onConfirm={() => unlock.mutate(a.email)}>
-                    Forgets all {a.failures} failed sign-ins on {a.email} from every client, so a client that was guessing may try again at once. This is recorded in the audit log.
-                  </ConfirmButton>
+                  <Button variant="secondary" onClick={() => setUnlocking(a)}>
+                    Unlock…
+                  </Button>
                 </Td>
               </tr>
             ))}
@@ -96,7 +101,6 @@ export function AccessAdmin() {
         )}
       </Panel>
       <Panel title="Live API tokens of everyone">
-        {revoke.error && <div className="mb-3"><Notice tone="fault" role="alert">{revoke.error.message}</Notice></div>}
         {revoke.isSuccess && <div className="mb-3"><Notice tone="ok" role="status">Token {revoke.data.token.name} revoked.</Notice></div>}
         <Table caption="Live API tokens">
           <thead>
@@ -126,9 +130,9 @@ export function AccessAdmin() {
                   {t.revokedAt ? (
                     <Badge tone="fault">revoked</Badge>
                   ) : (
-                    <ConfirmButton label="Revoke" title={`Revoke ${t.userName}'s token “${t.name}”?`} confirmLabel="Revoke token" disabled={revoke.isPending} onConfirm={() => revoke.mutate(t.id)}>
-                      Every script or machine using the token {t.tokenPrefix}… stops working at once. A revoked token cannot be brought back; its owner makes a new one.
-                    </ConfirmButton>
+                    <Button variant="secondary" onClick={() => setRevoking(t)}>
+                      Revoke…
+                    </Button>
                   )}
                 </Td>
               </tr>
@@ -136,6 +140,28 @@ export function AccessAdmin() {
           </tbody>
         </Table>
       </Panel>
+      <ConfirmDialog
+        open={unlocking !== null}
+        title={`Unlock ${unlocking?.email ?? ""}`}
+        description={`Forgets all ${unlocking?.failures ?? 0} failed sign-ins on ${unlocking?.email ?? ""} from every client, so a client that was guessing may try again at once. This is recorded in the audit log.`}
+        confirmLabel="Unlock"
+        pending={unlock.isPending}
+        onConfirm={() => unlocking && unlock.mutate(unlocking.email)}
+        onClose={() => setUnlocking(null)}
+      >
+        {unlock.error && <Notice tone="fault" role="alert">{unlock.error.message}</Notice>}
+      </ConfirmDialog>
+      <ConfirmDialog
+        open={revoking !== null}
+        title={`Revoke ${revoking?.userName ?? ""}'s token “${revoking?.name ?? ""}”`}
+        description={`Every script or machine using the token ${revoking?.tokenPrefix ?? ""}… stops working at once. A revoked token cannot be brought back; its owner makes a new one.`}
+        confirmLabel="Revoke token"
+        pending={revoke.isPending}
+        onConfirm={() => revoking && revoke.mutate(revoking.id)}
+        onClose={() => setRevoking(null)}
+      >
+        {revoke.error && <Notice tone="fault" role="alert">{revoke.error.message}</Notice>}
+      </ConfirmDialog>
     </div>
   );
 }

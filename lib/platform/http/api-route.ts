@@ -12,6 +12,7 @@ import { logger } from "@/lib/platform/log";
 import { readCappedBody } from "@/lib/platform/http/raw-body";
 import { findUnsafeText, jsonNestingDepth, unsafeTextReason } from "@/lib/validation/text";
 import { MAX_DEPTH } from "@/lib/validation/hostile";
+import { MissingObjectError } from "@/lib/platform/storage/types";
 import { enforceRequestBudget } from "@/lib/platform/http/rate-limit";
 
 const DEFAULT_MAX_BODY = 256 * 1024;
@@ -97,6 +98,8 @@ export async function resolveActor(req: NextRequest): Promise<Actor | null> {
 }
 
 export function errorResponse(err: unknown, requestId: string): NextResponse {
+  // A row that points at bytes storage no longer has: the caller can upload again, it is not our crash.
+  if (err instanceof MissingObjectError) return errorResponse(new AppError("gone", "A stored file this needs is no longer in file storage; upload it again."), requestId);
   const known = fromDbError(err);
   if (known) {
     return NextResponse.json(known.toBody(), { status: known.status, headers: { "x-request-id": requestId, ...known.headers } });
