@@ -780,6 +780,26 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/builds/{id}/vectors": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Firmware test vectors of the build's stored bank image: stored codes, duty codes over a temperature sweep and per-tick transient traces (docs/firmware-vectors.md), as a JSON download
+         * @description Roles: admin, engineer, release_manager, support, viewer.
+         */
+        get: operations["downloadBuildVectors"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/v1/lots": {
         parameters: {
             query?: never;
@@ -1481,10 +1501,9 @@ export interface operations {
                 content: {
                     "application/json": {
                         items: {
-                            id: string;
+                            name: string;
                             /** @enum {string} */
                             kind: "fan" | "pump";
-                            name: string;
                             minDutyPct: number;
                             rpmAtMinDuty: number;
                             maxRpm: number;
@@ -1493,6 +1512,7 @@ export interface operations {
                             refRpm: number;
                             soundExponent: number;
                             flowAtMaxRpmLpm: number | null;
+                            id: string;
                             /** Format: date-time */
                             createdAt: string;
                             /** Format: date-time */
@@ -1557,10 +1577,9 @@ export interface operations {
                 content: {
                     "application/json": {
                         component: {
-                            id: string;
+                            name: string;
                             /** @enum {string} */
                             kind: "fan" | "pump";
-                            name: string;
                             minDutyPct: number;
                             rpmAtMinDuty: number;
                             maxRpm: number;
@@ -1569,6 +1588,7 @@ export interface operations {
                             refRpm: number;
                             soundExponent: number;
                             flowAtMaxRpmLpm: number | null;
+                            id: string;
                             /** Format: date-time */
                             createdAt: string;
                             /** Format: date-time */
@@ -1632,10 +1652,9 @@ export interface operations {
                 content: {
                     "application/json": {
                         component: {
-                            id: string;
+                            name: string;
                             /** @enum {string} */
                             kind: "fan" | "pump";
-                            name: string;
                             minDutyPct: number;
                             rpmAtMinDuty: number;
                             maxRpm: number;
@@ -1644,6 +1663,7 @@ export interface operations {
                             refRpm: number;
                             soundExponent: number;
                             flowAtMaxRpmLpm: number | null;
+                            id: string;
                             /** Format: date-time */
                             createdAt: string;
                             /** Format: date-time */
@@ -2497,7 +2517,6 @@ export interface operations {
                             flowAtMaxRpmLpm: number | null;
                         };
                         revisions: {
-                            id: string;
                             revision: string;
                             memoryBytes: number;
                             baseAddress: number;
@@ -2505,6 +2524,7 @@ export interface operations {
                             maxPointsPerCurve: number;
                             pwmFrequencyHz: number;
                             tachPulsesPerRev: number;
+                            id: string;
                         }[];
                         versions: {
                             id: string;
@@ -3791,6 +3811,46 @@ export interface operations {
                         }[];
                         hasMore: boolean;
                     };
+                };
+            };
+            /** @description Error */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        error: {
+                            code: string;
+                            message: string;
+                            issues?: {
+                                path?: string;
+                                message?: string;
+                            }[];
+                        };
+                    };
+                };
+            };
+        };
+    };
+    downloadBuildVectors: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The vectors file (format loopkeeper-firmware-vectors) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": string;
                 };
             };
             /** @description Error */
