@@ -1450,6 +1450,12 @@ export interface operations {
                             requestId: string | null;
                             /** Format: date-time */
                             createdAt: string;
+                            actorName: string;
+                            subject: {
+                                label: string;
+                                href: string | null;
+                            } | null;
+                            sentence: string;
                         }[];
                         page: number;
                         pageSize: number;
@@ -3100,6 +3106,7 @@ export interface operations {
                         slots: {
                             slotIndex: number;
                             profileVersionId: string;
+                            profileId: string;
                             profileName: string;
                             coolerModel: string;
                             version: string;
@@ -4352,6 +4359,8 @@ export interface operations {
                             version: string;
                             boardModelName: string;
                             withdrawnReason: string | null;
+                            withdrawnAt: string | null;
+                            withdrawnByName: string | null;
                             lots: number;
                             boards: number;
                         }[];
