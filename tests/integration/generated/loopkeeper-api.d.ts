@@ -944,6 +944,26 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/lots/import/progress": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Import lots from CSV as importLots does, answering with its progress: one JSON line per batch of rows checked or written, then the result (or the error) as the last line
+         * @description Roles: admin, release_manager.
+         */
+        post: operations["importLotsWithProgress"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/v1/lookup": {
         parameters: {
             query?: never;
@@ -1800,10 +1820,9 @@ export interface operations {
                 content: {
                     "application/json": {
                         items: {
-                            id: string;
+                            name: string;
                             /** @enum {string} */
                             kind: "fan" | "pump";
-                            name: string;
                             minDutyPct: number;
                             rpmAtMinDuty: number;
                             maxRpm: number;
@@ -1812,6 +1831,7 @@ export interface operations {
                             refRpm: number;
                             soundExponent: number;
                             flowAtMaxRpmLpm: number | null;
+                            id: string;
                             /** Format: date-time */
                             createdAt: string;
                             /** Format: date-time */
@@ -1876,10 +1896,9 @@ export interface operations {
                 content: {
                     "application/json": {
                         component: {
-                            id: string;
+                            name: string;
                             /** @enum {string} */
                             kind: "fan" | "pump";
-                            name: string;
                             minDutyPct: number;
                             rpmAtMinDuty: number;
                             maxRpm: number;
@@ -1888,6 +1907,7 @@ export interface operations {
                             refRpm: number;
                             soundExponent: number;
                             flowAtMaxRpmLpm: number | null;
+                            id: string;
                             /** Format: date-time */
                             createdAt: string;
                             /** Format: date-time */
@@ -1951,10 +1971,9 @@ export interface operations {
                 content: {
                     "application/json": {
                         component: {
-                            id: string;
+                            name: string;
                             /** @enum {string} */
                             kind: "fan" | "pump";
-                            name: string;
                             minDutyPct: number;
                             rpmAtMinDuty: number;
                             maxRpm: number;
@@ -1963,6 +1982,7 @@ export interface operations {
                             refRpm: number;
                             soundExponent: number;
                             flowAtMaxRpmLpm: number | null;
+                            id: string;
                             /** Format: date-time */
                             createdAt: string;
                             /** Format: date-time */
@@ -2816,7 +2836,6 @@ export interface operations {
                             flowAtMaxRpmLpm: number | null;
                         };
                         revisions: {
-                            id: string;
                             revision: string;
                             memoryBytes: number;
                             baseAddress: number;
@@ -2824,6 +2843,7 @@ export interface operations {
                             maxPointsPerCurve: number;
                             pwmFrequencyHz: number;
                             tachPulsesPerRev: number;
+                            id: string;
                         }[];
                         versions: {
                             id: string;
@@ -4389,6 +4409,51 @@ export interface operations {
                             message: string;
                         }[];
                     };
+                };
+            };
+            /** @description Error */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        error: {
+                            code: string;
+                            message: string;
+                            issues?: {
+                                path?: string;
+                                message?: string;
+                            }[];
+                        };
+                    };
+                };
+            };
+        };
+    };
+    importLotsWithProgress: {
+        parameters: {
+            query?: {
+                dryRun?: "true" | "false";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "text/csv": string;
+                "text/plain": string;
+            };
+        };
+        responses: {
+            /** @description Lines of JSON: {"type":"progress","phase":"parsing"|"checking"|"writing","done":n,"total":n}, then {"type":"result","result":<importLots answer>} or {"type":"error","status":n,"body":<error body>}. Closing the connection cancels the import; nothing is recorded then. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/x-ndjson": string;
                 };
             };
             /** @description Error */
