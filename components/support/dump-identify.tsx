@@ -13,14 +13,17 @@ import { ErrorNotice } from "@/components/ui/error-notice";
 
 const MATCH_LABEL = { exact: "Exact registry version", altered: "Altered", unknown: "Unknown to the registry", undecodable: "Cannot be read" } as const;
 const MATCH_TONE = { exact: "ok", altered: "fault", unknown: "neutral", undecodable: "fault" } as const;
+const SIGNATURE_TONE = { valid: "ok", invalid: "fault", unverified: "warn", unsigned: "neutral" } as const;
 
 export function DumpIdentify() {
   const id = useId();
   const [file, setFile] = useState<File | null>(null);
+  const [sig, setSig] = useState<File | null>(null);
   const identify = useMutation({
-    mutationFn: (f: File) => {
+    mutationFn: (f: { dump: File; sig: File | null }) => {
       const fd = new FormData();
-      fd.set("file", f);
+      fd.set("file", f.dump);
+      if (f.sig) fd.set("signature", f.sig);
       return apiCall(identifyDump, { raw: { data: fd } });
     },
   });
@@ -31,7 +34,7 @@ export function DumpIdentify() {
         className="flex flex-wrap items-end gap-3"
         onSubmit={(e) => {
           e.preventDefault();
-          if (file) identify.mutate(file);
+          if (file) identify.mutate({ dump: file, sig });
         }}
       >
         <div>
@@ -45,6 +48,18 @@ export function DumpIdentify() {
             aria-describedby={`${id}-hint`}
           />
           <p id={`${id}-hint`} className="mt-1 text-xs text-ink-600">Read back from a returned board; at most 256 KiB.</p>
+        </div>
+        <div>
+          <label htmlFor={`${id}-sig`} className="block text-sm font-medium text-ink-800">Signature (.sig, optional)</label>
+          <input
+            id={`${id}-sig`}
+            type="file"
+            accept=".sig,application/octet-stream"
+            className="mt-1 block text-sm"
+            onChange={(e) => setSig(e.target.files?.[0] ?? null)}
+            aria-describedby={`${id}-sig-hint`}
+          />
+          <p id={`${id}-sig-hint`} className="mt-1 text-xs text-ink-600">Without one, a signature stored after the CRC or the matching build&apos;s is checked.</p>
         </div>
         <Button type="submit" disabled={!file || identify.isPending}>{identify.isPending ? "Reading…" : "Identify"}</Button>
       </form>
@@ -74,6 +89,12 @@ export function DumpIdentify() {
           ) : r.imageSha256 ? (
             <p className="text-sm text-ink-700">No build in the registry has exactly this bank (SHA-256 <code className="text-xs">{r.imageSha256.slice(0, 16)}…</code>).</p>
           ) : null}
+          {r.signature && (
+            <p className="text-sm" data-testid="dump-signature">
+              <Badge tone={SIGNATURE_TONE[r.signature.status]}>{r.signature.status === "unsigned" ? "Unsigned" : `Signed by key ${r.signature.keyId ?? "?"}: ${r.signature.status === "unverified" ? "not checked" : r.signature.status}`}</Badge>{" "}
+              {r.signature.message}
+            </p>
+          )}
           <p className="text-xs text-ink-600">
             {r.fileName ?? "Upload"}: {r.format === "hex" ? "Intel HEX" : "binary"}, {r.sizeBytes} bytes
             {r.crc && <>; CRC-32 stored {r.crc.stored}, computed {r.crc.computed}</>}
