@@ -29,7 +29,17 @@ export async function reviewsWaitingFor(db: Executor, { userId }: { userId: stri
 
 export async function recentActivity(db: Executor, { limit }: { limit: number }) {
   return db
-    .select({ id: auditEvents.id, actorLabel: auditEvents.actorLabel, action: auditEvents.action, entityType: auditEvents.entityType, entityId: auditEvents.entityId, createdAt: auditEvents.createdAt })
+    .select({
+      id: auditEvents.id,
+      actorUserId: auditEvents.actorUserId,
+      actorLabel: auditEvents.actorLabel,
+      action: auditEvents.action,
+      entityType: auditEvents.entityType,
+      entityId: auditEvents.entityId,
+      before: auditEvents.before,
+      after: auditEvents.after,
+      createdAt: auditEvents.createdAt,
+    })
     .from(auditEvents)
     .orderBy(desc(auditEvents.id))
     .limit(limit);

@@ -1,9 +1,9 @@
 import "server-only";
 import { sortRevisions } from "./boards";
 import { and, asc, count, desc, eq, inArray, sql, sum, type SQL } from "drizzle-orm";
-import { boardModels, boardRevisions, builds, productionLots, type ProductionLot } from "./schema";
+import { boardModels, boardRevisions, builds, buildTransitions, productionLots, users, type ProductionLot } from "./schema";
 import type { Database, Executor } from "./client";
-import { recordAudit, type AuditActor } from "./audit";
+import { recordAudit, recordAuditMany, type AuditActor } from "./audit";
 import { AppError } from "@/lib/api/errors";
 import { satisfiesRange } from "@/lib/versioning/semver-helpers";
 import { formatSerial, parseSerial } from "@/lib/serials/serial";
@@ -156,37 +156,89 @@ class RollBack extends Error {
   }
 }
 
+/** Rows checked and written per statement: 1,000 lots × 7 columns stays far below PostgreSQL's 65,535 parameters. */
+const IMPORT_BATCH = 1000;
+
+/** How far an import has got, for a progress bar: rows checked against the database, then rows written. */
+export interface ImportProgress {
+  phase: "checking" | "writing";
+  done: number;
+  total: number;
+}
+
+/** Thrown between batches when the client has gone (cancelled); the transaction rolls back. */
+export class ImportCancelled extends Error {
+  constructor() {
+    super("The import was cancelled; nothing was recorded.");
+  }
+}
+
 /**
  * Checks parsed CSV rows against the database (board, revision, build stage and
  * range, existing lot codes and overlapping lots) and, unless this is a dry run,
  * inserts them all in ONE transaction with one audit event per lot. Any bad row
  * means nothing is written; the issues name row, column and problem.
+ *
+ * Built for files of 100,000 lots: the natural keys (prefix, revision, build version) are
+ * looked up once per distinct combination, lot codes and overlaps are checked a batch at a
+ * time, and lots and their audit events are inserted a batch per statement. `onProgress`
+ * hears after each batch; an aborted `signal` stops between batches and rolls everything back.
  */
 export async function importLots(
   db: Database,
   actor: AuditActor,
-  { rows, dryRun }: { rows: { row: number; lot: LotInput }[]; dryRun: boolean },
+  { rows, dryRun, onProgress, signal }: { rows: { row: number; lot: LotInput }[]; dryRun: boolean; onProgress?: (p: ImportProgress) => void | Promise<void>; signal?: AbortSignal },
 ): Promise<{ issues: LotRowIssue[]; committed: number; checked: number }> {
+  const stopIfCancelled = () => {
+    if (signal?.aborted) throw new ImportCancelled();
+  };
   try {
     const committed = await db.transaction(async (tx) => {
       const issues: LotRowIssue[] = [];
       const ready: { row: number; lot: ResolvedLot }[] = [];
-      for (const { row, lot } of rows) {
-        const { resolved, issues: found } = await resolveLot(tx, lot, { lockBuild: !dryRun });
-        for (const i of found) issues.push({ row, column: COLUMN_OF[i.field], message: i.message });
-        if (!resolved) continue;
-        const [dup] = await tx.select({ id: productionLots.id }).from(productionLots).where(eq(productionLots.lotCode, resolved.lotCode)).limit(1);
-        if (dup) issues.push({ row, column: "lot_code", message: `Lot ${resolved.lotCode} is already recorded.` });
-        const other = await findOverlappingLot(tx, resolved);
-        if (other) issues.push({ row, column: "serial_from", message: overlapMessage(other) });
-        if (!dup && !other) ready.push({ row, lot: resolved });
+      // One lookup per distinct (prefix, revision, build version); a factory file repeats a handful.
+      const keyed = new Map<string, Promise<{ resolved?: ResolvedLot; issues: LotFieldIssue[] }>>();
+      for (let at = 0; at < rows.length; at += IMPORT_BATCH) {
+        stopIfCancelled();
+        const batch: { row: number; lot: ResolvedLot }[] = [];
+        for (const { row, lot } of rows.slice(at, at + IMPORT_BATCH)) {
+          const prefix = parseSerial(lot.serialFrom);
+          const key = `${prefix.ok ? prefix.serial.prefix : lot.serialFrom}\u0000${lot.boardRevision}\u0000${lot.buildVersion}`;
+          let pending = keyed.get(key);
+          if (!pending) {
+            pending = resolveLot(tx, lot, { lockBuild: !dryRun });
+            keyed.set(key, pending);
+          }
+          const { resolved, issues: found } = await pending;
+          for (const i of found) issues.push({ row, column: COLUMN_OF[i.field], message: i.message });
+          if (!resolved) continue;
+          const from = parseSerial(lot.serialFrom);
+          const to = parseSerial(lot.serialTo);
+          if (!from.ok || !to.ok) continue;
+          batch.push({ row, lot: { ...resolved, lotCode: lot.lotCode, serialFrom: from.serial.number, serialTo: to.serial.number, producedOn: lot.producedOn, line: lot.line } });
+        }
+        const taken = batch.length
+          ? new Set((await tx.select({ code: productionLots.lotCode }).from(productionLots).where(inArray(productionLots.lotCode, batch.map((b) => b.lot.lotCode)))).map((r) => r.code))
+          : new Set<string>();
+        const overlaps = await findOverlappingLots(tx, batch.map((b) => b.lot));
+        batch.forEach((b, i) => {
+          const dup = taken.has(b.lot.lotCode);
+          if (dup) issues.push({ row: b.row, column: "lot_code", message: `Lot ${b.lot.lotCode} is already recorded.` });
+          const other = overlaps.get(i);
+          if (other) issues.push({ row: b.row, column: "serial_from", message: overlapMessage(other) });
+          if (!dup && !other) ready.push(b);
+        });
+        await onProgress?.({ phase: "checking", done: Math.min(at + IMPORT_BATCH, rows.length), total: rows.length });
       }
       if (issues.length || dryRun) throw new RollBack(issues);
-      const inserted = await tx.insert(productionLots).values(ready.map((r) => r.lot)).returning();
-      for (const lot of inserted) {
-        await recordAudit(tx, actor, { action: "lot.import", entityType: "production_lot", entityId: lot.id, after: lot });
+      for (let at = 0; at < ready.length; at += IMPORT_BATCH) {
+        stopIfCancelled();
+        const inserted = await tx.insert(productionLots).values(ready.slice(at, at + IMPORT_BATCH).map((r) => r.lot)).returning();
+        await recordAuditMany(tx, actor, inserted.map((lot) => ({ action: "lot.import", entityType: "production_lot", entityId: lot.id, after: lot })));
+        await onProgress?.({ phase: "writing", done: Math.min(at + IMPORT_BATCH, ready.length), total: ready.length });
       }
-      return inserted.length;
+      stopIfCancelled();
+      return ready.length;
     });
     return { issues: [], committed, checked: rows.length };
   } catch (err) {
@@ -194,6 +246,28 @@ export async function importLots(
     if (isExclusionViolation(err)) throw new AppError("conflict", "Another lot overlapping these serials was recorded at the same moment; nothing was imported. Run the preview again.");
     throw err;
   }
+}
+
+/**
+ * For each lot of a batch, an existing lot of its board model whose serials it shares (by the
+ * lot's position in the batch), in one query over the exclusion constraint's GiST index.
+ */
+async function findOverlappingLots(tx: Executor, lots: ResolvedLot[]): Promise<Map<number, { lotCode: string; serialFrom: number; serialTo: number; prefix: string }>> {
+  const found = new Map<number, { lotCode: string; serialFrom: number; serialTo: number; prefix: string }>();
+  if (lots.length === 0) return found;
+  // Arrays travel as one text parameter each; uuids and integers came from the database and the parser.
+  const models = `{${lots.map((l) => l.boardModelId).join(",")}}`;
+  const froms = `{${lots.map((l) => l.serialFrom).join(",")}}`;
+  const tos = `{${lots.map((l) => l.serialTo).join(",")}}`;
+  const res = await tx.execute<{ i: string; lot_code: string; serial_from: string; serial_to: string; prefix: string }>(sql`
+    select distinct on (x.i) x.i, p.lot_code, p.serial_from, p.serial_to, m.serial_prefix as prefix
+    from unnest(${models}::uuid[], ${froms}::bigint[], ${tos}::bigint[]) with ordinality as x(board_model_id, serial_from, serial_to, i)
+    join ${productionLots} p on p.board_model_id = x.board_model_id
+      and int8range(p.serial_from, p.serial_to, '[]') && int8range(x.serial_from, x.serial_to, '[]')
+    join ${boardModels} m on m.id = p.board_model_id
+    order by x.i, p.serial_from`);
+  for (const r of res.rows) found.set(Number(r.i) - 1, { lotCode: r.lot_code, serialFrom: Number(r.serial_from), serialTo: Number(r.serial_to), prefix: r.prefix });
+  return found;
 }
 
 export interface LotFilter {
@@ -265,14 +339,19 @@ export async function listWithdrawnBuilds(db: Executor) {
       version: builds.version,
       boardModelName: boardModels.name,
       withdrawnReason: builds.withdrawnReason,
+      withdrawnAt: buildTransitions.createdAt,
+      withdrawnByName: users.name,
       lots: count(productionLots.id),
       boards: sql<string>`coalesce(${sum(sql`${productionLots.serialTo} - ${productionLots.serialFrom} + 1`)}, 0)`.mapWith(Number),
     })
     .from(builds)
     .innerJoin(boardModels, eq(boardModels.id, builds.boardModelId))
+    // Withdrawn is the last stage, so a build has at most one move into it: who and when.
+    .leftJoin(buildTransitions, and(eq(buildTransitions.buildId, builds.id), eq(buildTransitions.toStage, "withdrawn")))
+    .leftJoin(users, eq(users.id, buildTransitions.actorUserId))
     .leftJoin(productionLots, eq(productionLots.buildId, builds.id))
     .where(eq(builds.stage, "withdrawn"))
-    .groupBy(builds.id, boardModels.name)
+    .groupBy(builds.id, boardModels.name, buildTransitions.id, users.id)
     .orderBy(desc(builds.updatedAt));
 }
 

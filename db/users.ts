@@ -4,6 +4,7 @@ import { users, type Role, type User } from "./schema";
 import type { Database, Executor } from "./client";
 import { recordAudit, type AuditActor } from "./audit";
 import { AppError } from "@/lib/api/errors";
+import { userChangeActions } from "@/lib/audit/describe";
 
 /** What the app may show of a user: never the password hash. */
 export type PublicUser = Pick<User, "id" | "email" | "name" | "role" | "disabledAt" | "createdAt">;
@@ -69,7 +70,11 @@ export async function updateUser(
     if (disabled === false) patch.disabledAt = null;
     const [row] = await tx.update(users).set(patch).where(eq(users.id, id)).returning();
     if (!row) throw new AppError("internal", "User was not updated.");
-    await recordAudit(tx, actor, { action: "user.update", entityType: "user", entityId: id, before: toPublic(current), after: toPublic(row) });
+    // One event per kind of change (role change, disable, re-enable), so the log tells them apart.
+    const actions = userChangeActions(current, row);
+    for (const action of actions.length ? actions : ["user.update"]) {
+      await recordAudit(tx, actor, { action, entityType: "user", entityId: id, before: toPublic(current), after: toPublic(row) });
+    }
     return toPublic(row);
   });
 }

@@ -4,9 +4,11 @@ import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { can } from "@/lib/auth/roles";
 import { getDb } from "@/db/client";
 import { countBuildsByStage, recentActivity, reviewsWaitingFor } from "@/db/dashboard";
+import { describeAuditEvents } from "@/db/audit-subjects";
 import { PageHeader, Panel } from "@/components/ui/panel";
 import { Table, Td, Th, EmptyRow } from "@/components/ui/table";
 import { STAGE_ORDER, STAGE_LABELS } from "@/lib/release/stages";
+import { formatUtc } from "@/lib/time/format";
 
 export const metadata: Metadata = { title: "Dashboard" };
 
@@ -16,7 +18,7 @@ export default async function DashboardPage() {
   const [byStage, waiting, activity] = await Promise.all([
     countBuildsByStage(db),
     can(actor.role, "build:review") ? reviewsWaitingFor(db, { userId: actor.userId }) : Promise.resolve([]),
-    recentActivity(db, { limit: 12 }),
+    recentActivity(db, { limit: 12 }).then((events) => describeAuditEvents(db, events)),
   ]);
   return (
     <>
@@ -25,11 +27,17 @@ export default async function DashboardPage() {
         <Panel title="Builds by stage" className="lg:col-span-3">
           <ol className="grid grid-cols-3 gap-3 md:grid-cols-6" aria-label="Builds by stage">
             {STAGE_ORDER.map((stage) => (
-              <li key={stage} className="rounded border border-ink-200 px-3 py-2">
-                <p className="text-xs uppercase tracking-wide text-ink-600">{STAGE_LABELS[stage]}</p>
-                <p className="text-2xl font-semibold tabular-nums" data-testid={`stage-count-${stage}`}>
-                  {byStage[stage]}
-                </p>
+              <li key={stage}>
+                <Link
+                  href={`/builds?stage=${stage}`}
+                  className="block rounded border border-ink-200 px-3 py-2 text-ink-900 no-underline hover:border-copper-300 hover:bg-copper-50"
+                  aria-label={`${STAGE_LABELS[stage]}: ${byStage[stage]} build${byStage[stage] === 1 ? "" : "s"}, show them`}
+                >
+                  <span className="block text-xs uppercase tracking-wide text-ink-600">{STAGE_LABELS[stage]}</span>
+                  <span className="block text-2xl font-semibold tabular-nums" data-testid={`stage-count-${stage}`}>
+                    {byStage[stage]}
+                  </span>
+                </Link>
               </li>
             ))}
           </ol>
@@ -54,18 +62,16 @@ export default async function DashboardPage() {
             <thead>
               <tr>
                 <Th>When</Th>
-                <Th>Who</Th>
-                <Th>What</Th>
+                <Th>What happened</Th>
               </tr>
             </thead>
             <tbody>
-              {activity.length === 0 && <EmptyRow colSpan={3}>No activity yet.</EmptyRow>}
+              {activity.length === 0 && <EmptyRow colSpan={2}>No activity yet.</EmptyRow>}
               {activity.map((a) => (
                 <tr key={a.id}>
-                  <Td className="whitespace-nowrap tabular-nums text-ink-600">{a.createdAt.toISOString().slice(0, 16).replace("T", " ")}</Td>
-                  <Td>{a.actorLabel}</Td>
+                  <Td className="whitespace-nowrap tabular-nums text-ink-600">{formatUtc(a.createdAt)}</Td>
                   <Td>
-                    <code className="text-xs">{a.action}</code> <span className="text-ink-600">{a.entityType}</span>
+                    {a.subject?.href ? <Link href={a.subject.href}>{a.sentence}</Link> : a.sentence}
                   </Td>
                 </tr>
               ))}

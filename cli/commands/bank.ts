@@ -30,7 +30,7 @@ function bank(files: string[], { hwFile, out, hexFile, versionList }: { hwFile: 
   const human = [
     `Wrote ${out}: ${bytes.length} of ${board.memoryBytes} bytes (${((100 * bytes.length) / board.memoryBytes).toFixed(0)} %), ${slots.length} of ${board.slotCount} slots, CRC-32 ${crcHex}.`,
     ...(hexFile ? [`Wrote ${hexFile}: Intel HEX at base address 0x${board.baseAddress.toString(16).toUpperCase().padStart(8, "0")}.`] : []),
-    ...slotInfo.map((s) => `  slot ${s.slot}: ${s.file} v${s.version} hash ${s.contentHashPrefix}`),
+    ...slotInfo.map((s) => `  slot ${s.slot + 1}: ${s.file} v${s.version} hash ${s.contentHashPrefix}`),
   ].join("\n");
   return { exitCode: 0, human, json: { ok: true, out, hex: hexFile ?? null, byteLength: bytes.length, memoryBytes: board.memoryBytes, crc32: crcHex, slots: slotInfo } };
 }

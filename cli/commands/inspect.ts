@@ -59,11 +59,11 @@ function describe(file: string, r: DumpReport, withKnown: boolean): string[] {
   else if (withKnown && r.imageSha256) lines.push("No build in the registry has this exact bank.");
   for (const s of r.slots) {
     if (s.match === "undecodable") {
-      lines.push(`  slot ${s.slotIndex} @ byte ${s.offset}: UNDECODABLE: ${s.reason ?? ""}`);
+      lines.push(`  slot ${s.slotIndex + 1} @ byte ${s.offset}: UNDECODABLE: ${s.reason ?? ""}`);
       continue;
     }
     const who = !withKnown ? "" : s.profileVersionId ? `: ${MATCH_TEXT[s.match]} ${s.coolerName ? `${s.coolerName} · ` : ""}${s.profileName ?? s.profileVersionId} v${s.knownVersion}` : `: ${MATCH_TEXT[s.match]}`;
-    lines.push(`  slot ${s.slotIndex}: v${s.version} label ${s.contentHashPrefix}${who}`);
+    lines.push(`  slot ${s.slotIndex + 1}: v${s.version} label ${s.contentHashPrefix}${who}`);
     for (const d of s.differences) lines.push(`    differs: ${d}`);
     for (const f of s.findings) lines.push(`    ${f.severity === "error" ? "FAULT" : "warning"} ${f.code}: ${f.message}`);
   }

@@ -30,7 +30,7 @@ function vectors(files: string[], hwFile: string, out: string, versionList: stri
   const ticks = v.slots.reduce((sum, s) => sum + s.traces.reduce((n, t) => n + t.tempDeciC.length, 0), 0);
   const human = [
     `Wrote ${out}: ${v.slots.length} slot${v.slots.length === 1 ? "" : "s"}, bank of ${v.bank.byteLength} bytes (CRC-32 0x${v.bank.crc32.toString(16).toUpperCase().padStart(8, "0")}), ${ticks} trace ticks.`,
-    ...v.slots.map((s, i) => `  slot ${s.index}: ${encoded.value.slots[i]?.file ?? "?"} v${s.version}, ${s.sweep.tempCode.length}-step sweep, traces: ${s.traces.map((t) => t.name).join(", ")}`),
+    ...v.slots.map((s, i) => `  slot ${s.index + 1}: ${encoded.value.slots[i]?.file ?? "?"} v${s.version}, ${s.sweep.tempCode.length}-step sweep, traces: ${s.traces.map((t) => t.name).join(", ")}`),
   ].join("\n");
   return { exitCode: 0, human, json: { ok: true, out, byteLength: v.bank.byteLength, crc32: v.bank.crc32, slots: v.slots.length, traceTicks: ticks } };
 }

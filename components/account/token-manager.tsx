@@ -15,9 +15,10 @@ import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui
 import { Badge } from "@/components/ui/badge";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
+import { formatUtc } from "@/lib/time/format";
 
 function fmt(iso: string | null): string {
-  return iso ? iso.slice(0, 16).replace("T", " ") : "—";
+  return iso ? formatUtc(iso) : "—";
 }
 
 function tokenState(t: TokenView): { label: string; tone: "ok" | "neutral" | "fault" } {

@@ -7,6 +7,7 @@ import { listMailbox } from "@/lib/api/operations/builds";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { Pager } from "@/components/ui/pager";
+import { formatUtc } from "@/lib/time/format";
 
 export function Mailbox() {
   const sp = useSearchParams();
@@ -20,7 +21,7 @@ export function Mailbox() {
       <Table caption="Received messages">
         <thead>
           <tr>
-            <Th>Received (UTC)</Th>
+            <Th>Received</Th>
             <Th>To</Th>
             <Th>Subject and body</Th>
           </tr>
@@ -31,7 +32,7 @@ export function Mailbox() {
           {q.data?.items.length === 0 && <EmptyRow colSpan={3}>No messages yet.</EmptyRow>}
           {q.data?.items.map((m) => (
             <tr key={m.id} data-testid="mail-row">
-              <Td className="whitespace-nowrap tabular-nums">{m.receivedAt.slice(0, 19).replace("T", " ")}</Td>
+              <Td className="whitespace-nowrap tabular-nums">{formatUtc(m.receivedAt, "second")}</Td>
               <Td className="text-xs">{m.toAddresses.join(", ")}</Td>
               <Td>
                 <details>

@@ -1,5 +1,6 @@
 "use client";
 
+import Link from "next/link";
 import type { Role } from "@/lib/auth/roles";
 import { STAGE_LABELS } from "@/lib/release/stages";
 import { EstimateCaution, Notice } from "@/components/ui/notice";
@@ -13,6 +14,8 @@ import { useBuild, useBuildGate } from "./use-build";
 import { ErrorNotice } from "@/components/ui/error-notice";
 
 import { hex32 } from "@/lib/hex/address";
+import { profileVersionHref } from "@/lib/audit/describe";
+import { formatUtc } from "@/lib/time/format";
 
 export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string; role: Role } }) {
   const q = useBuild(id);
@@ -84,9 +87,11 @@ export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string
                   {detail.slots.map((s) => (
                     <tr key={s.slotIndex}>
                       <Td className="tabular-nums">{s.slotIndex + 1}</Td>
-                      <Td className="font-medium">{s.profileName}</Td>
+                      <Td className="font-medium">
+                        <Link className="text-copper-700 underline" href={profileVersionHref(s.profileId, s.version)}>{s.profileName} {s.version}</Link>
+                      </Td>
                       <Td>{s.coolerModel}</Td>
-                      <Td>{s.version}</Td>
+                      <Td className="tabular-nums">{s.version}</Td>
                       <Td><code className="text-xs">{s.boardRange}</code></Td>
                       <Td><code className="text-xs">{s.contentHash.slice(0, 16)}</code></Td>
                     </tr>
@@ -103,12 +108,12 @@ export function BuildPage({ id, viewer }: { id: string; viewer: { userId: string
             <Panel title="Stage timeline">
               <ol className="space-y-2 text-sm" aria-label="Stage timeline" data-testid="timeline">
                 <li>
-                  <span className="font-medium">Created</span> <span className="text-xs text-ink-500">{build.createdAt.slice(0, 16).replace("T", " ")}</span>
+                  <span className="font-medium">Created</span> <span className="text-xs text-ink-500">{formatUtc(build.createdAt)}</span>
                 </li>
                 {detail.transitions.map((t) => (
                   <li key={t.id}>
                     <span className="font-medium">{STAGE_LABELS[t.toStage]}</span> · {t.actorName}{" "}
-                    <span className="text-xs text-ink-500">{t.createdAt.slice(0, 16).replace("T", " ")}</span>
+                    <span className="text-xs text-ink-500">{formatUtc(t.createdAt)}</span>
                     {t.reason && <p className="text-xs text-ink-700">{t.reason}</p>}
                   </li>
                 ))}

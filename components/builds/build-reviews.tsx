@@ -10,6 +10,7 @@ import { Field, Textarea } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { useBuildMutation } from "./use-build";
+import { formatUtc } from "@/lib/time/format";
 
 /**
  * The build's reviews, each saying whether it counts toward the approvals and why not;
@@ -42,7 +43,7 @@ export function BuildReviews({ detail, gate, viewer }: { detail: BuildDetail; ga
                 ) : (
                   <Badge tone={r.resolvedAt ? "neutral" : "warn"}>{r.resolvedAt ? "changes resolved" : "changes requested"}</Badge>
                 )}
-                <span className="text-xs text-ink-500">{r.updatedAt.slice(0, 16).replace("T", " ")}</span>
+                <span className="text-xs text-ink-500">{formatUtc(r.updatedAt)}</span>
                 {isAuthor && r.verdict === "request_changes" && !r.resolvedAt && (
                   <Button variant="secondary" className="ml-auto" onClick={() => resolve.mutate(r.id)}>Mark resolved</Button>
                 )}

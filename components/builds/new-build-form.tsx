@@ -14,6 +14,8 @@ import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 import { Panel } from "@/components/ui/panel";
+import { BankFit } from "./bank-fit";
+import { bankBytesFromVersionImages } from "@/lib/release/bank-fit";
 
 /** The API body without the firmware id: the file is uploaded first, on submit. */
 const formSchema = createBuildBody.omit({ firmwareUploadId: true });
@@ -26,6 +28,8 @@ export function NewBuildForm() {
   const [fileError, setFileError] = useState<string>();
   const form = useForm<FormValues>({ resolver: zodResolver(formSchema), defaultValues: { version: "", revisionRange: "", slots: [] } });
   const boardModelId = useWatch({ control: form.control, name: "boardModelId" });
+  const chosenSlots = useWatch({ control: form.control, name: "slots" });
+  const revisionRange = useWatch({ control: form.control, name: "revisionRange" });
   const options = useQuery(apiQuery(getBuildOptions, { query: { boardModelId } }));
   const create = useMutation({
     mutationFn: async (values: FormValues) => {
@@ -37,7 +41,9 @@ export function NewBuildForm() {
     onError: (err) => showServerIssues(form, err),
   });
   const { errors } = form.formState;
-  const firstBoard = options.data?.boardModels[0]?.id;
+  const candidates = options.data?.candidates ?? [];
+  const chosen = (chosenSlots ?? []).filter(Boolean).map((id) => candidates.find((c) => c.id === id)).filter((c) => c !== undefined);
+  const bankBytes = bankBytesFromVersionImages(chosen.map((c) => c.encodedBytes));
 
   return (
     <Panel>
@@ -59,11 +65,7 @@ export function NewBuildForm() {
             ))}
           </Select>
         </Field>
-        {options.data && boardModelId && (
-          <p className="text-xs text-ink-600">
-            Revisions: {options.data.revisions.map((r) => `${r.revision} (${r.memoryBytes} B, ${r.slotCount} slots, ${r.maxPointsPerCurve} points)`).join(" · ") || "none yet"}
-          </p>
-        )}
+        {options.data && boardModelId && options.data.revisions.length === 0 && <p className="text-xs text-ink-600">This board model has no revisions yet.</p>}
         <div className="grid gap-4 sm:grid-cols-2">
           <Field id="version" label="Build version" hint="Semantic version, e.g. 1.5.0" error={errors.version?.message}>
             <Input {...describedBy("version", errors.version?.message)} {...form.register("version")} autoComplete="off" />
@@ -74,7 +76,11 @@ export function NewBuildForm() {
         </div>
         <fieldset className="space-y-2">
           <legend className="text-sm font-medium text-ink-800">Slots (published profile versions)</legend>
-          {!boardModelId && firstBoard && <p className="text-xs text-ink-600">Pick a board model to see its profile versions.</p>}
+          {options.data && candidates.length === 0 && (
+            <p className="text-xs text-ink-600">
+              {boardModelId ? "No profile version is published for this board model's coolers yet; publish one from Profiles first." : "Pick a board model to see its profile versions."}
+            </p>
+          )}
           {Array.from({ length: slotCount }, (_, i) => (
             <Field key={i} id={`slot-${i}`} label={`Slot ${i + 1}`} error={i === 0 ? errors.slots?.message ?? errors.slots?.[0]?.message : errors.slots?.[i]?.message}>
               <Select {...describedBy(`slot-${i}`)} {...form.register(`slots.${i}`)} defaultValue="">
@@ -90,7 +96,7 @@ export function NewBuildForm() {
           <div className="flex gap-2">
             <Button variant="secondary" disabled={slotCount >= 16} onClick={() => setSlotCount((n) => n + 1)}>Add a slot</Button>
             <Button
-              variant="quiet"
+              variant="secondary"
               disabled={slotCount <= 1}
               onClick={() => {
                 form.setValue("slots", form.getValues("slots").slice(0, slotCount - 1));
@@ -101,6 +107,9 @@ export function NewBuildForm() {
             </Button>
           </div>
         </fieldset>
+        {options.data && boardModelId && options.data.revisions.length > 0 && (
+          <BankFit bankBytes={bankBytes} slots={chosen.length} revisionRange={revisionRange} revisions={options.data.revisions} />
+        )}
         <Field id="firmware" label="Firmware image" hint={`.bin (raw bytes) or Intel HEX .hex, at most ${UPLOAD_MAX_BYTES.firmware / 1024 / 1024} MiB`} error={fileError}>
           <input
             id="firmware"

@@ -4,21 +4,28 @@ import Link from "next/link";
 import { useQuery } from "@tanstack/react-query";
 import { apiQuery } from "@/lib/api/client";
 import { listBuilds } from "@/lib/api/operations/builds";
-import { STAGE_LABELS, STAGE_ORDER } from "@/lib/release/stages";
+import { STAGE_LABELS, STAGE_ORDER, type Stage } from "@/lib/release/stages";
 import { ErrorNotice } from "@/components/ui/error-notice";
 
-/** Builds in columns by stage, newest first in each. */
-export function Pipeline() {
+/** Builds in columns by stage, newest first in each; with `stage`, that stage's builds alone. */
+export function Pipeline({ stage: only }: { stage?: Stage }) {
   // The page loads the first answer on the server under the same key: no placeholder on first paint.
   const q = useQuery(apiQuery(listBuilds, {}));
+  const stages = only ? [only] : STAGE_ORDER;
   if (q.isError) {
     return (
       <ErrorNotice error={q.error} onRetry={() => void q.refetch()} />
     );
   }
   return (
-    <div className="grid gap-3 md:grid-cols-3 xl:grid-cols-6">
-      {STAGE_ORDER.map((stage) => {
+    <>
+    {only && (
+      <p className="mb-3 text-sm text-ink-700">
+        Showing builds at {STAGE_LABELS[only]} only. <Link className="text-copper-700 underline" href="/builds">Show every stage</Link>
+      </p>
+    )}
+    <div className={only ? "grid gap-3 md:grid-cols-2 xl:grid-cols-3" : "grid gap-3 md:grid-cols-3 xl:grid-cols-6"}>
+      {stages.map((stage) => {
         const items = q.data?.items.filter((b) => b.stage === stage) ?? [];
         return (
           <section key={stage} aria-labelledby={`col-${stage}`} className="rounded-md bg-ink-50 p-2" data-testid={`pipeline-${stage}`}>
@@ -43,5 +50,6 @@ export function Pipeline() {
         );
       })}
     </div>
+    </>
   );
 }

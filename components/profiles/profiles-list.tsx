@@ -21,6 +21,7 @@ import { FilterBar } from "@/components/registry/filter-bar";
 import { useListParams, serverTableProps } from "@/components/registry/use-list-params";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
+import { formatUtc } from "@/lib/time/format";
 
 const columns: ColumnDef<ProfileSummaryView>[] = [
   {
@@ -37,7 +38,7 @@ const columns: ColumnDef<ProfileSummaryView>[] = [
   { id: "latest", header: "Latest version", enableSorting: false, cell: (c) => (c.row.original.latestVersion ? <Badge tone="accent">{c.row.original.latestVersion}</Badge> : <Badge>draft only</Badge>) },
   { id: "versions", header: "Versions", enableSorting: false, cell: (c) => <span className="tabular-nums">{c.row.original.versionCount}</span> },
   { id: "owner", header: "Owner", enableSorting: false, cell: (c) => c.row.original.ownerName },
-  { id: "updatedAt", accessorKey: "updatedAt", header: "Updated (UTC)", cell: (c) => <span className="tabular-nums">{c.row.original.updatedAt.slice(0, 16).replace("T", " ")}</span> },
+  { id: "updatedAt", accessorKey: "updatedAt", header: "Updated", cell: (c) => <span className="tabular-nums">{formatUtc(c.row.original.updatedAt)}</span> },
 ];
 
 export function ProfilesList({ canWrite }: { canWrite: boolean }) {

@@ -47,3 +47,12 @@ export const NAV: NavGroup[] = [
     ],
   },
 ];
+
+/**
+ * The one entry to highlight for a path: the entry whose address is the longest that the path
+ * is or lies under ("/builds/new" is New build, not also Builds; "/builds/1f…" is Builds).
+ */
+export function activeNavHref(pathname: string, hrefs: readonly string[]): string | undefined {
+  const matches = hrefs.filter((h) => (h === "/" ? pathname === "/" : pathname === h || pathname.startsWith(`${h}/`)));
+  return matches.sort((a, b) => b.length - a.length)[0];
+}

@@ -3,10 +3,11 @@
 import Link from "next/link";
 import { usePathname } from "next/navigation";
 import { can, type Role } from "@/lib/auth/roles";
-import { NAV } from "./nav";
+import { NAV, activeNavHref } from "./nav";
 
 export function Sidebar({ role }: { role: Role }) {
   const pathname = usePathname();
+  const current = activeNavHref(pathname, NAV.flatMap((g) => g.items.filter((i) => can(role, i.capability)).map((i) => i.href)));
   return (
     <nav aria-label="Main" className="space-y-5">
       {NAV.map((group) => {
@@ -17,7 +18,7 @@ export function Sidebar({ role }: { role: Role }) {
             <p className="px-2 pb-1 text-xs font-semibold uppercase tracking-wider text-ink-400">{group.label}</p>
             <ul className="space-y-0.5">
               {items.map((item) => {
-                const active = item.href === "/" ? pathname === "/" : pathname === item.href || pathname.startsWith(item.href + "/");
+                const active = item.href === current;
                 return (
                   <li key={item.href}>
                     <Link

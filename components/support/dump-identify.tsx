@@ -113,7 +113,7 @@ export function DumpIdentify() {
               <tbody>
                 {r.slots.map((s) => (
                   <tr key={s.slotIndex}>
-                    <Td>{s.slotIndex}</Td>
+                    <Td className="tabular-nums">{s.slotIndex + 1}</Td>
                     <Td className="tabular-nums">{s.version ?? "—"}</Td>
                     <Td>{s.contentHashPrefix ? <code className="text-xs">{s.contentHashPrefix}</code> : "—"}</Td>
                     <Td>

@@ -67,7 +67,10 @@ export function LookupView() {
         </Notice>
       )}
       {q.data && <LookupResultView result={q.data} />}
-      <TachConverter key={q.data?.serial ?? "none"} pulsesPerRev={q.data?.pump.pulsesPerRev} pumpName={q.data?.pump.name} pumpRange={q.data?.slots[0]?.pump} />
+      {/* Held back while a lookup loads: the converter restarts from the looked-up pump's pulses, which would throw away a reading typed meanwhile. */}
+      {!(serial && q.isPending) && (
+        <TachConverter key={q.data?.serial ?? "none"} pulsesPerRev={q.data?.pump.pulsesPerRev} pumpName={q.data?.pump.name} pumpRange={q.data?.slots[0]?.pump} />
+      )}
       <DumpIdentify />
     </div>
   );

@@ -1,6 +1,7 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
+import Link from "next/link";
 import { useUrlParams } from "@/components/ui/use-url-params";
 import { apiQuery, queryFromUrl } from "@/lib/api/client";
 import { listLots, lotsQuery } from "@/lib/api/operations/support";
@@ -93,7 +94,9 @@ export function LotsList({ options }: { options: LotOptions | undefined }) {
               <Td>{l.boardModelName} <span className="text-ink-600">rev {l.revision}</span></Td>
               <Td className="whitespace-nowrap font-mono text-xs">{l.serialFrom} – {l.serialTo}</Td>
               <Td className="tabular-nums">{l.boards.toLocaleString("en")}</Td>
-              <Td className="whitespace-nowrap">{l.buildVersion} <StageBadge stage={l.buildStage} /></Td>
+              <Td className="whitespace-nowrap">
+                <Link href={`/builds/${l.buildId}`} className="text-coolant-700 underline underline-offset-2">Build {l.buildVersion}</Link> <StageBadge stage={l.buildStage} />
+              </Td>
               <Td className="whitespace-nowrap">{l.producedOn} · {l.line}</Td>
             </tr>
           ))}

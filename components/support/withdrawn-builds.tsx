@@ -1,6 +1,7 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
+import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { apiQuery } from "@/lib/api/client";
 import { getShippedWithBuild, listWithdrawnBuilds } from "@/lib/api/operations/support";
@@ -8,6 +9,7 @@ import { buttonClass } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { ErrorNotice } from "@/components/ui/error-notice";
+import { formatUtc } from "@/lib/time/format";
 
 
 export function WithdrawnBuilds() {
@@ -25,15 +27,22 @@ export function WithdrawnBuilds() {
       <Panel title="Withdrawn builds">
         <Table caption="Withdrawn builds">
           <thead>
-            <tr><Th>Build</Th><Th>Reason</Th><Th>Lots</Th><Th>Boards shipped</Th><Th /></tr>
+            <tr><Th>Build</Th><Th>Withdrawn</Th><Th>Reason</Th><Th>Lots</Th><Th>Boards shipped</Th><Th /></tr>
           </thead>
           <tbody>
-            {list.isPending && <SkeletonRows cols={5} rows={2} />}
-            {list.isError && <ErrorRow colSpan={5} error={list.error} onRetry={() => void list.refetch()} />}
-            {list.data?.items.length === 0 && <EmptyRow colSpan={5}>No build has been withdrawn.</EmptyRow>}
+            {list.isPending && <SkeletonRows cols={6} rows={2} />}
+            {list.isError && <ErrorRow colSpan={6} error={list.error} onRetry={() => void list.refetch()} />}
+            {list.data?.items.length === 0 && <EmptyRow colSpan={6}>No build has been withdrawn.</EmptyRow>}
             {list.data?.items.map((b) => (
               <tr key={b.id} aria-current={b.id === selected ? "true" : undefined} className={b.id === selected ? "bg-copper-50" : ""}>
-                <Td className="whitespace-nowrap font-medium">{b.boardModelName} {b.version}</Td>
+                <Td className="whitespace-nowrap font-medium">
+                  <Link className="text-copper-700 underline" href={`/builds/${b.id}`}>{b.boardModelName} {b.version}</Link>
+                </Td>
+                <Td className="whitespace-nowrap text-sm">
+                  <span data-testid="withdrawn-when">
+                    {b.withdrawnAt ? <>{formatUtc(b.withdrawnAt)}<span className="block text-xs text-ink-600">by {b.withdrawnByName ?? "a deleted user"}</span></> : "—"}
+                  </span>
+                </Td>
                 <Td>{b.withdrawnReason}</Td>
                 <Td className="tabular-nums">{b.lots}</Td>
                 <Td className="tabular-nums">{b.boards.toLocaleString("en")}</Td>

@@ -17,7 +17,7 @@ export const COOLER_FILTERS = ["q"] as const;
 export const LOT_FILTERS = ["board", "build", "code", "sort", "dir"] as const;
 
 /** The audit log's filters. */
-export const AUDIT_FILTERS = ["action", "entityType", "actor"] as const;
+export const AUDIT_FILTERS = ["action", "entityType", "actor", "from", "to"] as const;
 
 /**
  * A list's API query from its URL for lists that page by "more follows" (lots, audit): the

@@ -41,7 +41,7 @@ class SlotReader {
   /** Next byte, or null (with an error) past the slot end. */
   byte(): number | null {
     if (this.at >= this.end) {
-      this.errors.push({ code: "bank.slot_truncated", message: `Slot ${this.slotIndex} ends at byte ${this.end} but its contents go on; the image is damaged.`, offset: this.at });
+      this.errors.push({ code: "bank.slot_truncated", message: `Slot ${this.slotIndex + 1} ends at byte ${this.end} but its contents go on; the image is damaged.`, offset: this.at });
       return null;
     }
     return this.bytes[this.at++]!;
@@ -53,7 +53,7 @@ class SlotReader {
     const v = this.byte();
     if (v === null) return null;
     if (v > max || v < min) {
-      this.errors.push({ code: "bank.value_out_of_range", message: `Slot ${this.slotIndex}: ${field} byte ${v} at offset ${offset} is outside ${min}–${max}.`, offset, actual: v });
+      this.errors.push({ code: "bank.value_out_of_range", message: `Slot ${this.slotIndex + 1}: ${field} byte ${v} at offset ${offset} is outside ${min}–${max}.`, offset, actual: v });
       return null;
     }
     return v;
@@ -85,7 +85,7 @@ function readSlot(bytes: Uint8Array, offset: number, limit: number, index: numbe
   const length = bytes[offset]!;
   const minLength = MIN_SLOT_BYTES;
   if (length < minLength || offset + length > limit) {
-    errors.push({ code: "bank.bad_slot_length", message: `Slot ${index} at offset ${offset} says it is ${length} bytes, which does not fit the image (${minLength} bytes at least, ${limit - offset} left).`, offset, actual: length });
+    errors.push({ code: "bank.bad_slot_length", message: `Slot ${index + 1} at offset ${offset} says it is ${length} bytes, which does not fit the image (${minLength} bytes at least, ${limit - offset} left).`, offset, actual: length });
     return { slot: null, next: limit };
   }
   const end = offset + length;
@@ -97,12 +97,12 @@ function readSlot(bytes: Uint8Array, offset: number, limit: number, index: numbe
   const sensorLoss = r.code("sensor-loss duty", MAX_DUTY_CODE);
   const stop = r.byte();
   const stopOk = stop === NO_FAN_STOP || (stop !== null && stop <= MAX_TEMP_CODE);
-  if (!stopOk && stop !== null) errors.push({ code: "bank.value_out_of_range", message: `Slot ${index}: fan stop byte ${stop} is neither 0xFF (none) nor 0–${MAX_TEMP_CODE}.`, offset: r.at - 1, actual: stop });
+  if (!stopOk && stop !== null) errors.push({ code: "bank.value_out_of_range", message: `Slot ${index + 1}: fan stop byte ${stop} is neither 0xFF (none) nor 0–${MAX_TEMP_CODE}.`, offset: r.at - 1, actual: stop });
   const pump = readCurve(r, "pump");
   const fansCurve = pump ? readCurve(r, "fan") : null;
   if (critical === null || sensorLoss === null || !stopOk || pump === null || fansCurve === null) return { slot: null, next: end };
   if (r.at !== end) {
-    errors.push({ code: "bank.bad_slot_length", message: `Slot ${index} says it is ${length} bytes but its contents take ${r.at - offset}.`, offset, expected: length, actual: r.at - offset });
+    errors.push({ code: "bank.bad_slot_length", message: `Slot ${index + 1} says it is ${length} bytes but its contents take ${r.at - offset}.`, offset, expected: length, actual: r.at - offset });
     return { slot: null, next: end };
   }
   const fans: FanCurve = stop === NO_FAN_STOP ? fansCurve.settings : { ...fansCurve.settings, stopBelowTempC: tempFromCode(stop) };
@@ -186,7 +186,7 @@ export function decodeBank(bytes: Uint8Array): DecodeBankResult {
     if (at >= crcAt) {
       const message = `The header gives ${result.slotCount} slots but only ${i} fit before the CRC.`;
       errors.push({ code: "bank.slot_truncated", message, offset: at });
-      for (let j = i; j < result.slotCount; j++) result.undecodable.push({ index: j, offset: at, code: "bank.slot_truncated", reason: `Slot ${j} does not fit before the CRC: ${message}` });
+      for (let j = i; j < result.slotCount; j++) result.undecodable.push({ index: j, offset: at, code: "bank.slot_truncated", reason: `Slot ${j + 1} does not fit before the CRC: ${message}` });
       break;
     }
     const before = errors.length;
@@ -194,7 +194,7 @@ export function decodeBank(bytes: Uint8Array): DecodeBankResult {
     if (slot) result.slots.push(slot);
     else {
       const first = errors[before];
-      result.undecodable.push({ index: i, offset: at, code: first?.code ?? "bank.bad_slot", reason: first?.message ?? `Slot ${i} could not be read.` });
+      result.undecodable.push({ index: i, offset: at, code: first?.code ?? "bank.bad_slot", reason: first?.message ?? `Slot ${i + 1} could not be read.` });
     }
     at = next;
   }

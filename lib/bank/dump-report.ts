@@ -98,9 +98,9 @@ function readDump(input: DumpInput): { report: DumpReport; image?: Uint8Array; d
   }
   result.slots = identifySlots(bytes, decoded, input.known);
   for (const s of result.slots) {
-    if (s.match === "altered") result.faults.push(`Slot ${s.slotIndex} claims v${s.version} but is altered: ${s.differences.join("; ")}.`);
-    if (s.match === "undecodable") result.faults.push(`Slot ${s.slotIndex} cannot be read: ${s.reason ?? "damaged"}`);
-    for (const f of s.findings) if (f.severity === "error") result.faults.push(`Slot ${s.slotIndex} breaks a safety rule (${f.code}): ${f.message}`);
+    if (s.match === "altered") result.faults.push(`Slot ${s.slotIndex + 1} claims v${s.version} but is altered: ${s.differences.join("; ")}.`);
+    if (s.match === "undecodable") result.faults.push(`Slot ${s.slotIndex + 1} cannot be read: ${s.reason ?? "damaged"}`);
+    for (const f of s.findings) if (f.severity === "error") result.faults.push(`Slot ${s.slotIndex + 1} breaks a safety rule (${f.code}): ${f.message}`);
   }
   const hexBad = result.hex ? !result.hex.ok : false;
   // Status is about the bytes' integrity; what the intact bytes mean is in slots and faults.

@@ -43,10 +43,10 @@ function checkSlots(slots: readonly BankSlotInput[], memoryBytes: number | undef
   if (slots.length > MAX_SLOTS) errors.push({ code: "bank.too_many_slots", message: `A bank holds at most ${MAX_SLOTS} slots; remove ${slots.length - MAX_SLOTS}.` });
   slots.forEach((s, i) => {
     if (!versionBytes(s.version)) {
-      errors.push({ code: "bank.version_not_encodable", message: `Slot ${i}: version "${s.version}" must be x.y.z with each part 0–255 and no pre-release or build suffix.` });
+      errors.push({ code: "bank.version_not_encodable", message: `Slot ${i + 1}: version "${s.version}" must be x.y.z with each part 0–255 and no pre-release or build suffix.` });
     }
     if (s.contentHashHex !== undefined && !/^[0-9a-fA-F]{16,64}$/.test(s.contentHashHex)) {
-      errors.push({ code: "bank.bad_content_hash", message: `Slot ${i}: content hash must be 16 to 64 hex digits.` });
+      errors.push({ code: "bank.bad_content_hash", message: `Slot ${i + 1}: content hash must be 16 to 64 hex digits.` });
     }
     const numbers = [s.profile.criticalTempC, s.profile.sensorLossDutyPct, s.profile.fans.stopBelowTempC ?? 0];
     for (const curve of [s.profile.pump, s.profile.fans]) {
@@ -54,15 +54,15 @@ function checkSlots(slots: readonly BankSlotInput[], memoryBytes: number | undef
       for (const p of curve.points) numbers.push(p.tempC, p.dutyPct);
     }
     if (!numbers.every((n) => typeof n === "number" && Number.isFinite(n))) {
-      errors.push({ code: "bank.value_not_finite", message: `Slot ${i}: every stored value must be a finite number; validate the profile first.` });
+      errors.push({ code: "bank.value_not_finite", message: `Slot ${i + 1}: every stored value must be a finite number; validate the profile first.` });
     }
     for (const [name, curve] of [["pump", s.profile.pump], ["fans", s.profile.fans]] as const) {
       if (curve.points.length < 1) {
-        errors.push({ code: "bank.bad_point_count", message: `Slot ${i}: the ${name} curve needs at least 1 point.` });
+        errors.push({ code: "bank.bad_point_count", message: `Slot ${i + 1}: the ${name} curve needs at least 1 point.` });
       }
     }
     if (slotBytes(s.profile.pump.points.length, s.profile.fans.points.length) > 255) {
-      errors.push({ code: "bank.slot_too_large", message: `Slot ${i}: a slot holds at most 255 bytes; use at most 32 points per curve.` });
+      errors.push({ code: "bank.slot_too_large", message: `Slot ${i + 1}: a slot holds at most 255 bytes; use at most 32 points per curve.` });
     }
   });
   if (errors.length > 0) return errors;

@@ -151,7 +151,7 @@ export function slotDifferences(slot: DecodedSlot, known: RegistryVersion): stri
  * would have let anyone publish.
  */
 export function slotFindings(slot: DecodedSlot, hardware?: HardwareContext): SlotFinding[] {
-  const doc = { formatVersion: 1, name: `Slot ${slot.index}`, ...slot.settings };
+  const doc = { formatVersion: 1, name: `Slot ${slot.index + 1}`, ...slot.settings };
   return validateProfile(doc, hardware).issues.map((i) => ({ code: i.code, severity: i.severity, message: `${i.path ? `${i.path}: ` : ""}${i.message}` }));
 }
 

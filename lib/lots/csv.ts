@@ -18,7 +18,7 @@ export interface ParsedLotsCsv {
   issues: CsvRowIssue[];
 }
 
-export const MAX_CSV_ROWS = 5000;
+export const MAX_CSV_ROWS = 100_000;
 
 /**
  * Splits CSV text into records (RFC 4180: comma separated, double-quoted fields may
@@ -120,7 +120,11 @@ export function parseLotsCsv(text: string): ParsedLotsCsv {
   return { rows, issues };
 }
 
-/** Lot codes repeated and serial ranges overlapping within the file itself. */
+/**
+ * Lot codes repeated and serial ranges overlapping within the file itself. Ranges are sorted
+ * by prefix and first serial and each is compared with the furthest-reaching range before
+ * it, so a file of 100,000 lots is checked in n log n, not n².
+ */
 function duplicateIssues(rows: ParsedLotRow[]): CsvRowIssue[] {
   const issues: CsvRowIssue[] = [];
   const codes = new Map<string, number>();
@@ -131,11 +135,17 @@ function duplicateIssues(rows: ParsedLotRow[]): CsvRowIssue[] {
     else codes.set(lot.lotCode, row);
     const from = parseSerial(lot.serialFrom);
     const to = parseSerial(lot.serialTo);
-    if (!from.ok || !to.ok) continue;
-    const mine = { row, prefix: from.serial.prefix, from: from.serial.number, to: to.serial.number, code: lot.lotCode };
-    const clash = ranges.find((r) => r.prefix === mine.prefix && rangesOverlap(r.from, r.to, mine.from, mine.to));
-    if (clash) issues.push({ row, column: "serial_from", message: `Serials overlap lot ${clash.code} on row ${clash.row} of this file.` });
-    ranges.push(mine);
+    if (from.ok && to.ok) ranges.push({ row, prefix: from.serial.prefix, from: from.serial.number, to: to.serial.number, code: lot.lotCode });
+  }
+  ranges.sort((a, b) => (a.prefix < b.prefix ? -1 : a.prefix > b.prefix ? 1 : a.from - b.from || a.row - b.row));
+  let reach: (typeof ranges)[number] | undefined;
+  for (const r of ranges) {
+    if (reach && reach.prefix === r.prefix && rangesOverlap(reach.from, reach.to, r.from, r.to)) {
+      // Reported on the later row of the two, naming the earlier, as a reader goes down the file.
+      const [earlier, later] = reach.row < r.row ? [reach, r] : [r, reach];
+      issues.push({ row: later.row, column: "serial_from", message: `Serials overlap lot ${earlier.code} on row ${earlier.row} of this file.` });
+    }
+    if (!reach || reach.prefix !== r.prefix || r.to > reach.to) reach = r;
   }
   return issues;
 }

@@ -5,7 +5,7 @@ import {
   dutyToRpm,
   evaluateCurves,
   identicalSourcesDb,
-  isRevisionCompatible,
+  isValidRange,
   loadSweep,
   quantise,
   validateProfileText,
@@ -17,6 +17,7 @@ import {
   type ValidationIssue,
 } from "@/lib/engine";
 import { flashedStateAt, slotCodes } from "@/lib/firmware";
+import { fitRange, misfitReasons, rangeFitMessage, type RevisionCapacity } from "./range-fit";
 
 /** One plotted temperature: authored and as-flashed speeds, and the estimated sound level. */
 export interface PlotRow {
@@ -140,14 +141,30 @@ export function safeLoadSweep(profile: CoolingProfile, hw: HardwareContext, ambi
   }
 }
 
-/** Bytes of a bank holding this profile alone, and how it compares with each revision. */
-export function memoryUse(profile: CoolingProfile, boardRange: string | null, revisions: readonly { revision: string; memoryBytes: number }[]) {
+/**
+ * Bytes of a bank holding this profile alone against each board revision, judged against
+ * the range typed in the publish form with the same rule publishing applies (fitRange:
+ * points per curve, profile memory, a slot, for every revision the range admits), so the
+ * gauge and a publish refusal cannot disagree. `rangeProblem` is the sentence publishing
+ * would refuse with; null when the range is fine, empty or not yet a valid range.
+ */
+export function memoryUse(profile: CoolingProfile, boardRange: string | null, revisions: readonly RevisionCapacity[]) {
   const imageBytes = bankBytes([{ pumpPoints: profile.pump.points.length, fanPoints: profile.fans.points.length }]);
-  return revisions.map((r) => ({
-    revision: r.revision,
-    memoryBytes: r.memoryBytes,
-    imageBytes,
-    fits: imageBytes <= r.memoryBytes,
-    compatible: boardRange ? isRevisionCompatible({ revisionVersion: r.revision, range: boardRange, imageBytes, memoryBytes: r.memoryBytes }) : null,
-  }));
+  const needs = { pointsPerCurve: Math.max(profile.pump.points.length, profile.fans.points.length), encodedBytes: imageBytes };
+  const range = boardRange?.trim() && isValidRange(boardRange.trim()) ? boardRange.trim() : null;
+  const fit = range ? fitRange(range, revisions, needs) : null;
+  const rows = revisions.map((r) => {
+    const reasons = misfitReasons(r, needs);
+    return {
+      revision: r.revision,
+      memoryBytes: r.memoryBytes,
+      imageBytes,
+      fits: reasons.length === 0,
+      reasons,
+      /** Whether the typed range admits this revision; null without a valid range. */
+      inRange: fit ? fit.inRange.includes(r.revision) : null,
+    };
+  });
+  const rangeProblem = !range || !fit ? null : fit.inRange.length === 0 ? `No board revision satisfies "${range}".` : fit.misfits.length > 0 ? rangeFitMessage(range, fit) : null;
+  return { rows, rangeProblem, suggestedRange: fit?.suggestedRange ?? null };
 }

@@ -73,6 +73,32 @@ test.describe("profile editor, as an engineer", () => {
 
     expect(offHost, "requests that left 127.0.0.1").toEqual([]);
   });
+
+  test("the memory gauge judges the range typed under Publish, live, as publishing does", async ({ page }) => {
+    await signInPage(page, ACCOUNTS.engineer);
+    const id = await new ProfilesList(page).goto().then((list) => list.start({ cooler: "Tarn 360", name: `Seven points ${Date.now()}` }));
+    const editor = new ProfileEditor(page);
+    const detail = (await (await page.request.get(`/api/v1/profiles/${id}`)).json()) as { profile: { draftText: string } };
+    const doc = JSON.parse(detail.profile.draftText) as Doc & { criticalTempC: number };
+    // Seven fan points: revision 1.0.0 of the demo board stores at most six per curve.
+    const top = doc.criticalTempC - 2;
+    doc.fans.points = [top - 36, top - 30, top - 24, top - 18, top - 12, top - 6, top].map((tempC, i) => ({ tempC, dutyPct: [30, 35, 45, 55, 70, 85, 100][i]! }));
+    await editor.setText(`${JSON.stringify(doc, null, 2)}\n`);
+
+    await editor.rangeField.fill(">=1.0.0");
+    await expect(editor.rangeVerdict).toContainText("revision 1.0.0 (a curve has 7 points; it stores at most 6)");
+    await expect(editor.memoryRow("1.0.0")).toHaveAttribute("data-fits", "false");
+    await expect(editor.memoryRow("1.0.0")).toContainText("in the range but cannot hold it");
+    // The server refuses with the same words.
+    await editor.publish({ changelog: "Seven-point fan curve." });
+    await expect(page.getByRole("alert").filter({ hasText: "revision 1.0.0 (a curve has 7 points; it stores at most 6)" })).toBeVisible();
+
+    await editor.rangeField.fill(">=1.1.0");
+    await expect(editor.rangeVerdict).toHaveText('Every revision in ">=1.1.0" holds this profile.');
+    await expect(editor.memoryRow("1.0.0")).toHaveAttribute("data-in-range", "false");
+    await editor.publish({ changelog: "Seven-point fan curve." });
+    await expect(page.getByText(/Published 1\.0\.0/)).toBeVisible();
+  });
 });
 
 test.describe("registry, as a viewer", () => {

@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 import fs from "node:fs";
 import path from "node:path";
-import { count } from "drizzle-orm";
+import { count, eq } from "drizzle-orm";
 import { closeDb, getDb } from "./support/db";
 import { callRoute, tokenFor } from "./support/http";
 import { freshDraftBuild } from "./support/builds";
@@ -54,5 +54,27 @@ describe("upload and download routes", () => {
     // Revision 2.0.0 of the demo board keeps its profiles at 0x0801F800.
     expect(parsed.startAddress).toBe(0x0801f800);
     expect(parsed.bytes).toEqual(bin);
+  });
+
+  it("answers 410 naming the file, not 500, when an upload's bytes are gone from storage", async () => {
+    const token = await tokenFor("engineer@tarnwell.example");
+    const res = await callRoute(uploadFirmware, { url: "/api/v1/uploads?name=lost-fw.bin", method: "POST", token, body: new Uint8Array(64).fill(7) });
+    expect(res.status).toBe(201);
+    const { upload } = (await res.json()) as { upload: { id: string } };
+    const [row] = await getDb().select({ storageKey: uploads.storageKey }).from(uploads).where(eq(uploads.id, upload.id));
+    // The file vanishes behind the application's back (a volume restored without it).
+    fs.rmSync(path.join(storageDir, row!.storageKey));
+    const down = await callRoute(downloadUpload, { url: `/api/v1/uploads/${upload.id}`, token, params: { id: upload.id } });
+    expect(down.status).toBe(410);
+    const text = await down.text();
+    const body = JSON.parse(text) as { error: { code: string; message: string } };
+    expect(body.error.code).toBe("gone");
+    expect(body.error.message).toContain("lost-fw.bin");
+    expect(body.error.message).toMatch(/Upload the file again/);
+    // Nothing of the server's inside leaks: no file path, no errno, no stack.
+    expect(text).not.toMatch(/ENOENT|\/data\/|at [A-Za-z]+ \(/);
+    // An id no upload has stays a 404.
+    const unknown = "00000000-0000-4000-8000-000000000000";
+    expect((await callRoute(downloadUpload, { url: `/api/v1/uploads/${unknown}`, token, params: { id: unknown } })).status).toBe(404);
   });
 });

@@ -25,12 +25,15 @@ export function PublishPanel({
   text,
   suggestion,
   defaultRange,
+  onRangeChange,
   blocked,
 }: {
   profileId: string;
   text: string;
   suggestion: VersionSuggestion | null;
   defaultRange: string;
+  /** Called as the range is typed, so the memory gauge can judge it live. */
+  onRangeChange?: (range: string) => void;
   blocked: boolean;
 }) {
   const qc = useQueryClient();
@@ -63,8 +66,8 @@ export function PublishPanel({
         <Field id="pub-version" label="Version" error={errors.version?.message}>
           <Input {...describedBy("pub-version", errors.version?.message)} {...form.register("version", { onChange: () => setFollowSuggestion(false) })} />
         </Field>
-        <Field id="pub-range" label="Board revision range" hint='Semver range, e.g. ">=1.1.0 <3.0.0".' error={errors.boardRange?.message}>
-          <Input {...describedBy("pub-range", errors.boardRange?.message)} {...form.register("boardRange")} />
+        <Field id="pub-range" label="Board revision range" hint='Semver range, e.g. ">=1.1.0 <3.0.0". The memory gauge checks every revision it admits as you type.' error={errors.boardRange?.message}>
+          <Input {...describedBy("pub-range", errors.boardRange?.message)} {...form.register("boardRange", { onChange: (e: { target: { value: string } }) => onRangeChange?.(e.target.value) })} />
         </Field>
       </div>
       <Field id="pub-changelog" label="Changelog" error={errors.changelog?.message}>

@@ -95,6 +95,9 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
   const operatingMark = useMemo<OperatingMark | null>(() => (operating ? { liquidTempC: operating.liquidTempC, fanRpm: operating.fanRpm } : null), [operating]);
 
   const latest = versions[0];
+  // The range typed in the publish form, live: the memory gauge judges it as publishing will.
+  const defaultRange = latest?.boardRange ?? ">=1.0.0";
+  const [publishRange, setPublishRange] = useState(defaultRange);
   const latestDoc = useQuery({
     ...apiQuery(getVersion, { params: { id: latest?.id ?? "" } }),
     enabled: Boolean(latest),
@@ -254,7 +257,7 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
                 <MemoOperatingPanel profile={deferredEvaluation.profile} hw={deferredHw} inputs={operatingInputs} onInputs={setOperatingInputs} />
               </Panel>
               <Panel title="Memory">
-                <MemoMemoryGauge profile={deferredEvaluation.profile} revisions={revisions} boardRange={latest?.boardRange ?? null} />
+                <MemoMemoryGauge profile={deferredEvaluation.profile} revisions={revisions} boardRange={canWrite ? publishRange : (latest?.boardRange ?? null)} />
               </Panel>
             </>
           )}
@@ -263,7 +266,7 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
 
       {canWrite && (
         <Panel title="Publish">
-          <PublishPanel profileId={profile.id} text={text} suggestion={suggestion} defaultRange={latest?.boardRange ?? ">=1.0.0"} blocked={errors > 0 || !deferredEvaluation?.profile} />
+          <PublishPanel profileId={profile.id} text={text} suggestion={suggestion} defaultRange={defaultRange} onRangeChange={setPublishRange} blocked={errors > 0 || !deferredEvaluation?.profile} />
         </Panel>
       )}
       <Panel title="Version history" actions={versions.length >= 2 ? <Link className="text-sm text-copper-700 underline" href={`/profiles/${profile.id}/compare`}>Compare versions</Link> : undefined}>

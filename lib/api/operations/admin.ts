@@ -66,8 +66,9 @@ export const auditQuery = z.strictObject({
   entityType: z.string().max(80).optional(),
   entityId: z.string().max(120).optional(),
   actor: z.string().max(120).optional(),
-  from: z.iso.datetime({ offset: true }).optional(),
-  to: z.iso.datetime({ offset: true }).optional(),
+  /** A day (YYYY-MM-DD, whole day in UTC, both ends included) or an instant with its offset. */
+  from: z.union([z.iso.date(), z.iso.datetime({ offset: true })], "Give the first day as YYYY-MM-DD.").optional(),
+  to: z.union([z.iso.date(), z.iso.datetime({ offset: true })], "Give the last day as YYYY-MM-DD.").optional(),
   page: z.coerce.number().int().min(1).max(100000).default(1),
   pageSize: z.coerce.number().int().min(1).max(200).default(50),
 });
@@ -84,6 +85,12 @@ export const auditEventSchema = z.object({
   after: z.unknown(),
   requestId: z.string().nullable(),
   createdAt: timestamp,
+  /** The acting person's current name (the label when the account is gone). */
+  actorName: z.string(),
+  /** What the event changed, named with its version and linked; null when it no longer exists. */
+  subject: z.object({ label: z.string(), href: z.string().nullable() }).nullable(),
+  /** The event as one sentence, e.g. "Erin Example published Quiet 1.1.0". */
+  sentence: z.string(),
 });
 export type AuditEventView = z.infer<typeof auditEventSchema>;
 

@@ -108,7 +108,7 @@ const measurementComparisonView = z.object({
 export const buildDetailView = z.object({
   build: buildSummaryView,
   slots: z.array(
-    z.object({ slotIndex: z.number(), profileVersionId: z.string(), profileName: z.string(), coolerModel: z.string(), version: z.string(), boardRange: z.string(), encodedBytes: z.number(), contentHash: z.string() }),
+    z.object({ slotIndex: z.number(), profileVersionId: z.string(), profileId: z.string(), profileName: z.string(), coolerModel: z.string(), version: z.string(), boardRange: z.string(), encodedBytes: z.number(), contentHash: z.string() }),
   ),
   revisions: z.array(z.object({ revision: z.string(), memoryBytes: z.number(), slotCount: z.number(), baseAddress: z.number() })),
   uploads: z.object({ firmware: uploadView.nullable(), labReport: uploadView.nullable(), measurements: uploadView.nullable() }),

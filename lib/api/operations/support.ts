@@ -4,6 +4,7 @@ import { lotInput } from "@/lib/lots/input";
 import { STAGE_ORDER } from "@/lib/release/stages";
 import type { DumpReport } from "@/lib/engine";
 import { idParams } from "./account";
+import { timestamp } from "./timestamp";
 import { coolingProfileDocument, profileChangeView } from "./profile-schemas";
 import { componentFieldsView, coolerFieldsView, revisionFieldsView } from "./registry-schemas";
 
@@ -181,6 +182,9 @@ export const withdrawnBuildView = z.object({
   version: z.string(),
   boardModelName: z.string(),
   withdrawnReason: z.string().nullable(),
+  /** When and by whom the build was moved to withdrawn; null only for a build withdrawn without a recorded move. */
+  withdrawnAt: timestamp.nullable(),
+  withdrawnByName: z.string().nullable(),
   lots: z.number(),
   boards: z.number(),
 });

@@ -10,6 +10,7 @@ import { fromDbError } from "@/lib/platform/http/db-errors";
 import { env } from "@/lib/platform/env";
 import { logger } from "@/lib/platform/log";
 import { readCappedBody } from "@/lib/platform/http/raw-body";
+import { MissingObjectError } from "@/lib/platform/storage/types";
 import { enforceRequestBudget } from "@/lib/platform/http/rate-limit";
 
 const DEFAULT_MAX_BODY = 256 * 1024;
@@ -66,6 +67,8 @@ export async function resolveActor(req: NextRequest): Promise<Actor | null> {
 }
 
 export function errorResponse(err: unknown, requestId: string): NextResponse {
+  // A row that points at bytes storage no longer has: the caller can upload again, it is not our crash.
+  if (err instanceof MissingObjectError) return errorResponse(new AppError("gone", "A stored file this needs is no longer in file storage; upload it again."), requestId);
   const known = fromDbError(err);
   if (known) {
     return NextResponse.json(known.toBody(), { status: known.status, headers: { "x-request-id": requestId, ...known.headers } });

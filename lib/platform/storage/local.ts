@@ -4,7 +4,7 @@ import { createWriteStream } from "node:fs";
 import fs from "node:fs/promises";
 import path from "node:path";
 import { once } from "node:events";
-import { assertKey, limitedChunks, newKey, type ByteSource, type PutOptions, type Storage, type StoredObject } from "@/lib/platform/storage/types";
+import { assertKey, limitedChunks, MissingObjectError, newKey, type ByteSource, type PutOptions, type Storage, type StoredObject } from "@/lib/platform/storage/types";
 
 /** Files in one local directory, named by generated keys; the default driver. */
 export function localStorage(dir: string): Storage {
@@ -38,7 +38,12 @@ export function localStorage(dir: string): Storage {
       return { key, sizeBytes, sha256: hash.digest("hex") };
     },
     async get(key) {
-      return fs.readFile(fileOf(key));
+      try {
+        return await fs.readFile(fileOf(key));
+      } catch (err) {
+        if ((err as NodeJS.ErrnoException).code === "ENOENT") throw new MissingObjectError(key);
+        throw err;
+      }
     },
     async delete(key) {
       await fs.rm(fileOf(key), { force: true });

@@ -2,7 +2,7 @@ import "server-only";
 import { AppError } from "@/lib/api/errors";
 import { createHash } from "node:crypto";
 import { CreateBucketCommand, DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
-import { assertKey, limitedChunks, newKey, type ByteSource, type PutOptions, type Storage, type StoredObject } from "@/lib/platform/storage/types";
+import { assertKey, limitedChunks, MissingObjectError, newKey, type ByteSource, type PutOptions, type Storage, type StoredObject } from "@/lib/platform/storage/types";
 
 export interface S3Config {
   endpoint?: string;
@@ -55,7 +55,11 @@ export function s3Storage(config: S3Config): Storage {
     },
     async get(key) {
       assertKey(key);
-      const res = await client.send(new GetObjectCommand({ Bucket: config.bucket, Key: key }));
+      const res = await client.send(new GetObjectCommand({ Bucket: config.bucket, Key: key })).catch((err: unknown) => {
+        const e = err as { name?: string; $metadata?: { httpStatusCode?: number } };
+        if (e.name === "NoSuchKey" || e.$metadata?.httpStatusCode === 404) throw new MissingObjectError(key);
+        throw err;
+      });
       if (!res.Body) return Buffer.alloc(0);
       return Buffer.from(await res.Body.transformToByteArray());
     },
@@ -78,7 +82,7 @@ function withUnavailableErrors(storage: Storage): Storage {
       try {
         return await fn(...args);
       } catch (err) {
-        if (err instanceof AppError) throw err;
+        if (err instanceof AppError || err instanceof MissingObjectError) throw err;
         throw new AppError("unavailable", "File storage is not reachable right now; nothing was saved. Try again in a moment.", { headers: { "retry-after": "10" } });
       }
     };

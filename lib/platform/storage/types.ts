@@ -26,6 +26,18 @@ export interface Storage {
 
 const KEY_RE = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
+/**
+ * The object a key names is not in storage (removed by hand, lost with a volume, expired by
+ * a bucket rule) although a row still points at it. Drivers throw this instead of their own
+ * "no such file", so callers can say which file is gone instead of failing with a 500.
+ */
+export class MissingObjectError extends Error {
+  constructor(readonly key: string) {
+    super(`No stored object under key ${key}.`);
+    this.name = "MissingObjectError";
+  }
+}
+
 export function newKey(): string {
   return randomUUID();
 }

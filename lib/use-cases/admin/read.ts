@@ -1,6 +1,8 @@
 import "server-only";
 import type { Executor } from "@/db/client";
 import { listAuditEvents } from "@/db/audit";
+import { describeAuditEvents } from "@/db/audit-subjects";
+import { auditRangeBound } from "@/lib/audit/range";
 import { listUsers } from "@/db/users";
 import type { AuditQuery } from "@/lib/api/operations/admin";
 
@@ -11,12 +13,14 @@ export async function auditPage(db: Executor, query: AuditQuery) {
     entityType: query.entityType,
     entityId: query.entityId,
     actor: query.actor,
-    from: query.from ? new Date(query.from) : undefined,
-    to: query.to ? new Date(query.to) : undefined,
+    from: auditRangeBound(query.from, "from"),
+    to: auditRangeBound(query.to, "to"),
     limit: query.pageSize + 1,
     offset: (query.page - 1) * query.pageSize,
   });
-  return { items: rows.slice(0, query.pageSize), page: query.page, pageSize: query.pageSize, hasMore: rows.length > query.pageSize };
+  // Each event with its sentence and the thing it changed, named with its version and linked.
+  const items = await describeAuditEvents(db, rows.slice(0, query.pageSize));
+  return { items, page: query.page, pageSize: query.pageSize, hasMore: rows.length > query.pageSize };
 }
 
 /** Every account with its role and state (no password hashes). */

@@ -24,7 +24,7 @@ export async function buildDetail(db: Executor, { id }: { id: string }) {
   const authorship = { buildAuthorUserId: build.authorUserId, profileAuthorUserIds: new Set(slots.map((s) => s.authorUserId)) };
   return {
     build,
-    slots: slots.map(({ authorUserId: _a, profileId: _p, coolerModelId: _c, ...s }) => s),
+    slots: slots.map(({ authorUserId: _a, coolerModelId: _c, ...s }) => s),
     revisions: revisions.filter((r) => satisfiesRange(r.revision, build.revisionRange)).map((r) => ({ revision: r.revision, memoryBytes: r.memoryBytes, slotCount: r.slotCount, baseAddress: r.baseAddress })),
     uploads: {
       firmware: (build.firmwareUploadId && byId.get(build.firmwareUploadId)) || null,

@@ -110,13 +110,21 @@ export class BuildDetail extends Screen {
     return this.page.getByTestId("sound-plot");
   }
 
+  /** Opens the factory release dialog, writes the release notes in it and confirms. */
   async releaseToFactory(notes: string): Promise<void> {
-    await this.page.getByLabel("Release notes").fill(notes);
-    await this.move("Release to the factory", "Factory release");
+    await this.button("Release to the factory…").click();
+    const dialog = this.dialog(/^Release build .* to the factory\?$/);
+    await dialog.getByLabel("Release notes").fill(notes);
+    await dialog.getByRole("button", { name: "Release to the factory", exact: true }).click();
+    await this.expectStage("Factory release");
   }
 
+  /** Opens the withdraw dialog, gives the reason in it and confirms. */
   async withdraw(reason: string): Promise<void> {
-    await this.page.getByLabel("Reason for withdrawing").fill(reason);
-    await this.move("Withdraw build", "Withdrawn");
+    await this.button("Withdraw build…").click();
+    const dialog = this.dialog(/^Withdraw build .*\?$/);
+    await dialog.getByLabel("Reason for withdrawing").fill(reason);
+    await dialog.getByRole("button", { name: "Withdraw build", exact: true }).click();
+    await this.expectStage("Withdrawn");
   }
 }

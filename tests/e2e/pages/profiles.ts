@@ -61,6 +61,21 @@ export class ProfileEditor extends Screen {
     return this.page.getByTestId("evaluating-other-cooler");
   }
 
+  /** The publish form's board revision range. */
+  get rangeField(): Locator {
+    return this.page.getByLabel("Board revision range");
+  }
+
+  /** The memory gauge's verdict on the typed range. */
+  get rangeVerdict(): Locator {
+    return this.page.getByTestId("range-fit");
+  }
+
+  /** The memory gauge's row of one board revision. */
+  memoryRow(revision: string): Locator {
+    return this.page.getByTestId(`memory-${revision}`);
+  }
+
   problem(text: RegExp): Locator {
     return this.page.getByTestId("problems").getByRole("button", { name: text });
   }

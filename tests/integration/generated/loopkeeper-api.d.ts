@@ -1430,6 +1430,12 @@ export interface operations {
                             requestId: string | null;
                             /** Format: date-time */
                             createdAt: string;
+                            actorName: string;
+                            subject: {
+                                label: string;
+                                href: string | null;
+                            } | null;
+                            sentence: string;
                         }[];
                         page: number;
                         pageSize: number;
@@ -3080,6 +3086,7 @@ export interface operations {
                         slots: {
                             slotIndex: number;
                             profileVersionId: string;
+                            profileId: string;
                             profileName: string;
                             coolerModel: string;
                             version: string;
@@ -4292,6 +4299,8 @@ export interface operations {
                             version: string;
                             boardModelName: string;
                             withdrawnReason: string | null;
+                            withdrawnAt: string | null;
+                            withdrawnByName: string | null;
                             lots: number;
                             boards: number;
                         }[];

@@ -62,6 +62,13 @@ export async function mover(email: string) {
   return { ...a, role: u!.role, name: u!.name };
 }
 
+/** The demo accounts the release-path tests act as, by the part of their address before the @. */
+export async function demoMovers() {
+  const names = ["engineer", "engineer2", "engineer3", "admin", "release"] as const;
+  const all = await Promise.all(names.map((n) => mover(`${n}@tarnwell.example`)));
+  return Object.fromEntries(names.map((n, i) => [n, all[i]!])) as Record<(typeof names)[number], Awaited<ReturnType<typeof mover>>>;
+}
+
 /** Bytes as a stream of chunks, the way a request body arrives. */
 export async function* chunksOf(bytes: Uint8Array, chunkBytes = 16 * 1024): AsyncGenerator<Uint8Array> {
   for (let i = 0; i < bytes.length; i += chunkBytes) yield bytes.subarray(i, i + chunkBytes);

@@ -48,7 +48,7 @@ describe("dump identification by content", () => {
     expect(r.crc?.ok).toBe(true);
     expect(r.slots[0]).toMatchObject({ match: "altered", profileVersionId: "pv-quiet", differences: ["pump point 3: 62 % here, 70 % in v1.1.0"] });
     expect(r.slots[1]!.match).toBe("exact");
-    expect(r.faults[0]).toMatch(/^Slot 0 claims v1\.1\.0 but is altered: pump point 3: 62 % here, 70 % in v1\.1\.0/);
+    expect(r.faults[0]).toMatch(/^Slot 1 claims v1\.1\.0 but is altered: pump point 3: 62 % here, 70 % in v1\.1\.0/);
   });
 
   it("a flipped byte without a new CRC: corrupt, and the slot is altered, not a known version", () => {
@@ -67,7 +67,7 @@ describe("dump identification by content", () => {
     const r = reportDump({ bytes: recomputeCrc(bytes), fileName: null, known: [quiet, perf], builds: [] });
     expect(r.slots.map((s) => s.match)).toEqual(["undecodable", "exact"]);
     expect(r.slots[0]!.reason).toMatch(/pump point 1 duty byte 201 .* outside 0–200/);
-    expect(r.faults.some((f) => f.startsWith("Slot 0 cannot be read"))).toBe(true);
+    expect(r.faults.some((f) => f.startsWith("Slot 1 cannot be read"))).toBe(true);
   });
 
   it("runs the authoring safety rules on every decoded slot: sensor-loss duty 0 % is a fault", () => {
@@ -77,7 +77,7 @@ describe("dump identification by content", () => {
     expect(r.status).toBe("ok");
     expect(r.slots[0]!.match).toBe("unknown");
     expect(r.slots[0]!.findings.map((f) => [f.code, f.severity])).toContainEqual(["sensor_loss.below_curve_duty", "error"]);
-    expect(r.faults.join("\n")).toMatch(/Slot 0 breaks a safety rule \(sensor_loss\.below_curve_duty\)/);
+    expect(r.faults.join("\n")).toMatch(/Slot 1 breaks a safety rule \(sensor_loss\.below_curve_duty\)/);
     // The pump's minimum duty from the cooler the version was published for (the example pump: 30 %).
     const lowPump: CoolingProfile = { ...quietProfile(), pump: { ...quietProfile().pump, points: quietProfile().pump.points.map((p, i) => (i === 0 ? { ...p, dutyPct: 20 } : p)) } };
     const published = registry(quietProfile(), "1.1.0", "pv-quiet");

@@ -10,11 +10,15 @@ import { getDb } from "@/db/client";
 import { listBuilds } from "@/lib/api/operations/builds";
 import { prefetchScreen, screenQuery } from "@/lib/platform/screens/prefetch";
 import { listBuildsForPipeline } from "@/lib/use-cases/builds/list";
+import { STAGE_ORDER } from "@/lib/release/stages";
 
 export const metadata: Metadata = { title: "Builds" };
 
-export default async function BuildsPage() {
+export default async function BuildsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const actor = await requirePageActor("read");
+  const wanted = (await searchParams).stage;
+  // A stage from the dashboard's tiles shows that column alone; anything else shows them all.
+  const stage = STAGE_ORDER.find((s) => s === wanted);
   const state = await prefetchScreen(actor, [screenQuery(listBuilds, {}, ({ query }) => listBuildsForPipeline(getDb(), query))]);
   return (
     <>
@@ -24,7 +28,7 @@ export default async function BuildsPage() {
         actions={can(actor.role, "build:create") ? <Link href="/builds/new" className={buttonClass("primary", "no-underline")}>New build</Link> : undefined}
       />
       <HydrationBoundary state={state}>
-        <Pipeline />
+        <Pipeline stage={stage} />
       </HydrationBoundary>
     </>
   );
