@@ -1,8 +1,8 @@
 import "server-only";
-import { alias } from "drizzle-orm/pg-core";
 import { asc, desc, eq, inArray } from "drizzle-orm";
-import { boardModels, buildReviews, builds, buildSlots, buildTransitions, components, coolerModels, profiles, profileVersions, uploads, users, type BuildStage } from "./schema";
+import { boardModels, buildReviews, builds, buildSlots, buildTransitions, coolerModels, profiles, profileVersions, uploads, users, type BuildStage } from "./schema";
 import type { Database, Executor } from "./client";
+import { listVersionsWithHardware } from "./profile-versions";
 import { recordAudit, type AuditActor } from "./audit";
 import { AppError } from "@/lib/api/errors";
 import type { BuildSlotFacts } from "@/lib/release/build-check";
@@ -111,29 +111,16 @@ export async function listSlotCandidates(db: Executor, { boardModelId }: { board
 
 /**
  * Profile versions with everything the engine needs to check them in a build: the document,
- * version, board range and hash, and the cooler model's fan and pump. Order follows `ids`.
+ * version, board range and hash, and the cooler model's fan and pump (with its board model).
+ * Ids no version has are left out; the caller says which slot that was.
  */
-export async function loadSlotFacts(db: Executor, { ids, boardModelId }: { ids: string[]; boardModelId: string }): Promise<(BuildSlotFacts & { id: string; authorUserId: string; coolerModelId: string })[]> {
-  if (ids.length === 0) return [];
-  const fan = alias(components, "fan");
-  const pump = alias(components, "pump");
-  const rows = await db
-    .select({ pv: profileVersions, profileName: profiles.name, cooler: coolerModels, fan, pump })
-    .from(profileVersions)
-    .innerJoin(profiles, eq(profiles.id, profileVersions.profileId))
-    .innerJoin(coolerModels, eq(coolerModels.id, profiles.coolerModelId))
-    .innerJoin(fan, eq(fan.id, coolerModels.fanComponentId))
-    .innerJoin(pump, eq(pump.id, coolerModels.pumpComponentId))
-    .where(inArray(profileVersions.id, ids));
-  const byId = new Map(rows.map((r) => [r.pv.id, r]));
-  return ids.map((id, i) => {
-    const r = byId.get(id);
-    if (!r) throw new AppError("validation_failed", `Slot ${i + 1}: profile version ${id} does not exist.`, { issues: [{ path: `/slots/${i}`, message: "Unknown profile version." }] });
-    if (r.cooler.boardModelId !== boardModelId) {
-      throw new AppError("validation_failed", `Slot ${i + 1} (${r.profileName} ${r.pv.version}) is for ${r.cooler.name}, a cooler on another board model.`, { issues: [{ path: `/slots/${i}`, message: "Pick a profile version for a cooler on this board model." }] });
-    }
-    return {
-      id,
+export async function loadSlotFacts(db: Executor, { ids }: { ids: string[] }): Promise<Map<string, BuildSlotFacts & { id: string; authorUserId: string; coolerModelId: string; boardModelId: string; profileName: string }>> {
+  if (ids.length === 0) return new Map();
+  const rows = await listVersionsWithHardware(db, inArray(profileVersions.id, ids));
+  return new Map(rows.map((r) => [r.pv.id, {
+      id: r.pv.id,
+      boardModelId: r.cooler.boardModelId,
+      profileName: r.profileName,
       authorUserId: r.pv.authorUserId,
       coolerModelId: r.cooler.id,
       label: `${r.profileName} ${r.pv.version}`,
@@ -144,8 +131,7 @@ export async function loadSlotFacts(db: Executor, { ids, boardModelId }: { ids: 
       cooler: r.cooler,
       fan: r.fan,
       pump: r.pump,
-    };
-  });
+    }]));
 }
 
 export async function listReviews(db: Executor, { buildId }: { buildId: string }) {

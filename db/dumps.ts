@@ -1,7 +1,7 @@
 import "server-only";
 import { desc, eq, inArray, sql } from "drizzle-orm";
-import { alias } from "drizzle-orm/pg-core";
-import { boardModels, boardRevisions, builds, components, coolerModels, profileVersions, profiles } from "./schema";
+import { boardModels, boardRevisions, builds, profileVersions } from "./schema";
+import { listVersionsWithHardware } from "./profile-versions";
 import type { Executor } from "./client";
 import type { ProfileSettings, RegistryBuild, RegistryVersion } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
@@ -15,16 +15,7 @@ import { toHardwareContext } from "@/lib/registry/hardware-context";
 export async function listRegistryVersionsByHashPrefix(db: Executor, { prefixes }: { prefixes: readonly string[] }): Promise<RegistryVersion[]> {
   const wanted = [...new Set(prefixes.map((p) => p.toLowerCase()).filter((p) => /^[0-9a-f]{16}$/.test(p)))];
   if (wanted.length === 0) return [];
-  const fan = alias(components, "fan");
-  const pump = alias(components, "pump");
-  const rows = await db
-    .select({ pv: profileVersions, profileName: profiles.name, cooler: coolerModels, fan, pump })
-    .from(profileVersions)
-    .innerJoin(profiles, eq(profiles.id, profileVersions.profileId))
-    .innerJoin(coolerModels, eq(coolerModels.id, profiles.coolerModelId))
-    .innerJoin(fan, eq(fan.id, coolerModels.fanComponentId))
-    .innerJoin(pump, eq(pump.id, coolerModels.pumpComponentId))
-    .where(inArray(sql`left(${profileVersions.contentHash}, 16)`, wanted));
+  const rows = await listVersionsWithHardware(db, inArray(sql`left(${profileVersions.contentHash}, 16)`, wanted));
   const boardIds = [...new Set(rows.map((r) => r.cooler.boardModelId))];
   // The board revision with the most room: a dump does not say which revision it came from,
   // so only limits every revision shares (pump and fan minimum duties) can make a fault.

@@ -1,84 +1,84 @@
 import "server-only";
-import { asc, eq, sql } from "drizzle-orm";
-import semver from "semver";
-import { coolerModels, profiles, profileVersions, users } from "./schema";
-import type { Database, Executor } from "./client";
+import { asc, eq, sql, type SQL } from "drizzle-orm";
+import { alias } from "drizzle-orm/pg-core";
+import { components, coolerModels, profiles, profileVersions, users } from "./schema";
+import type { Executor } from "./client";
 import { recordAudit, type AuditActor } from "./audit";
-import { getCoolerHardware } from "./profiles";
-import { AppError } from "@/lib/api/errors";
-import { buildVersionImage } from "@/lib/registry/version-image";
-import { publishRefusal } from "@/lib/registry/ownership";
-import type { Role } from "@/lib/auth/roles";
+
+/** The profile a version is published into, locked so publishes of one profile queue behind each other; with its owner's name. */
+export async function lockProfileForPublish(tx: Executor, { profileId }: { profileId: string }) {
+  const [profile] = await tx.select().from(profiles).where(eq(profiles.id, profileId)).for("update");
+  if (!profile) return undefined;
+  const [owner] = await tx.select({ name: users.name }).from(users).where(eq(users.id, profile.ownerUserId));
+  return { profile, ownerName: owner?.name };
+}
+
+/** The version numbers already published in a profile. */
+export async function listVersionNumbers(db: Executor, { profileId }: { profileId: string }): Promise<string[]> {
+  return (await db.select({ version: profileVersions.version }).from(profileVersions).where(eq(profileVersions.profileId, profileId))).map((r) => r.version);
+}
 
 /**
- * Publishes an immutable profile version. In one transaction: the profile row is
- * locked so publishes of one profile queue behind each other, the new number must
- * be greater than every existing one (409 otherwise), the document is validated
- * and encoded with the engine (422 with the issues otherwise), the row and its
- * audit event are written. The unique index (profile, version) is the last guard.
+ * Writes a published version, marks its profile changed, and records the audit event, all
+ * with `tx`. The unique index (profile, version) is the last guard against a double publish;
+ * its refusal reaches the caller as a storage failure of kind "unique".
  */
-export async function publishVersion(
-  db: Database,
-  actor: AuditActor & { userId: string; role: Role },
-  input: { profileId: string; version: string; changelog: string; boardRange: string; text: string },
+export async function insertPublishedVersion(
+  tx: Executor,
+  actor: AuditActor & { userId: string },
+  input: {
+    profileId: string;
+    version: string;
+    parts: readonly [number, number, number];
+    boardRange: string;
+    changelog: string;
+    image: { document: unknown; encodedBytes: number; crc32: number; contentHash: string };
+    /** Set when an administrator publishes into someone else's profile. */
+    onBehalfOfOwnerUserId?: string;
+  },
 ) {
-  const parsed = semver.parse(input.version);
-  if (!parsed || parsed.prerelease.length > 0) throw new AppError("validation_failed", "Use a version such as 1.2.0.", { issues: [{ path: "/version", message: "Use x.y.z." }] });
-  try {
-    return await db.transaction(async (tx) => {
-      const [profile] = await tx.select().from(profiles).where(eq(profiles.id, input.profileId)).for("update");
-      if (!profile) throw new AppError("not_found", "No such profile.");
-      const [owner] = await tx.select({ name: users.name }).from(users).where(eq(users.id, profile.ownerUserId));
-      const refusal = publishRefusal(actor, { ownerUserId: profile.ownerUserId, ownerName: owner?.name ?? "another user", name: profile.name });
-      if (refusal) throw new AppError("forbidden", refusal);
-      const existing = await tx.select({ version: profileVersions.version }).from(profileVersions).where(eq(profileVersions.profileId, profile.id));
-      const highest = existing.map((e) => e.version).sort(semver.rcompare)[0];
-      if (highest && !semver.gt(input.version, highest)) {
-        throw new AppError("conflict", `Version ${input.version} is not greater than ${highest}, the latest published version; choose a higher number.`);
-      }
-      const hw = await getCoolerHardware(tx, { coolerModelId: profile.coolerModelId });
-      if (!hw) throw new AppError("not_found", "The profile's cooler model is missing.");
-      const built = buildVersionImage({ text: input.text, version: input.version, boardRange: input.boardRange, cooler: hw.cooler, fan: hw.fan, pump: hw.pump, revisions: hw.revisions });
-      if (!built.ok) {
-        throw new AppError("validation_failed", built.message, {
-          issues: built.issues.length ? built.issues.map((i) => ({ path: i.path, message: i.message })) : [{ path: "/boardRange", message: built.message }],
-        });
-      }
-      const img = built.image;
-      const [row] = await tx
-        .insert(profileVersions)
-        .values({
-          profileId: profile.id,
-          version: input.version,
-          versionMajor: parsed.major,
-          versionMinor: parsed.minor,
-          versionPatch: parsed.patch,
-          boardRange: input.boardRange,
-          document: img.document,
-          encodedBytes: img.encodedBytes,
-          crc32: img.crc32,
-          contentHash: img.contentHash,
-          changelog: input.changelog,
-          authorUserId: actor.userId,
-        })
-        .returning();
-      if (!row) throw new AppError("internal", "The version was not created.");
-      await tx.update(profiles).set({ updatedAt: new Date() }).where(eq(profiles.id, profile.id));
-      const { document: _doc, ...summary } = row;
-      // An administrator publishing into someone else's profile leaves that intent on record.
-      const onBehalf = profile.ownerUserId !== actor.userId ? { onBehalfOfOwnerUserId: profile.ownerUserId } : {};
-      await recordAudit(tx, actor, { action: "profile_version.publish", entityType: "profile_version", entityId: row.id, after: { ...summary, ...onBehalf } });
-      const [author] = await tx.select({ name: users.name }).from(users).where(eq(users.id, actor.userId));
-      return { ...summary, authorName: author?.name ?? actor.label, createdAt: row.createdAt.toISOString() };
-    });
-  } catch (err) {
-    // Two publishes that passed the ordering check at the same moment: the unique index lets one win.
-    const cause = err as { code?: string; cause?: { code?: string } };
-    if (cause.code === "23505" || cause.cause?.code === "23505") {
-      throw new AppError("conflict", `Version ${input.version} of this profile was just published by someone else; reload and choose the next number.`);
-    }
-    throw err;
-  }
+  const [row] = await tx
+    .insert(profileVersions)
+    .values({
+      profileId: input.profileId,
+      version: input.version,
+      versionMajor: input.parts[0],
+      versionMinor: input.parts[1],
+      versionPatch: input.parts[2],
+      boardRange: input.boardRange,
+      document: input.image.document,
+      encodedBytes: input.image.encodedBytes,
+      crc32: input.image.crc32,
+      contentHash: input.image.contentHash,
+      changelog: input.changelog,
+      authorUserId: actor.userId,
+    })
+    .returning();
+  if (!row) throw new Error("INSERT … RETURNING gave no row");
+  await tx.update(profiles).set({ updatedAt: new Date() }).where(eq(profiles.id, input.profileId));
+  const { document: _doc, ...summary } = row;
+  const onBehalf = input.onBehalfOfOwnerUserId ? { onBehalfOfOwnerUserId: input.onBehalfOfOwnerUserId } : {};
+  await recordAudit(tx, actor, { action: "profile_version.publish", entityType: "profile_version", entityId: row.id, after: { ...summary, ...onBehalf } });
+  const [author] = await tx.select({ name: users.name }).from(users).where(eq(users.id, actor.userId));
+  return { ...summary, authorName: author?.name ?? actor.label, createdAt: row.createdAt.toISOString() };
+}
+
+/**
+ * Published versions matching `where`, each with its profile's name and the cooler model it
+ * was published for with that model's fan and pump: what re-encoding a version or checking
+ * it against hardware limits needs.
+ */
+export async function listVersionsWithHardware(db: Executor, where: SQL) {
+  const fan = alias(components, "fan");
+  const pump = alias(components, "pump");
+  return db
+    .select({ pv: profileVersions, profileName: profiles.name, cooler: coolerModels, fan, pump })
+    .from(profileVersions)
+    .innerJoin(profiles, eq(profiles.id, profileVersions.profileId))
+    .innerJoin(coolerModels, eq(coolerModels.id, profiles.coolerModelId))
+    .innerJoin(fan, eq(fan.id, coolerModels.fanComponentId))
+    .innerJoin(pump, eq(pump.id, coolerModels.pumpComponentId))
+    .where(where);
 }
 
 export async function getVersion(db: Executor, { id }: { id: string }) {

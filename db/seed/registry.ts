@@ -1,7 +1,10 @@
 import { and, eq } from "drizzle-orm";
 import type { Database } from "../client";
 import { boardModels, boardRevisions, coolerModels, profiles, profileVersions, users } from "../schema";
-import { publishVersion } from "../profile-versions";
+import { insertPublishedVersion } from "../profile-versions";
+import { getCoolerHardware } from "../profiles";
+import { buildVersionImage } from "@/lib/registry/version-image";
+import { storedVersionParts } from "@/lib/versioning/stored-version";
 import { DEMO_BOARD } from "./hardware";
 import type { CoolingProfile } from "@/lib/engine";
 import { documentText } from "@/lib/registry/starter-profile";
@@ -133,7 +136,14 @@ export async function seedRegistry(db: Database): Promise<void> {
     const have = new Set((await db.select({ v: profileVersions.version }).from(profileVersions).where(eq(profileVersions.profileId, profile.id))).map((r) => r.v));
     for (const v of p.versions) {
       if (have.has(v.version)) continue;
-      await publishVersion(db, { userId: owner.id, role: owner.role, label: `${owner.email} (demo seed)` }, { profileId: profile.id, version: v.version, changelog: v.changelog, boardRange: v.boardRange, text: documentText(v.document) });
+      // The same image the publish use case builds; the demo versions pass its checks by construction.
+      const hw = await getCoolerHardware(db, { coolerModelId: cooler.id });
+      const parts = storedVersionParts(v.version);
+      const built = hw && buildVersionImage({ text: documentText(v.document), version: v.version, boardRange: v.boardRange, cooler: hw.cooler, fan: hw.fan, pump: hw.pump, revisions: hw.revisions });
+      if (!built?.ok || !parts) throw new Error(`demo version ${p.name} ${v.version} does not build: ${built && !built.ok ? built.message : "no hardware or bad number"}`);
+      await db.transaction((tx) =>
+        insertPublishedVersion(tx, { userId: owner.id, label: `${owner.email} (demo seed)` }, { profileId: profile.id, version: v.version, parts, boardRange: v.boardRange, changelog: v.changelog, image: built.image }),
+      );
     }
   }
 }

@@ -14,16 +14,10 @@ import {
   slotBytes,
 } from "./layout";
 import type { BankIssue, BankSlotInput, EncodeBankResult } from "./types";
-
-const VERSION_RE = /^(0|[1-9]\d*)\.(0|[1-9]\d*)\.(0|[1-9]\d*)$/;
+import { storedVersionParts } from "@/lib/versioning/stored-version";
 
 /** Parses "x.y.z" with each part 0–255; null otherwise. */
-export function versionBytes(version: string): [number, number, number] | null {
-  const m = VERSION_RE.exec(version);
-  if (!m) return null;
-  const parts = [Number(m[1]), Number(m[2]), Number(m[3])] as [number, number, number];
-  return parts.every((p) => p <= 255) ? parts : null;
-}
+export const versionBytes = storedVersionParts;
 
 function writeCurve(out: Uint8Array, at: number, curve: CurveCodes): number {
   out[at++] = curve.points.length;

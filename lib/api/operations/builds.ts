@@ -4,6 +4,7 @@ import { timestamp } from "./timestamp";
 import { idParams } from "./account";
 import { STAGE_ORDER } from "@/lib/release/stages";
 import { isValidRange } from "@/lib/engine";
+import { isStoredVersion, STORED_VERSION_HINT } from "@/lib/versioning/stored-version";
 import { UPLOAD_MAX_BYTES } from "@/lib/release/upload-check";
 
 export const stageSchema = z.enum(STAGE_ORDER);
@@ -149,7 +150,7 @@ export const listBuilds = defineOperation({
 
 export const createBuildBody = z.strictObject({
   boardModelId: z.uuid("Pick a board model."),
-  version: z.string().regex(/^(0|[1-9]\d{0,2})\.(0|[1-9]\d{0,2})\.(0|[1-9]\d{0,2})$/, "Give a version such as 1.4.0 (three numbers, each 0–255)."),
+  version: z.string().refine(isStoredVersion, `Give a version the board can store: ${STORED_VERSION_HINT}.`),
   revisionRange: z.string().trim().min(1, "Give the board revisions this build is for, e.g. >=1.1.0 <3.0.0.").max(200).refine(isValidRange, "Not a semver range; write e.g. >=1.1.0 <3.0.0 or ^2.0.0."),
   slots: z.array(z.uuid("Pick a profile version.")).min(1, "Put at least one profile version in a slot.").max(16, "A bank holds at most 16 slots."),
   firmwareUploadId: z.uuid("Upload the firmware image."),

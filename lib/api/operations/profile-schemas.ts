@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { isValidVersion } from "@/lib/versioning/semver-helpers";
-import { boardRangeSchema, componentFieldsView } from "./registry-schemas";
+import { isStoredVersion, STORED_VERSION_HINT } from "@/lib/versioning/stored-version";
+import { boardRangeSchema, componentFieldsView, revisionFieldsView } from "./registry-schemas";
 import type { CoolingProfile } from "@/lib/engine";
 import type { ProfileChange } from "@/lib/support/curve-diff";
 
@@ -29,7 +29,7 @@ export const publishBody = z.strictObject({
   version: z
     .string()
     .trim()
-    .refine((v) => isValidVersion(v) && /^\d+\.\d+\.\d+$/.test(v), "Use a version such as 1.2.0 (no pre-release suffix; the board stores three numbers)."),
+    .refine(isStoredVersion, `Use a version the board can store: ${STORED_VERSION_HINT}.`),
   changelog: z.string().trim().min(1, "Say what changed.").max(2000, "Use at most 2,000 characters."),
   boardRange: boardRangeSchema,
   text: z.string().min(1, "The document is empty.").max(MAX_PROFILE_BYTES, "The document is larger than 256 KiB."),
@@ -99,18 +99,7 @@ export const profileDetailView = z.object({
   cooler: z.object({ id: z.string(), name: z.string(), fanCount: z.number(), radiatorKPerWAtMinFan: z.number(), radiatorKPerWAtMaxFan: z.number(), boardModelName: z.string() }),
   fan: componentFields,
   pump: componentFields,
-  revisions: z.array(
-    z.object({
-      id: z.string(),
-      revision: z.string(),
-      memoryBytes: z.number(),
-      baseAddress: z.number(),
-      slotCount: z.number(),
-      maxPointsPerCurve: z.number(),
-      pwmFrequencyHz: z.number(),
-      tachPulsesPerRev: z.number(),
-    }),
-  ),
+  revisions: z.array(revisionFieldsView.extend({ id: z.string() })),
   versions: z.array(versionView),
 });
 export type ProfileDetailView = z.infer<typeof profileDetailView>;

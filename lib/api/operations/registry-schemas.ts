@@ -25,10 +25,10 @@ export const componentBody = z
   .refine((c) => c.kind !== "pump" || c.flowAtMaxRpmLpm !== null, { path: ["flowAtMaxRpmLpm"], message: "A pump needs its flow at maximum RPM." });
 export type ComponentBody = z.infer<typeof componentBody>;
 
-export const componentView = z.object({
-  id: z.string(),
-  kind: z.enum(["fan", "pump"]),
+/** A fan or pump's figures as the engine reads them. */
+export const componentFieldsView = z.object({
   name: z.string(),
+  kind: z.enum(["fan", "pump"]),
   minDutyPct: z.number(),
   rpmAtMinDuty: z.number(),
   maxRpm: z.number(),
@@ -37,9 +37,9 @@ export const componentView = z.object({
   refRpm: z.number(),
   soundExponent: z.number(),
   flowAtMaxRpmLpm: z.number().nullable(),
-  createdAt: timestamp,
-  updatedAt: timestamp,
-});
+}) satisfies z.ZodType<ComponentFields>;
+
+export const componentView = componentFieldsView.extend({ id: z.string(), createdAt: timestamp, updatedAt: timestamp });
 export type ComponentView = z.infer<typeof componentView>;
 
 export const coolerModelBody = z
@@ -137,19 +137,6 @@ export const listQuery = <S extends readonly [string, ...string[]]>(sorts: S) =>
 
 export const pageOf = <T extends z.ZodType>(item: T) => z.object({ items: z.array(item), total: z.number(), page: z.number(), pageSize: z.number() });
 
-/** A fan or pump's figures as the engine reads them. */
-export const componentFieldsView = z.object({
-  name: z.string(),
-  kind: z.enum(["fan", "pump"]),
-  minDutyPct: z.number(),
-  rpmAtMinDuty: z.number(),
-  maxRpm: z.number(),
-  tachPulsesPerRev: z.number(),
-  refSoundDbA: z.number(),
-  refRpm: z.number(),
-  soundExponent: z.number(),
-  flowAtMaxRpmLpm: z.number().nullable(),
-}) satisfies z.ZodType<ComponentFields>;
 
 export const coolerFieldsView = z.object({ name: z.string(), fanCount: z.number(), radiatorKPerWAtMinFan: z.number(), radiatorKPerWAtMaxFan: z.number() }) satisfies z.ZodType<CoolerFields>;
 

@@ -780,6 +780,26 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/builds/{id}/vectors": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * Firmware test vectors of the build's stored bank image: stored codes, duty codes over a temperature sweep and per-tick transient traces (docs/firmware-vectors.md), as a JSON download
+         * @description Roles: admin, engineer, release_manager, support, viewer.
+         */
+        get: operations["downloadBuildVectors"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/v1/lots": {
         parameters: {
             query?: never;
@@ -1487,10 +1507,9 @@ export interface operations {
                 content: {
                     "application/json": {
                         items: {
-                            id: string;
+                            name: string;
                             /** @enum {string} */
                             kind: "fan" | "pump";
-                            name: string;
                             minDutyPct: number;
                             rpmAtMinDuty: number;
                             maxRpm: number;
@@ -1499,6 +1518,7 @@ export interface operations {
                             refRpm: number;
                             soundExponent: number;
                             flowAtMaxRpmLpm: number | null;
+                            id: string;
                             /** Format: date-time */
                             createdAt: string;
                             /** Format: date-time */
@@ -1563,10 +1583,9 @@ export interface operations {
                 content: {
                     "application/json": {
                         component: {
-                            id: string;
+                            name: string;
                             /** @enum {string} */
                             kind: "fan" | "pump";
-                            name: string;
                             minDutyPct: number;
                             rpmAtMinDuty: number;
                             maxRpm: number;
@@ -1575,6 +1594,7 @@ export interface operations {
                             refRpm: number;
                             soundExponent: number;
                             flowAtMaxRpmLpm: number | null;
+                            id: string;
                             /** Format: date-time */
                             createdAt: string;
                             /** Format: date-time */
@@ -1638,10 +1658,9 @@ export interface operations {
                 content: {
                     "application/json": {
                         component: {
-                            id: string;
+                            name: string;
                             /** @enum {string} */
                             kind: "fan" | "pump";
-                            name: string;
                             minDutyPct: number;
                             rpmAtMinDuty: number;
                             maxRpm: number;
@@ -1650,6 +1669,7 @@ export interface operations {
                             refRpm: number;
                             soundExponent: number;
                             flowAtMaxRpmLpm: number | null;
+                            id: string;
                             /** Format: date-time */
                             createdAt: string;
                             /** Format: date-time */
@@ -2503,7 +2523,6 @@ export interface operations {
                             flowAtMaxRpmLpm: number | null;
                         };
                         revisions: {
-                            id: string;
                             revision: string;
                             memoryBytes: number;
                             baseAddress: number;
@@ -2511,6 +2530,7 @@ export interface operations {
                             maxPointsPerCurve: number;
                             pwmFrequencyHz: number;
                             tachPulsesPerRev: number;
+                            id: string;
                         }[];
                         versions: {
                             id: string;
@@ -3798,6 +3818,46 @@ export interface operations {
                         }[];
                         hasMore: boolean;
                     };
+                };
+            };
+            /** @description Error */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        error: {
+                            code: string;
+                            message: string;
+                            issues?: {
+                                path?: string;
+                                message?: string;
+                            }[];
+                        };
+                    };
+                };
+            };
+        };
+    };
+    downloadBuildVectors: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The vectors file (format loopkeeper-firmware-vectors) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": string;
                 };
             };
             /** @description Error */

@@ -3,7 +3,7 @@ import { listVersions, publishVersion } from "@/lib/api/operations/profiles";
 import { AppError } from "@/lib/api/errors";
 import { getDb } from "@/db/client";
 import { getProfileRow, listVersionsOfProfile } from "@/db/profiles";
-import * as versions from "@/db/profile-versions";
+import { publishProfileVersion } from "@/lib/use-cases/profiles/publish";
 import { auditActor } from "@/lib/platform/auth/actor";
 
 export const GET = apiRoute(listVersions, async ({ params }) => {
@@ -13,5 +13,5 @@ export const GET = apiRoute(listVersions, async ({ params }) => {
 });
 
 export const POST = apiRoute(publishVersion, async ({ actor, params, body, requestId }) => ({
-  version: await versions.publishVersion(getDb(), { ...auditActor(actor, requestId), userId: actor.userId, role: actor.role }, { profileId: params.id, ...body }),
+  version: await publishProfileVersion(getDb(), { ...auditActor(actor, requestId), userId: actor.userId, role: actor.role }, { profileId: params.id, ...body }),
 }));
