@@ -1,6 +1,6 @@
 import "server-only";
 import { and, asc, eq, isNull, ne } from "drizzle-orm";
-import { bankSigningKeys, builds, type Build } from "./schema";
+import { bankSigningKeys, boardModels, builds, type Build } from "./schema";
 import type { Executor, Tx } from "./client";
 import { bankSigner } from "@/lib/platform/signing-key";
 
@@ -38,5 +38,14 @@ export async function listBankSigningKeys(db: Executor, { boardModelId }: { boar
     .select({ keyId: bankSigningKeys.keyId, publicKeyPem: bankSigningKeys.publicKeyPem, validFrom: bankSigningKeys.validFrom, validUntil: bankSigningKeys.validUntil })
     .from(bankSigningKeys)
     .where(eq(bankSigningKeys.boardModelId, boardModelId))
+    .orderBy(asc(bankSigningKeys.validFrom));
+}
+
+/** Every bank signing public key the registry lists, with its board model: what a dump's signature is checked against. */
+export async function listAllBankSigningKeys(db: Executor): Promise<{ keyId: string; publicKeyPem: string; boardModelName: string }[]> {
+  return db
+    .select({ keyId: bankSigningKeys.keyId, publicKeyPem: bankSigningKeys.publicKeyPem, boardModelName: boardModels.name })
+    .from(bankSigningKeys)
+    .innerJoin(boardModels, eq(boardModels.id, bankSigningKeys.boardModelId))
     .orderBy(asc(bankSigningKeys.validFrom));
 }

@@ -37,9 +37,13 @@ export async function listRegistryVersionsByHashPrefix(db: Executor, { prefixes 
 /** Builds whose kept bank image has this SHA-256 (lower-case hex). */
 export async function listBuildsByBankSha256(db: Executor, { sha256 }: { sha256: string }): Promise<RegistryBuild[]> {
   const rows = await db
-    .select({ buildId: builds.id, version: builds.version, stage: builds.stage, boardModelName: boardModels.name, bankSha256: builds.bankSha256 })
+    .select({ buildId: builds.id, version: builds.version, stage: builds.stage, boardModelName: boardModels.name, bankSha256: builds.bankSha256, bankSignature: builds.bankSignature, bankSignatureKeyId: builds.bankSignatureKeyId })
     .from(builds)
     .innerJoin(boardModels, eq(boardModels.id, builds.boardModelId))
     .where(eq(builds.bankSha256, sha256.toLowerCase()));
-  return rows.flatMap((r) => (r.bankSha256 ? [{ buildId: r.buildId, version: r.version, stage: r.stage, boardModelName: r.boardModelName, bankSha256: r.bankSha256 }] : []));
+  return rows.flatMap((r) => {
+    if (!r.bankSha256) return [];
+    const signature = r.bankSignature && r.bankSignatureKeyId ? { bankSignature: { keyId: r.bankSignatureKeyId, signature: new Uint8Array(r.bankSignature) } } : {};
+    return [{ buildId: r.buildId, version: r.version, stage: r.stage, boardModelName: r.boardModelName, bankSha256: r.bankSha256, ...signature }];
+  });
 }

@@ -17,16 +17,19 @@ import { ErrorNotice } from "@/components/ui/error-notice";
 
 const MATCH_LABEL = { exact: "Exact registry version", altered: "Altered", unknown: "Unknown to the registry", undecodable: "Cannot be read" } as const;
 const MATCH_TONE = { exact: "ok", altered: "fault", unknown: "neutral", undecodable: "fault" } as const;
+const SIGNATURE_TONE = { valid: "ok", invalid: "fault", unverified: "warn", unsigned: "neutral" } as const;
 
 export function DumpIdentify() {
   const id = useId();
   const [file, setFile] = useState<File | null>(null);
+  const [sig, setSig] = useState<File | null>(null);
   const progress = useUpload();
   const identify = useMutation({
-    mutationFn: (f: File) => {
+    mutationFn: (f: { dump: File; sig: File | null }) => {
       const fd = new FormData();
-      fd.set("file", f);
-      return progress.run(f.name, ({ signal, onProgress }) => apiUploadJson(identifyDump, { raw: { data: fd } }, { signal, onProgress }));
+      fd.set("file", f.dump);
+      if (f.sig) fd.set("signature", f.sig);
+      return progress.run(f.dump.name, ({ signal, onProgress }) => apiUploadJson(identifyDump, { raw: { data: fd } }, { signal, onProgress }));
     },
   });
   const r = identify.data;
@@ -36,7 +39,7 @@ export function DumpIdentify() {
         className="space-y-3"
         onSubmit={(e) => {
           e.preventDefault();
-          if (file) identify.mutate(file);
+          if (file) identify.mutate({ dump: file, sig });
         }}
       >
         <Field id={`${id}-file`} label="Dump file (.bin or .hex)" hint="Read back from a returned board; at most 256 KiB.">
@@ -53,6 +56,19 @@ export function DumpIdentify() {
             }}
           />
         </Field>
+        <div>
+          <label htmlFor={`${id}-sig`} className="block text-sm font-medium text-ink-800">Signature (.sig, optional)</label>
+          <input
+            id={`${id}-sig`}
+            type="file"
+            accept=".sig,application/octet-stream"
+            className="mt-1 block text-sm"
+            disabled={progress.busy}
+            onChange={(e) => setSig(e.target.files?.[0] ?? null)}
+            aria-describedby={`${id}-sig-hint`}
+          />
+          <p id={`${id}-sig-hint`} className="mt-1 text-xs text-ink-600">Without one, a signature stored after the CRC or the matching build&apos;s is checked.</p>
+        </div>
         <Button type="submit" disabled={!file || progress.busy}>{progress.busy ? "Reading…" : "Identify"}</Button>
         <UploadProgressBar state={progress.state} onCancel={progress.cancel} cancelledNote="Cancelled; nothing was identified." />
       </form>
@@ -82,6 +98,12 @@ export function DumpIdentify() {
           ) : r.imageSha256 ? (
             <p className="text-sm text-ink-700">No build in the registry has exactly this bank (SHA-256 <code className="text-xs">{r.imageSha256.slice(0, 16)}…</code>).</p>
           ) : null}
+          {r.signature && (
+            <p className="text-sm" data-testid="dump-signature">
+              <Badge tone={SIGNATURE_TONE[r.signature.status]}>{r.signature.status === "unsigned" ? "Unsigned" : `Signed by key ${r.signature.keyId ?? "?"}: ${r.signature.status === "unverified" ? "not checked" : r.signature.status}`}</Badge>{" "}
+              {r.signature.message}
+            </p>
+          )}
           <p className="text-xs text-ink-600">
             {r.fileName ?? "Upload"}: {r.format === "hex" ? "Intel HEX" : "binary"}, {r.sizeBytes} bytes
             {r.crc && <>; CRC-32 stored {r.crc.stored}, computed {r.crc.computed}</>}

@@ -1,5 +1,6 @@
 import { readIntelHex } from "../hex/read";
 import { decodeBank } from "./decode";
+import { judgeSignature, type DumpSignature, type SigningKeyRef, type VerifySignature } from "./dump-signature";
 import { identifySlots, imageBytes, imageSha256, matchBuild, type RegistryBuild, type RegistryVersion, type SlotReport } from "./identify";
 
 const hex32 = (n: number): string => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
@@ -26,6 +27,8 @@ export interface DumpReport {
   /** The build whose bank this image is, byte for byte (by SHA-256). */
   build?: { buildId: string; version: string; stage: string; boardModelName?: string };
   slots: SlotReport[];
+  /** The Ed25519 signature check, when keys or a signature were given to check with. */
+  signature?: DumpSignature;
   /** Slots that are not exact, or whose contents break the authoring rules: what support must act on. */
   faults: string[];
   errors: { code: string; message: string }[];
@@ -38,7 +41,34 @@ export interface DumpReport {
  * the image is when its SHA-256 equals one the registry keeps. The command
  * line and the server call this one function, so they give the same answer.
  */
-export function reportDump(input: { bytes: Uint8Array; fileName: string | null; known: readonly RegistryVersion[]; builds: readonly RegistryBuild[] }): DumpReport {
+export function reportDump(input: DumpInput): DumpReport {
+  const { report, image, decoded } = readDump(input);
+  if (input.signature) {
+    const build = report.build ? input.builds.find((b) => b.buildId === report.build?.buildId) : undefined;
+    report.signature = judgeSignature({
+      image,
+      sidecar: input.signature.sidecar,
+      stored: decoded?.signatureBlock,
+      build: build?.bankSignature ? { ...build.bankSignature, version: build.version } : undefined,
+      keys: input.signature.keys,
+      verify: input.signature.verify,
+    });
+    if (report.signature.status === "invalid") report.faults.push(`Signature ${report.signature.summary}: ${report.signature.message}`);
+  }
+  return report;
+}
+
+/** A dump and what to identify it by. */
+export interface DumpInput {
+  bytes: Uint8Array;
+  fileName: string | null;
+  known: readonly RegistryVersion[];
+  builds: readonly RegistryBuild[];
+  /** Check the image's Ed25519 signature: a supplied .sig, else one stored after the CRC, else the matching build's. */
+  signature?: { sidecar?: Uint8Array; keys: readonly SigningKeyRef[]; verify: VerifySignature };
+}
+
+function readDump(input: DumpInput): { report: DumpReport; image?: Uint8Array; decoded?: ReturnType<typeof decodeBank> } {
   const isHex = looksLikeIntelHex(input.bytes);
   let bytes = input.bytes;
   const result: DumpReport = { fileName: input.fileName, format: isHex ? "hex" : "bin", sizeBytes: input.bytes.length, status: "unreadable", slots: [], faults: [], errors: [] };
@@ -52,14 +82,14 @@ export function reportDump(input: { bytes: Uint8Array; fileName: string | null; 
       startRecords: hex.startRecords.map((r) => ({ line: r.line, type: r.type, address: r.type === 3 ? `${(r.segment ?? 0).toString(16).toUpperCase().padStart(4, "0")}:${(r.offset ?? 0).toString(16).toUpperCase().padStart(4, "0")}` : hex32(r.linearAddress ?? 0) })),
     };
     result.errors.push(...hex.errors.map((e) => ({ code: e.code, message: e.message })));
-    if (hex.bytes.length === 0) return result;
+    if (hex.bytes.length === 0) return { report: result };
     bytes = hex.bytes;
   }
   const decoded = decodeBank(bytes);
   result.errors.push(...decoded.errors.map((e) => ({ code: e.code, message: e.message })));
   if (decoded.crc) result.crc = { stored: hex32(decoded.crc.stored), computed: hex32(decoded.crc.computed), ok: decoded.crc.stored === decoded.crc.computed };
   result.slotCount = decoded.slotCount;
-  if (decoded.formatVersion === undefined || !decoded.crc) return result;
+  if (decoded.formatVersion === undefined || !decoded.crc) return { report: result, decoded };
   const image = imageBytes(bytes, decoded);
   if (image) {
     result.imageSha256 = imageSha256(image);
@@ -75,5 +105,5 @@ export function reportDump(input: { bytes: Uint8Array; fileName: string | null; 
   const hexBad = result.hex ? !result.hex.ok : false;
   // Status is about the bytes' integrity; what the intact bytes mean is in slots and faults.
   result.status = decoded.ok && !hexBad ? "ok" : "corrupt";
-  return result;
+  return { report: result, image, decoded };
 }

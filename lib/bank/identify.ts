@@ -31,6 +31,8 @@ export interface RegistryBuild {
   boardModelName?: string;
   /** Lower-case hex SHA-256 of the whole bank image. */
   bankSha256: string;
+  /** The Ed25519 signature made when the build entered pilot, when it has one. */
+  bankSignature?: { keyId: string; signature: Uint8Array };
 }
 
 /**

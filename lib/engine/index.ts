@@ -79,7 +79,10 @@ export { identifySlots, registrySlotBytes, slotDifferences, slotFindings, dumpKe
 export type { RegistryVersion, RegistryBuild, SlotReport, SlotMatch, SlotFinding, DumpKeys } from "../bank/identify";
 /** The whole dump report the command line, the API and the support page show. */
 export { reportDump, looksLikeIntelHex } from "../bank/dump-report";
-export type { DumpReport } from "../bank/dump-report";
+export type { DumpReport, DumpInput } from "../bank/dump-report";
+/** The dump's Ed25519 signature: valid / invalid / not checked / unsigned, from a .sig, the block after the CRC, or the matching build. */
+export { judgeSignature } from "../bank/dump-signature";
+export type { DumpSignature, SigningKeyRef, VerifySignature, SignatureSource } from "../bank/dump-signature";
 /** Image size of a set of slots, and the format constants. */
 export { bankBytes, slotBytes, BANK_MAGIC, BANK_FORMAT_VERSION, TEMP_STEP_C, DUTY_STEP_PCT } from "../bank/layout";
 /** Encoder input and results, decoded slots, and issues with code, offset, expected/actual. */

@@ -61,3 +61,12 @@ export function verifyEd25519(publicKey: KeyObject, message: Uint8Array, signatu
     return false;
   }
 }
+
+/** Verification by a PEM public key, as reportDump takes it; a key that is not Ed25519 verifies nothing. */
+export function verifyWithPem(publicKeyPem: string, message: Uint8Array, signature: Uint8Array): boolean {
+  try {
+    return verifyEd25519(publicKeyFromPem(publicKeyPem), message, signature);
+  } catch {
+    return false;
+  }
+}

@@ -9,7 +9,9 @@ import { freshDraftBuild } from "./support/builds";
 import { transitionBuild } from "@/db/build-stages";
 import { listBankSigningKeys } from "@/db/bank-signatures";
 import { builds } from "@/db/schema";
-import { writeIntelHex } from "@/lib/engine";
+import { writeIntelHex, type DumpReport } from "@/lib/engine";
+import { callRoute, tokenFor } from "./support/http";
+import { POST as identifyRoute } from "@/app/api/v1/dumps/identify/route";
 import { formatSignatureBlock } from "@/lib/signing/signature-block";
 
 afterAll(closeDb);
@@ -56,5 +58,53 @@ describe("bank signatures", () => {
     const bad = cli("verify", files.bad, "--signature", files.sig, "--public-key", files.pem);
     expect(bad.status).toBe(1);
     expect(bad.stderr).toMatch(/does not match this image/);
+  });
+
+  it("identification says whose signature a dump carries: valid for a pilot build's bank, invalid after a changed byte, unsigned for a draft", async () => {
+    const db = getDb();
+    const build = await freshDraftBuild();
+    const draft = await freshDraftBuild();
+    const actor = await demoActor("release@tarnwell.example");
+    await db.update(builds).set({ stage: "validation" }).where(eq(builds.id, build.id));
+    await transitionBuild(db, actor, { id: build.id, from: "validation", to: "pilot", gate: async () => [], mails: async () => [] });
+    const [row] = await db.select().from(builds).where(eq(builds.id, build.id));
+    const [draftRow] = await db.select().from(builds).where(eq(builds.id, draft.id));
+    const keyId = row!.bankSignatureKeyId!;
+    const image = new Uint8Array(row!.bankImage!);
+    const sig = formatSignatureBlock({ keyId, signature: new Uint8Array(row!.bankSignature!) });
+    const token = await tokenFor("support@tarnwell.example");
+    const identify = async (bytes: Uint8Array, sidecar?: Uint8Array): Promise<DumpReport> => {
+      const form = new FormData();
+      form.set("file", new Blob([Buffer.from(bytes)]), "dump.bin");
+      if (sidecar) form.set("signature", new Blob([Buffer.from(sidecar)]), "dump.sig");
+      const res = await callRoute(identifyRoute, { url: "/api/v1/dumps/identify", method: "POST", token, body: form });
+      expect(res.status).toBe(200);
+      return (await res.json()) as DumpReport;
+    };
+
+    // The image of a signed build: its kept signature is checked against the registry's key.
+    const fromBuild = await identify(image);
+    expect(fromBuild.signature).toMatchObject({ status: "valid", keyId, source: "build", summary: `signed by key ${keyId}: valid` });
+    // The same with the .sig given, and with the block stored after the CRC on a board with room.
+    expect((await identify(image, sig)).signature).toMatchObject({ status: "valid", source: "sidecar" });
+    const withBlock = new Uint8Array(image.length + sig.length + 32).fill(0xff);
+    withBlock.set(image);
+    withBlock.set(sig, image.length);
+    const stored = await identify(withBlock);
+    expect(stored.status).toBe("ok");
+    expect(stored.signature).toMatchObject({ status: "valid", source: "stored" });
+
+    // One byte changed and the CRC-32 written again: no build matches, the .sig no longer fits.
+    const changed = image.slice();
+    changed[30] = changed[30]! ^ 0x01;
+    const zlib = await import("node:zlib");
+    new DataView(changed.buffer).setUint32(changed.length - 4, zlib.crc32(changed.subarray(0, changed.length - 4)), true);
+    const altered = await identify(changed, sig);
+    expect(altered.signature).toMatchObject({ status: "invalid", keyId, summary: `signed by key ${keyId}: invalid` });
+    expect(altered.faults.join("\n")).toMatch(/does not match this image/);
+
+    // A draft's bank is not signed.
+    const unsigned = await identify(new Uint8Array(draftRow!.bankImage!));
+    expect(unsigned.signature).toMatchObject({ status: "unsigned", summary: "unsigned" });
   });
 });

@@ -186,7 +186,7 @@ export const identifyDump = defineOperation({
   id: "identifyDump",
   method: "POST",
   path: "/api/v1/dumps/identify",
-  summary: "Identify a memory dump (.bin or Intel .hex) read back from a board by content: CRC, each slot exact/altered (with the differing fields)/unknown/undecodable, safety findings, and the build whose bank it is",
+  summary: "Identify a memory dump (.bin or Intel .hex) read back from a board by content: CRC, each slot exact/altered (with the differing fields)/unknown/undecodable, safety findings, the build whose bank it is, and its Ed25519 signature (signed by key K: valid / invalid, or unsigned; a .sig may come in the multipart field \"signature\")",
   tag: "Support",
   access: "support",
   rawBody: { contentTypes: ["application/octet-stream", "text/plain", "multipart/form-data"], maxBytes: MAX_DUMP_BYTES },

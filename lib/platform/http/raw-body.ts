@@ -51,14 +51,21 @@ export async function readRawBody(req: NextRequest, { maxBytes, contentTypes }: 
 
 /** The first file of a multipart/form-data body already read within its limit. */
 export async function firstFormFile(bytes: Buffer, contentType: string): Promise<{ name: string; bytes: Buffer } | null> {
+  const [first] = await formFiles(bytes, contentType);
+  return first ? { name: first.name, bytes: first.bytes } : null;
+}
+
+/** Every file of a multipart body, in order, with the form field it came in. */
+export async function formFiles(bytes: Buffer, contentType: string): Promise<{ field: string; name: string; bytes: Buffer }[]> {
   let form: FormData;
   try {
     form = await new Response(new Uint8Array(bytes), { headers: { "content-type": contentType } }).formData();
   } catch {
     throw new AppError("bad_request", "The multipart body could not be read; send the file in a form field named file.");
   }
-  for (const value of form.values()) {
-    if (typeof value !== "string") return { name: value.name, bytes: Buffer.from(await value.arrayBuffer()) };
+  const out: { field: string; name: string; bytes: Buffer }[] = [];
+  for (const [field, value] of form.entries()) {
+    if (typeof value !== "string") out.push({ field, name: value.name, bytes: Buffer.from(await value.arrayBuffer()) });
   }
-  return null;
+  return out;
 }
