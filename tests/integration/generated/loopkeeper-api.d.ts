@@ -1014,7 +1014,7 @@ export interface paths {
         get?: never;
         put?: never;
         /**
-         * Identify a memory dump (.bin or Intel .hex) read back from a board by content: CRC, each slot exact/altered (with the differing fields)/unknown/undecodable, safety findings, and the build whose bank it is
+         * Identify a memory dump (.bin or Intel .hex) read back from a board by content: CRC, each slot exact/altered (with the differing fields)/unknown/undecodable, safety findings, the build whose bank it is, and its Ed25519 signature (signed by key K: valid / invalid, or unsigned; a .sig may come in the multipart field "signature")
          * @description Roles: admin, engineer, release_manager, support.
          */
         post: operations["identifyDump"];
