@@ -1925,8 +1925,6 @@ export interface operations {
                             serialPrefix: string;
                             description: string;
                             revisions: {
-                                id: string;
-                                boardModelId: string;
                                 revision: string;
                                 memoryBytes: number;
                                 baseAddress: number;
@@ -1934,6 +1932,8 @@ export interface operations {
                                 maxPointsPerCurve: number;
                                 pwmFrequencyHz: number;
                                 tachPulsesPerRev: number;
+                                id: string;
+                                boardModelId: string;
                                 notes: string;
                             }[];
                         }[];
@@ -1990,8 +1990,6 @@ export interface operations {
                             serialPrefix: string;
                             description: string;
                             revisions: {
-                                id: string;
-                                boardModelId: string;
                                 revision: string;
                                 memoryBytes: number;
                                 baseAddress: number;
@@ -1999,6 +1997,8 @@ export interface operations {
                                 maxPointsPerCurve: number;
                                 pwmFrequencyHz: number;
                                 tachPulsesPerRev: number;
+                                id: string;
+                                boardModelId: string;
                                 notes: string;
                             }[];
                         };
@@ -2057,8 +2057,6 @@ export interface operations {
                             serialPrefix: string;
                             description: string;
                             revisions: {
-                                id: string;
-                                boardModelId: string;
                                 revision: string;
                                 memoryBytes: number;
                                 baseAddress: number;
@@ -2066,6 +2064,8 @@ export interface operations {
                                 maxPointsPerCurve: number;
                                 pwmFrequencyHz: number;
                                 tachPulsesPerRev: number;
+                                id: string;
+                                boardModelId: string;
                                 notes: string;
                             }[];
                         };
@@ -2124,8 +2124,6 @@ export interface operations {
                 content: {
                     "application/json": {
                         revision: {
-                            id: string;
-                            boardModelId: string;
                             revision: string;
                             memoryBytes: number;
                             baseAddress: number;
@@ -2133,6 +2131,8 @@ export interface operations {
                             maxPointsPerCurve: number;
                             pwmFrequencyHz: number;
                             tachPulsesPerRev: number;
+                            id: string;
+                            boardModelId: string;
                             notes: string;
                         };
                     };
@@ -2224,8 +2224,6 @@ export interface operations {
                 content: {
                     "application/json": {
                         revision: {
-                            id: string;
-                            boardModelId: string;
                             revision: string;
                             memoryBytes: number;
                             baseAddress: number;
@@ -2233,6 +2231,8 @@ export interface operations {
                             maxPointsPerCurve: number;
                             pwmFrequencyHz: number;
                             tachPulsesPerRev: number;
+                            id: string;
+                            boardModelId: string;
                             notes: string;
                         };
                         boardModelName: string;
@@ -2314,8 +2314,6 @@ export interface operations {
                 content: {
                     "application/json": {
                         revision: {
-                            id: string;
-                            boardModelId: string;
                             revision: string;
                             memoryBytes: number;
                             baseAddress: number;
@@ -2323,6 +2321,8 @@ export interface operations {
                             maxPointsPerCurve: number;
                             pwmFrequencyHz: number;
                             tachPulsesPerRev: number;
+                            id: string;
+                            boardModelId: string;
                             notes: string;
                         };
                     };
