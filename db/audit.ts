@@ -10,13 +10,10 @@ export interface AuditActor {
   requestId?: string;
 }
 
-/** Writes one audit event; call it inside the transaction that makes the change. */
-export async function recordAudit(
-  tx: Executor,
-  actor: AuditActor,
-  event: { action: string; entityType: string; entityId: string; before?: unknown; after?: unknown },
-): Promise<void> {
-  await tx.insert(auditEvents).values({
+type AuditEventInput = { action: string; entityType: string; entityId: string; before?: unknown; after?: unknown };
+
+function auditRow(actor: AuditActor, event: AuditEventInput) {
+  return {
     actorUserId: actor.userId,
     actorLabel: actor.label,
     action: event.action,
@@ -25,7 +22,16 @@ export async function recordAudit(
     before: event.before ?? null,
     after: event.after ?? null,
     requestId: actor.requestId ?? null,
-  });
+  };
+}
+
+/** Writes one audit event; call it inside the transaction that makes the change. */
+export async function recordAudit(
+  tx: Executor,
+  actor: AuditActor,
+  event: AuditEventInput,
+): Promise<void> {
+  await tx.insert(auditEvents).values(auditRow(actor, event));
   logger.info({ requestId: actor.requestId, actor: actor.label, action: event.action, entityType: event.entityType, entityId: event.entityId }, "audit");
 }
 
@@ -36,21 +42,10 @@ export async function recordAudit(
 export async function recordAuditMany(
   tx: Executor,
   actor: AuditActor,
-  events: { action: string; entityType: string; entityId: string; before?: unknown; after?: unknown }[],
+  events: AuditEventInput[],
 ): Promise<void> {
   if (events.length === 0) return;
-  await tx.insert(auditEvents).values(
-    events.map((event) => ({
-      actorUserId: actor.userId,
-      actorLabel: actor.label,
-      action: event.action,
-      entityType: event.entityType,
-      entityId: event.entityId,
-      before: event.before ?? null,
-      after: event.after ?? null,
-      requestId: actor.requestId ?? null,
-    })),
-  );
+  await tx.insert(auditEvents).values(events.map((event) => auditRow(actor, event)));
   logger.info({ requestId: actor.requestId, actor: actor.label, action: events[0]!.action, entityType: events[0]!.entityType, count: events.length }, "audit");
 }
 

@@ -259,13 +259,20 @@ async function findOverlappingLots(tx: Executor, lots: ResolvedLot[]): Promise<M
   const models = `{${lots.map((l) => l.boardModelId).join(",")}}`;
   const froms = `{${lots.map((l) => l.serialFrom).join(",")}}`;
   const tos = `{${lots.map((l) => l.serialTo).join(",")}}`;
+  // Recorded lots never overlap each other, so the only candidate is the lot starting last at or
+  // before the new lot's end: one backward walk of the (board_model_id, serial_from) btree per lot.
   const res = await tx.execute<{ i: string; lot_code: string; serial_from: string; serial_to: string; prefix: string }>(sql`
-    select distinct on (x.i) x.i, p.lot_code, p.serial_from, p.serial_to, m.serial_prefix as prefix
+    select x.i, o.lot_code, o.serial_from, o.serial_to, m.serial_prefix as prefix
     from unnest(${models}::uuid[], ${froms}::bigint[], ${tos}::bigint[]) with ordinality as x(board_model_id, serial_from, serial_to, i)
-    join ${productionLots} p on p.board_model_id = x.board_model_id
-      and int8range(p.serial_from, p.serial_to, '[]') && int8range(x.serial_from, x.serial_to, '[]')
-    join ${boardModels} m on m.id = p.board_model_id
-    order by x.i, p.serial_from`);
+    cross join lateral (
+      select p.lot_code, p.serial_from, p.serial_to
+      from ${productionLots} p
+      where p.board_model_id = x.board_model_id and p.serial_from <= x.serial_to
+      order by p.serial_from desc
+      limit 1
+    ) o
+    join ${boardModels} m on m.id = x.board_model_id
+    where o.serial_to >= x.serial_from`);
   for (const r of res.rows) found.set(Number(r.i) - 1, { lotCode: r.lot_code, serialFrom: Number(r.serial_from), serialTo: Number(r.serial_to), prefix: r.prefix });
   return found;
 }

@@ -16,9 +16,16 @@ import { Badge } from "@/components/ui/badge";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 import { formatUtc } from "@/lib/time/format";
+import { CopyButton } from "@/components/ui/copy-button";
 
 function fmt(iso: string | null): string {
   return iso ? formatUtc(iso) : "—";
+}
+
+/** Whole days until an expiry, as people say it. */
+function daysLeft(iso: string): string {
+  const days = Math.floor((new Date(iso).getTime() - Date.now()) / 86_400_000);
+  return days >= 1 ? `in ${days} day${days === 1 ? "" : "s"}` : "within a day";
 }
 
 function tokenState(t: TokenView): { label: string; tone: "ok" | "neutral" | "fault" } {
@@ -62,9 +69,12 @@ export function TokenManager() {
       </p>
       {secret && (
         <Notice tone="ok" role="status" title="Copy this token now; it is not shown again">
-          <code className="break-all" data-testid="new-token-secret">
-            {secret}
-          </code>
+          <div className="flex flex-wrap items-center gap-2">
+            <code className="break-all rounded bg-white px-2 py-1 ring-1 ring-ink-200" data-testid="new-token-secret">
+              {secret}
+            </code>
+            <CopyButton text={secret} label="Copy token" />
+          </div>
         </Notice>
       )}
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="flex flex-wrap items-end gap-3" noValidate>
@@ -88,29 +98,34 @@ export function TokenManager() {
           <tr>
             <Th>Name</Th>
             <Th>Starts with</Th>
+            <Th>Created</Th>
             <Th>Expires</Th>
             <Th>Last used</Th>
             <Th>State</Th>
-            <Th />
+            <Th><span className="sr-only">Actions</span></Th>
           </tr>
         </thead>
         <tbody>
-          {tokens.isPending && <SkeletonRows rows={2} cols={6} />}
-          {tokens.isError && <ErrorRow colSpan={6} error={tokens.error} onRetry={() => void tokens.refetch()} />}
-          {tokens.data?.items.length === 0 && <EmptyRow colSpan={6}>No tokens yet.</EmptyRow>}
+          {tokens.isPending && <SkeletonRows rows={2} cols={7} />}
+          {tokens.isError && <ErrorRow colSpan={7} error={tokens.error} onRetry={() => void tokens.refetch()} />}
+          {tokens.data?.items.length === 0 && <EmptyRow colSpan={7}>No tokens yet.</EmptyRow>}
           {tokens.data?.items.map((t) => {
             const st = tokenState(t);
             return (
               <tr key={t.id}>
-                <Td>{t.name}</Td>
-                <Td><code>{t.tokenPrefix}…</code></Td>
-                <Td className="tabular-nums">{fmt(t.expiresAt)}</Td>
-                <Td className="tabular-nums">{fmt(t.lastUsedAt)}</Td>
+                <Td className="font-medium">{t.name}</Td>
+                <Td><code className="text-xs">{t.tokenPrefix}…</code></Td>
+                <Td className="whitespace-nowrap tabular-nums">{fmt(t.createdAt)}</Td>
+                <Td className="whitespace-nowrap tabular-nums">
+                  {fmt(t.expiresAt)}
+                  {st.label === "active" && <span className="block text-xs text-ink-600">{daysLeft(t.expiresAt)}</span>}
+                </Td>
+                <Td className="whitespace-nowrap tabular-nums">{t.lastUsedAt ? fmt(t.lastUsedAt) : "never"}</Td>
                 <Td><Badge tone={st.tone}>{st.label}</Badge></Td>
                 <Td>
                   {st.label === "active" && (
                     <Button
-                      variant="quiet"
+                      variant="secondary"
                       onClick={() => {
                         revoke.reset();
                         setRevoking(t);

@@ -25,14 +25,21 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
     mutationFn: (v: CreateUserBody) => apiCall(createUser, { body: v }),
     onError: (err) => showServerIssues(form, err),
     onSuccess: () => {
+      // Clears the fields and any message left from an earlier failed try.
       form.reset({ email: "", name: "", password: "", role: "viewer" });
+      form.clearErrors();
       void qc.invalidateQueries({ queryKey: operationKey(listUsers) });
     },
   });
   const update = useMutation({
     mutationFn: ({ id, ...patch }: UpdateUserBody & { id: string }) => apiCall(updateUser, { params: { id }, body: patch }),
+    onMutate: () => setDone(null),
+    onSuccess: ({ user }, patch) =>
+      setDone(patch.role ? `${user.name}'s role is now ${ROLE_LABELS[user.role]}.` : patch.disabled ? `${user.name}'s account is disabled; they are signed out and their tokens stop working.` : `${user.name}'s account is enabled again.`),
     onSettled: () => void qc.invalidateQueries({ queryKey: operationKey(listUsers) }),
   });
+  // What the last change did, said once it succeeded.
+  const [done, setDone] = useState<string | null>(null);
   const { errors } = form.formState;
   // A role change or a disable waits here until the admin confirms it in the dialog.
   const [pending, setPending] = useState<{ id: string; name: string; email: string; role?: { from: Role; to: Role }; disable?: true } | null>(null);
@@ -45,6 +52,7 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
     <div className="space-y-5">
       <Panel title="People">
         {update.error && !pending && <div className="mb-3"><ErrorNotice error={update.error} /></div>}
+        {done && <div className="mb-3"><Notice tone="ok" role="status">{done}</Notice></div>}
         <Table caption="Users">
           <thead>
             <tr>
@@ -83,9 +91,10 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
                 <Td>
                   {u.id !== currentUserId && (
                     <Button
-                      variant="quiet"
+                      variant={u.disabledAt ? "secondary" : "danger"}
                       onClick={() => {
                         update.reset();
+                        setDone(null);
                         if (u.disabledAt) update.mutate({ id: u.id, disabled: false });
                         else setPending({ id: u.id, name: u.name, email: u.email, disable: true });
                       }}
@@ -127,7 +136,7 @@ export function UserAdmin({ currentUserId }: { currentUserId: string }) {
         {update.error && <Notice tone="fault" role="alert">{update.error.message}</Notice>}
       </ConfirmDialog>
       <Panel title="Add a user">
-        <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid max-w-3xl gap-3 md:grid-cols-2" noValidate>
+        <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v), () => create.reset())(e)} className="grid max-w-3xl gap-3 md:grid-cols-2" noValidate>
           {create.error && <div className="md:col-span-2"><ErrorNotice error={create.error} besideFields={fieldsOf(form)} /></div>}
           {create.isSuccess && <div className="md:col-span-2"><Notice tone="ok" role="status">User created.</Notice></div>}
           <Field id="new-name" label="Name" error={errors.name?.message}>

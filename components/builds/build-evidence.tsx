@@ -2,9 +2,8 @@
 
 import { useState } from "react";
 import { apiCall } from "@/lib/api/client";
-import { recordWaiver, uploadEvidence, type BuildDetail, type UploadView, type WaiverBody } from "@/lib/api/operations/builds";
+import { recordWaiver, type BuildDetail, type UploadView, type WaiverBody } from "@/lib/api/operations/builds";
 import { can, type Role } from "@/lib/auth/roles";
-import { UPLOAD_LABELS } from "@/lib/release/upload-check";
 import { Button } from "@/components/ui/button";
 import { Field, Textarea } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -12,6 +11,7 @@ import { Panel } from "@/components/ui/panel";
 import { EmptyRow, Table, Td, Th } from "@/components/ui/table";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { SoundPlot } from "./sound-plot";
+import { EvidenceUpload } from "./evidence-upload";
 import { useBuildMutation } from "./use-build";
 
 const EVIDENCE_STAGES = ["draft", "review", "validation"];
@@ -39,9 +39,6 @@ function UploadRow({ label, upload }: { label: string; upload: UploadView | null
 export function BuildEvidence({ detail, role }: { detail: BuildDetail; role: Role }) {
   const { build, uploads, comparison } = detail;
   const [waiver, setWaiver] = useState("");
-  const upload = useBuildMutation(build.id, ({ kind, file }: { kind: "lab_report" | "measurements"; file: File }) =>
-    apiCall(uploadEvidence, { params: { id: build.id }, query: { kind, name: file.name }, raw: { data: file, contentType: "application/octet-stream" } }),
-  );
   const waive = useBuildMutation(build.id, (body: WaiverBody) => apiCall(recordWaiver, { params: { id: build.id }, body }));
   const mayAttach = can(role, "build:promote") && EVIDENCE_STAGES.includes(build.stage);
   const outside = comparison.state === "ok" ? comparison.rows.filter((r) => !r.withinTolerance).length : 0;
@@ -67,36 +64,9 @@ export function BuildEvidence({ detail, role }: { detail: BuildDetail; role: Rol
         </Table>
         {mayAttach && (
           <div className="mt-3 grid gap-3 border-t border-ink-200 pt-3 sm:grid-cols-2">
-            {(["lab_report", "measurements"] as const).map((kind) => {
-              // The refusal (with each bad row) is shown at the input it is about.
-              const failed = upload.variables?.kind === kind && upload.error ? upload.error : null;
-              const attached = upload.variables?.kind === kind && upload.isSuccess ? upload.variables.file.name : null;
-              return (
-                <Field key={kind} id={`evidence-${kind}`} label={UPLOAD_LABELS[kind]} hint={kind === "measurements" ? "Header: liquid_temp_c,pump_rpm,fan_rpm,sound_dba and optionally background_dba (per row, or once on the first row)" : "The signed lab report."}>
-                  <input
-                    id={`evidence-${kind}`}
-                    type="file"
-                    accept={kind === "lab_report" ? ".pdf,application/pdf" : ".csv,text/csv"}
-                    aria-describedby={failed ? `evidence-${kind}-refusal` : `evidence-${kind}-hint`}
-                    aria-invalid={failed ? true : undefined}
-                    className="block text-sm"
-                    disabled={upload.isPending}
-                    onChange={(e) => {
-                      const file = e.target.files?.[0];
-                      if (file) upload.mutate({ kind, file });
-                      e.target.value = "";
-                    }}
-                  />
-                  {failed && (
-                    <div id={`evidence-${kind}-refusal`} role="alert" className="text-xs text-signal-fault">
-                      <p className="font-medium">{failed.message}</p>
-                      {failed.issues && failed.issues.length > 0 && <ul className="list-disc pl-5">{failed.issues.map((i, n) => <li key={n}>{i.message}</li>)}</ul>}
-                    </div>
-                  )}
-                  {attached && <p role="status" className="text-xs text-signal-ok">Attached {attached}.</p>}
-                </Field>
-              );
-            })}
+            {(["lab_report", "measurements"] as const).map((kind) => (
+              <EvidenceUpload key={kind} buildId={build.id} kind={kind} />
+            ))}
           </div>
         )}
       </Panel>

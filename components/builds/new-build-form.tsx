@@ -5,7 +5,7 @@ import { useRouter } from "next/navigation";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery } from "@tanstack/react-query";
 import { useForm, useWatch } from "react-hook-form";
-import { apiCall, apiQuery } from "@/lib/api/client";
+import { apiCall, apiQuery, apiUploadJson } from "@/lib/api/client";
 import { AppError } from "@/lib/api/errors";
 import { createBuild, createBuildBody, getBuildOptions, uploadFirmware, type CreateBuildBody } from "@/lib/api/operations/builds";
 import { UPLOAD_MAX_BYTES } from "@/lib/release/upload-check";
@@ -14,6 +14,9 @@ import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 import { Panel } from "@/components/ui/panel";
+import { FilePicker } from "@/components/ui/file-picker";
+import { UploadProgressBar } from "@/components/ui/upload-progress";
+import { useUpload } from "@/components/ui/use-upload";
 import { BankFit } from "./bank-fit";
 import { bankBytesFromVersionImages } from "@/lib/release/bank-fit";
 
@@ -26,6 +29,7 @@ export function NewBuildForm() {
   const [slotCount, setSlotCount] = useState(2);
   const [file, setFile] = useState<File | null>(null);
   const [fileError, setFileError] = useState<string>();
+  const progress = useUpload();
   const form = useForm<FormValues>({ resolver: zodResolver(formSchema), defaultValues: { version: "", revisionRange: "", slots: [] } });
   const boardModelId = useWatch({ control: form.control, name: "boardModelId" });
   const chosenSlots = useWatch({ control: form.control, name: "slots" });
@@ -34,10 +38,16 @@ export function NewBuildForm() {
   const create = useMutation({
     mutationFn: async (values: FormValues) => {
       if (!file) throw new AppError("validation_failed", "Pick the firmware image file.");
-      const up = await apiCall(uploadFirmware, { query: { name: file.name }, raw: { data: file, contentType: "application/octet-stream" } });
+      const up = await progress.run(file.name, ({ signal, onProgress }) =>
+        apiUploadJson(uploadFirmware, { query: { name: file.name }, raw: { data: file, contentType: "application/octet-stream" } }, { signal, onProgress }),
+      );
+      // Cancelled: no build is created (the stored file is only ever used by a build that names it).
+      if (!up) return null;
       return apiCall(createBuild, { body: { ...values, firmwareUploadId: up.upload.id } });
     },
-    onSuccess: (r) => router.push(`/builds/${r.build.id}`),
+    onSuccess: (r) => {
+      if (r) router.push(`/builds/${r.build.id}`);
+    },
     onError: (err) => showServerIssues(form, err),
   });
   const { errors } = form.formState;
@@ -111,16 +121,21 @@ export function NewBuildForm() {
           <BankFit bankBytes={bankBytes} slots={chosen.length} revisionRange={revisionRange} revisions={options.data.revisions} />
         )}
         <Field id="firmware" label="Firmware image" hint={`.bin (raw bytes) or Intel HEX .hex, at most ${UPLOAD_MAX_BYTES.firmware / 1024 / 1024} MiB`} error={fileError}>
-          <input
+          <FilePicker
             id="firmware"
-            type="file"
             accept=".bin,.hex,application/octet-stream"
-            aria-invalid={fileError ? true : undefined}
-            aria-describedby={fileError ? "firmware-error" : "firmware-hint"}
-            className="block text-sm"
-            onChange={(e) => setFile(e.target.files?.[0] ?? null)}
+            file={file}
+            disabled={create.isPending}
+            invalid={Boolean(fileError)}
+            describedBy={fileError ? "firmware-error" : "firmware-hint"}
+            onFile={(f) => {
+              setFile(f);
+              setFileError(undefined);
+              progress.reset();
+            }}
           />
         </Field>
+        <UploadProgressBar state={progress.state} onCancel={progress.cancel} cancelledNote="Cancelled; no build was created." />
         <ErrorNotice error={create.error} besideFields={fieldsOf(form)} />
         <div>
           <Button type="submit" disabled={create.isPending}>{create.isPending ? "Creating…" : "Create build"}</Button>

@@ -2,10 +2,14 @@
 
 import { useMutation } from "@tanstack/react-query";
 import { useId, useState } from "react";
-import { apiCall } from "@/lib/api/client";
+import { apiUploadJson } from "@/lib/api/client";
 import { identifyDump } from "@/lib/api/operations/support";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { FilePicker } from "@/components/ui/file-picker";
+import { UploadProgressBar } from "@/components/ui/upload-progress";
+import { useUpload } from "@/components/ui/use-upload";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { Table, Td, Th } from "@/components/ui/table";
@@ -17,36 +21,40 @@ const MATCH_TONE = { exact: "ok", altered: "fault", unknown: "neutral", undecoda
 export function DumpIdentify() {
   const id = useId();
   const [file, setFile] = useState<File | null>(null);
+  const progress = useUpload();
   const identify = useMutation({
     mutationFn: (f: File) => {
       const fd = new FormData();
       fd.set("file", f);
-      return apiCall(identifyDump, { raw: { data: fd } });
+      return progress.run(f.name, ({ signal, onProgress }) => apiUploadJson(identifyDump, { raw: { data: fd } }, { signal, onProgress }));
     },
   });
   const r = identify.data;
   return (
     <Panel title="Identify a memory dump">
       <form
-        className="flex flex-wrap items-end gap-3"
+        className="space-y-3"
         onSubmit={(e) => {
           e.preventDefault();
           if (file) identify.mutate(file);
         }}
       >
-        <div>
-          <label htmlFor={`${id}-file`} className="block text-sm font-medium text-ink-800">Dump file (.bin or .hex)</label>
-          <input
+        <Field id={`${id}-file`} label="Dump file (.bin or .hex)" hint="Read back from a returned board; at most 256 KiB.">
+          <FilePicker
             id={`${id}-file`}
-            type="file"
             accept=".bin,.hex,.ihex,application/octet-stream,text/plain"
-            className="mt-1 block text-sm"
-            onChange={(e) => setFile(e.target.files?.[0] ?? null)}
-            aria-describedby={`${id}-hint`}
+            file={file}
+            disabled={progress.busy}
+            describedBy={`${id}-file-hint`}
+            onFile={(f) => {
+              setFile(f);
+              identify.reset();
+              progress.reset();
+            }}
           />
-          <p id={`${id}-hint`} className="mt-1 text-xs text-ink-600">Read back from a returned board; at most 256 KiB.</p>
-        </div>
-        <Button type="submit" disabled={!file || identify.isPending}>{identify.isPending ? "Reading…" : "Identify"}</Button>
+        </Field>
+        <Button type="submit" disabled={!file || progress.busy}>{progress.busy ? "Reading…" : "Identify"}</Button>
+        <UploadProgressBar state={progress.state} onCancel={progress.cancel} cancelledNote="Cancelled; nothing was identified." />
       </form>
       {identify.error && <div className="mt-3"><ErrorNotice error={identify.error} /></div>}
       {r && (

@@ -1,72 +1,133 @@
 "use client";
 
-import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useQueryClient } from "@tanstack/react-query";
 import { useId, useState } from "react";
-import { apiCall, operationKey } from "@/lib/api/client";
-import { importLots, listLots } from "@/lib/api/operations/support";
+import { apiUpload, operationKey } from "@/lib/api/client";
+import { AppError } from "@/lib/api/errors";
+import { importLotsWithProgress, listLots, MAX_LOTS_CSV_BYTES, type ImportResult } from "@/lib/api/operations/support";
 import { LOT_CSV_COLUMNS } from "@/lib/lots/input";
+import { IMPORT_PROGRESS_TYPE, importEventsIn, importPercent } from "@/lib/lots/import-events";
+import { formatBytes } from "@/lib/units/bytes";
 import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { FilePicker } from "@/components/ui/file-picker";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { Table, Td, Th } from "@/components/ui/table";
 import { ErrorNotice } from "@/components/ui/error-notice";
+import { UploadProgressBar } from "@/components/ui/upload-progress";
+import { useUpload } from "@/components/ui/use-upload";
 
-/** CSV import in two steps: a preview that checks every row, then one all-or-nothing commit. */
+/** Rows of problems listed on screen; a file with more says how many were left out. */
+const SHOWN_ISSUES = 200;
+
+/**
+ * CSV import in two steps: a preview that checks every row, then one all-or-nothing commit.
+ * Files of up to 100,000 lots: the file is sent as it is, with a progress bar while it goes
+ * out and while the server checks and writes the rows; Cancel stops it and records nothing.
+ */
 export function LotImport() {
   const id = useId();
   const qc = useQueryClient();
-  const [text, setText] = useState<string | null>(null);
-  const [fileName, setFileName] = useState("");
-  const run = useMutation({
-    mutationFn: ({ dryRun }: { dryRun: boolean }) =>
-      apiCall(importLots, { query: { dryRun: dryRun ? "true" : "false" }, raw: { data: text ?? "", contentType: "text/csv" } }),
-    onSuccess: (r) => {
+  const [file, setFile] = useState<File | null>(null);
+  const [result, setResult] = useState<ImportResult | null>(null);
+  const [error, setError] = useState<AppError | null>(null);
+  const upload = useUpload();
+
+  async function run(dryRun: boolean) {
+    if (!file) return;
+    setError(null);
+    setResult(null);
+    try {
+      const r = await upload.run(file.name, async ({ signal, onProgress, processing }) => {
+        // Filled from the streamed lines; XHR's progress callbacks cannot reject the call themselves.
+        const outcome: { result?: ImportResult; error?: AppError } = {};
+        let seen = 0;
+        await apiUpload(
+          importLotsWithProgress,
+          { query: { dryRun: dryRun ? "true" : "false" }, raw: { data: file, contentType: "text/csv" } },
+          {
+            accept: IMPORT_PROGRESS_TYPE,
+            signal,
+            onProgress,
+            onText: (text) => {
+              const events = importEventsIn(text);
+              for (const e of events.slice(seen)) {
+                if (e.type === "progress") {
+                  const what = e.phase === "parsing" ? "Reading the file" : e.phase === "checking" ? "Checking rows" : "Recording lots";
+                  processing(e.total > 0 ? `${what}: ${e.done.toLocaleString("en")} of ${e.total.toLocaleString("en")}` : what, importPercent(e, dryRun));
+                } else if (e.type === "result") {
+                  outcome.result = e.result;
+                } else {
+                  outcome.error = new AppError(e.body.error.code, e.body.error.message, { issues: e.body.error.issues });
+                }
+              }
+              seen = events.length;
+            },
+          },
+        );
+        if (outcome.error) throw outcome.error;
+        if (!outcome.result) throw new AppError("internal", "The import ended without a result; nothing is known to be recorded. Preview again.");
+        return outcome.result;
+      });
+      if (!r) return;
+      setResult(r);
       if (!r.dryRun && r.committed > 0) void qc.invalidateQueries({ queryKey: operationKey(listLots) });
-    },
-  });
-  const r = run.data;
+    } catch (err) {
+      setError(err instanceof AppError ? err : new AppError("internal", "The import failed; nothing was recorded."));
+    }
+  }
+
+  const tooLarge = file !== null && file.size > MAX_LOTS_CSV_BYTES;
+  const r = result;
   return (
     <Panel title="Import lots from CSV">
       <p className="mb-3 text-sm text-ink-700">
         Columns: <code className="text-xs">{LOT_CSV_COLUMNS.map(([c]) => c).join(",")}</code>. Preview checks every row; Import records all rows in one go, or none if any row is wrong.
       </p>
-      <div className="flex flex-wrap items-end gap-3">
-        <div>
-          <label htmlFor={`${id}-csv`} className="block text-sm font-medium text-ink-800">CSV file</label>
-          <input
+      <div className="space-y-3">
+        <Field id={`${id}-csv`} label="CSV file" hint={`Up to 100,000 lots, at most ${formatBytes(MAX_LOTS_CSV_BYTES)}.`} error={tooLarge ? `The file is ${formatBytes(file.size)}; at most ${formatBytes(MAX_LOTS_CSV_BYTES)} is accepted. Split it.` : undefined}>
+          <FilePicker
             id={`${id}-csv`}
-            type="file"
             accept=".csv,text/csv"
-            className="mt-1 block text-sm"
-            onChange={async (e) => {
-              const f = e.target.files?.[0];
-              run.reset();
-              setFileName(f?.name ?? "");
-              setText(f ? await f.text() : null);
+            file={file}
+            disabled={upload.busy}
+            invalid={tooLarge}
+            describedBy={tooLarge ? `${id}-csv-error` : `${id}-csv-hint`}
+            onFile={(f) => {
+              setFile(f);
+              setResult(null);
+              setError(null);
+              upload.reset();
             }}
           />
+        </Field>
+        <div className="flex flex-wrap gap-3">
+          <Button variant="secondary" disabled={!file || tooLarge || upload.busy} onClick={() => void run(true)}>Preview</Button>
+          <Button disabled={!file || tooLarge || upload.busy || !r?.dryRun || r.issues.length > 0} onClick={() => void run(false)}>Import</Button>
         </div>
-        <Button variant="secondary" disabled={text === null || run.isPending} onClick={() => run.mutate({ dryRun: true })}>Preview</Button>
-        <Button disabled={text === null || run.isPending || !r?.dryRun || r.issues.length > 0} onClick={() => run.mutate({ dryRun: false })}>Import</Button>
+        <UploadProgressBar state={upload.state} onCancel={upload.cancel} />
       </div>
-      {run.error && <div className="mt-3"><ErrorNotice error={run.error} /></div>}
+      {error && <div className="mt-3"><ErrorNotice error={error} /></div>}
       {r && r.issues.length > 0 && (
         <div className="mt-3 space-y-2">
-          <Notice tone="fault" role="alert" title={`${fileName || "The file"}: ${r.issues.length} problem(s); nothing was imported`}>Fix these rows and preview again.</Notice>
+          <Notice tone="fault" role="alert" title={`${file?.name ?? "The file"}: ${r.issues.length.toLocaleString("en")} problem(s); nothing was imported`}>
+            Fix these rows and preview again.{r.issues.length > SHOWN_ISSUES && ` The first ${SHOWN_ISSUES} are listed.`}
+          </Notice>
           <Table caption="Problems by row">
             <thead>
               <tr><Th>Row</Th><Th>Column</Th><Th>Problem</Th></tr>
             </thead>
             <tbody>
-              {r.issues.map((i, n) => (
+              {r.issues.slice(0, SHOWN_ISSUES).map((i, n) => (
                 <tr key={n}><Td className="tabular-nums">{i.row}</Td><Td><code className="text-xs">{i.column || "—"}</code></Td><Td>{i.message}</Td></tr>
               ))}
             </tbody>
           </Table>
         </div>
       )}
-      {r && r.issues.length === 0 && r.dryRun && <div className="mt-3"><Notice tone="ok" role="status">All {r.checked} row(s) are valid. Nothing is recorded until you press Import.</Notice></div>}
-      {r && r.issues.length === 0 && !r.dryRun && <div className="mt-3"><Notice tone="ok" role="status">Imported {r.committed} lot(s).</Notice></div>}
+      {r && r.issues.length === 0 && r.dryRun && <div className="mt-3"><Notice tone="ok" role="status">All {r.checked.toLocaleString("en")} row(s) are valid. Nothing is recorded until you press Import.</Notice></div>}
+      {r && r.issues.length === 0 && !r.dryRun && <div className="mt-3"><Notice tone="ok" role="status">Imported {r.committed.toLocaleString("en")} lot(s).</Notice></div>}
     </Panel>
   );
 }

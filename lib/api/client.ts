@@ -65,15 +65,20 @@ async function send(url: string, init: RequestInit): Promise<Response> {
 }
 
 async function failure(res: Response): Promise<AppError> {
+  return errorFromText(res.status, await res.text());
+}
+
+/** The AppError of a failed answer: the server's own error body, or one made from the status. */
+function errorFromText(status: number, text: string): AppError {
   let body: unknown;
   try {
-    body = JSON.parse(await res.text());
+    body = JSON.parse(text);
   } catch {
     body = undefined;
   }
   if (isErrorBody(body)) return new AppError(body.error.code, body.error.message, { issues: body.error.issues });
-  const code: ErrorCode = res.status === 503 ? "unavailable" : res.status === 401 ? "unauthorized" : res.status === 403 ? "forbidden" : res.status === 404 ? "not_found" : "internal";
-  return new AppError(code, `The server answered ${res.status}.`);
+  const code: ErrorCode = status === 503 ? "unavailable" : status === 401 ? "unauthorized" : status === 403 ? "forbidden" : status === 404 ? "not_found" : "internal";
+  return new AppError(code, `The server answered ${status}.`);
 }
 
 /**
@@ -128,4 +133,55 @@ export function queryFromUrl<S extends z.ZodType>(schema: S, raw: Record<string,
     for (const issue of r.error.issues) delete entries[String(issue.path[0])];
   }
   return schema.parse({});
+}
+
+/** How far an upload has got: bytes sent of the total (the browser's own count). */
+export interface UploadProgress {
+  sentBytes: number;
+  totalBytes: number;
+}
+
+/**
+ * `apiCall` for file bodies, over XMLHttpRequest because fetch cannot report upload progress:
+ * `onProgress` hears as the bytes go out, `onText` gets the answer's text as it arrives (for
+ * answers streamed line by line), and aborting `signal` cancels the request. Errors are the
+ * same AppError as `apiCall` throws; a cancel rejects with an AbortError DOMException.
+ */
+export function apiUpload<O extends AnyOperation>(
+  op: O,
+  input: CallInput<O>,
+  { onProgress, onText, signal, accept = "application/json" }: { onProgress?: (p: UploadProgress) => void; onText?: (textSoFar: string) => void; signal?: AbortSignal; accept?: string } = {},
+): Promise<{ status: number; text: string }> {
+  const { params, query, raw } = input as { params?: unknown; query?: unknown; raw?: { data: XMLHttpRequestBodyInit; contentType?: string } };
+  return new Promise((resolve, reject) => {
+    if (signal?.aborted) return reject(new DOMException("The upload was cancelled.", "AbortError"));
+    const xhr = new XMLHttpRequest();
+    xhr.open(op.method, operationUrl(op, { params, query }));
+    xhr.setRequestHeader("accept", accept);
+    if (raw?.contentType) xhr.setRequestHeader("content-type", raw.contentType);
+    xhr.upload.onprogress = (e) => onProgress?.({ sentBytes: e.loaded, totalBytes: e.lengthComputable ? e.total : 0 });
+    xhr.onprogress = () => onText?.(xhr.responseText);
+    const onAbort = () => xhr.abort();
+    signal?.addEventListener("abort", onAbort, { once: true });
+    xhr.onabort = () => reject(new DOMException("The upload was cancelled.", "AbortError"));
+    xhr.onerror = () => reject(new AppError("unavailable", "Could not reach the Loopkeeper server. Check your connection and try again."));
+    xhr.onload = () => {
+      signal?.removeEventListener("abort", onAbort);
+      onText?.(xhr.responseText);
+      if (xhr.status >= 200 && xhr.status < 300) resolve({ status: xhr.status, text: xhr.responseText });
+      else reject(errorFromText(xhr.status, xhr.responseText));
+    };
+    xhr.send(raw?.data ?? null);
+  });
+}
+
+/** `apiUpload` for a JSON answer, typed by the operation. */
+export async function apiUploadJson<O extends AnyOperation>(op: O, input: CallInput<O>, options: { onProgress?: (p: UploadProgress) => void; signal?: AbortSignal } = {}): Promise<CallResult<O>> {
+  const { text } = await apiUpload(op, input, options);
+  try {
+    // The server built this body from the operation's response schema (the handler's type says so).
+    return JSON.parse(text) as CallResult<O>;
+  } catch {
+    throw new AppError("internal", "The server's answer was not JSON.");
+  }
 }

@@ -84,7 +84,8 @@ export const getLotOptions = defineOperation({
   response: lotOptionsView,
 });
 
-export const MAX_LOTS_CSV_BYTES = 1024 * 1024;
+/** Largest lots CSV: 100,000 lots of about 80 bytes a row, with room for longer codes and lines. */
+export const MAX_LOTS_CSV_BYTES = 16 * 1024 * 1024;
 
 export const importQuery = z.strictObject({ dryRun: z.enum(["true", "false"]).default("true") });
 
@@ -106,6 +107,21 @@ export const importLots = defineOperation({
   query: importQuery,
   rawBody: { contentTypes: ["text/csv", "text/plain"], maxBytes: MAX_LOTS_CSV_BYTES },
   response: importResult,
+});
+
+export const importLotsWithProgress = defineOperation({
+  id: "importLotsWithProgress",
+  method: "POST",
+  path: "/api/v1/lots/import/progress",
+  summary: "Import lots from CSV as importLots does, answering with its progress: one JSON line per batch of rows checked or written, then the result (or the error) as the last line",
+  tag: "Support",
+  access: "lot:write",
+  query: importQuery,
+  rawBody: { contentTypes: ["text/csv", "text/plain"], maxBytes: MAX_LOTS_CSV_BYTES },
+  response: fileResponse(
+    ["application/x-ndjson"],
+    'Lines of JSON: {"type":"progress","phase":"parsing"|"checking"|"writing","done":n,"total":n}, then {"type":"result","result":<importLots answer>} or {"type":"error","status":n,"body":<error body>}. Closing the connection cancels the import; nothing is recorded then.',
+  ),
 });
 
 export const lookupQuery = z.strictObject({ serial: z.string().max(64, "A serial is at most 17 characters.") });

@@ -13,6 +13,7 @@ export const supportRows: AccessRow[] = [
   { file: "app/api/v1/lots/options/route.ts", kind: "api", method: "GET", url: "/api/v1/lots/options", allowed: "all" },
   // A JSON body is the wrong media type for the CSV import: allowed roles get 415, nothing is written.
   { file: "app/api/v1/lots/import/route.ts", kind: "api", method: "POST", url: "/api/v1/lots/import?dryRun=true", body: {}, allowed: LOT_WRITE, ok: 415 },
+  { file: "app/api/v1/lots/import/progress/route.ts", kind: "api", method: "POST", url: "/api/v1/lots/import/progress?dryRun=true", body: {}, allowed: LOT_WRITE, ok: 415 },
   { file: "app/api/v1/lookup/route.ts", kind: "api", method: "GET", url: "/api/v1/lookup?serial=not-a-serial", allowed: SUPPORT, ok: 400 },
   { file: "app/api/v1/lookup/recent/route.ts", kind: "api", method: "GET", url: "/api/v1/lookup/recent", allowed: SUPPORT },
   { file: "app/api/v1/dumps/identify/route.ts", kind: "api", method: "POST", url: "/api/v1/dumps/identify", body: {}, allowed: SUPPORT, ok: 415 },

@@ -864,6 +864,26 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/v1/lots/import/progress": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Import lots from CSV as importLots does, answering with its progress: one JSON line per batch of rows checked or written, then the result (or the error) as the last line
+         * @description Roles: admin, release_manager.
+         */
+        post: operations["importLotsWithProgress"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/v1/lookup": {
         parameters: {
             query?: never;
@@ -4096,6 +4116,51 @@ export interface operations {
                             message: string;
                         }[];
                     };
+                };
+            };
+            /** @description Error */
+            default: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        error: {
+                            code: string;
+                            message: string;
+                            issues?: {
+                                path?: string;
+                                message?: string;
+                            }[];
+                        };
+                    };
+                };
+            };
+        };
+    };
+    importLotsWithProgress: {
+        parameters: {
+            query?: {
+                dryRun?: "true" | "false";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "text/csv": string;
+                "text/plain": string;
+            };
+        };
+        responses: {
+            /** @description Lines of JSON: {"type":"progress","phase":"parsing"|"checking"|"writing","done":n,"total":n}, then {"type":"result","result":<importLots answer>} or {"type":"error","status":n,"body":<error body>}. Closing the connection cancels the import; nothing is recorded then. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/x-ndjson": string;
                 };
             };
             /** @description Error */
