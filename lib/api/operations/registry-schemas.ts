@@ -95,9 +95,8 @@ export const boardRevisionBody = z.strictObject({
 });
 export type BoardRevisionBody = z.infer<typeof boardRevisionBody>;
 
-export const boardRevisionView = z.object({
-  id: z.string(),
-  boardModelId: z.string(),
+/** A board revision's limits as the engine reads them. */
+export const revisionFieldsView = z.object({
   revision: z.string(),
   memoryBytes: z.number(),
   baseAddress: z.number(),
@@ -105,8 +104,9 @@ export const boardRevisionView = z.object({
   maxPointsPerCurve: z.number(),
   pwmFrequencyHz: z.number(),
   tachPulsesPerRev: z.number(),
-  notes: z.string(),
-});
+}) satisfies z.ZodType<RevisionFields>;
+
+export const boardRevisionView = revisionFieldsView.extend({ id: z.string(), boardModelId: z.string(), notes: z.string() });
 export type BoardRevisionView = z.infer<typeof boardRevisionView>;
 
 export const boardModelView = z.object({
@@ -140,12 +140,3 @@ export const pageOf = <T extends z.ZodType>(item: T) => z.object({ items: z.arra
 
 export const coolerFieldsView = z.object({ name: z.string(), fanCount: z.number(), radiatorKPerWAtMinFan: z.number(), radiatorKPerWAtMaxFan: z.number() }) satisfies z.ZodType<CoolerFields>;
 
-export const revisionFieldsView = z.object({
-  revision: z.string(),
-  memoryBytes: z.number(),
-  baseAddress: z.number(),
-  slotCount: z.number(),
-  maxPointsPerCurve: z.number(),
-  pwmFrequencyHz: z.number(),
-  tachPulsesPerRev: z.number(),
-}) satisfies z.ZodType<RevisionFields>;

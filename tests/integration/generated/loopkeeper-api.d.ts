@@ -2238,8 +2238,6 @@ export interface operations {
                             serialPrefix: string;
                             description: string;
                             revisions: {
-                                id: string;
-                                boardModelId: string;
                                 revision: string;
                                 memoryBytes: number;
                                 baseAddress: number;
@@ -2247,6 +2245,8 @@ export interface operations {
                                 maxPointsPerCurve: number;
                                 pwmFrequencyHz: number;
                                 tachPulsesPerRev: number;
+                                id: string;
+                                boardModelId: string;
                                 notes: string;
                             }[];
                         }[];
@@ -2303,8 +2303,6 @@ export interface operations {
                             serialPrefix: string;
                             description: string;
                             revisions: {
-                                id: string;
-                                boardModelId: string;
                                 revision: string;
                                 memoryBytes: number;
                                 baseAddress: number;
@@ -2312,6 +2310,8 @@ export interface operations {
                                 maxPointsPerCurve: number;
                                 pwmFrequencyHz: number;
                                 tachPulsesPerRev: number;
+                                id: string;
+                                boardModelId: string;
                                 notes: string;
                             }[];
                         };
@@ -2370,8 +2370,6 @@ export interface operations {
                             serialPrefix: string;
                             description: string;
                             revisions: {
-                                id: string;
-                                boardModelId: string;
                                 revision: string;
                                 memoryBytes: number;
                                 baseAddress: number;
@@ -2379,6 +2377,8 @@ export interface operations {
                                 maxPointsPerCurve: number;
                                 pwmFrequencyHz: number;
                                 tachPulsesPerRev: number;
+                                id: string;
+                                boardModelId: string;
                                 notes: string;
                             }[];
                         };
@@ -2437,8 +2437,6 @@ export interface operations {
                 content: {
                     "application/json": {
                         revision: {
-                            id: string;
-                            boardModelId: string;
                             revision: string;
                             memoryBytes: number;
                             baseAddress: number;
@@ -2446,6 +2444,8 @@ export interface operations {
                             maxPointsPerCurve: number;
                             pwmFrequencyHz: number;
                             tachPulsesPerRev: number;
+                            id: string;
+                            boardModelId: string;
                             notes: string;
                         };
                     };
@@ -2537,8 +2537,6 @@ export interface operations {
                 content: {
                     "application/json": {
                         revision: {
-                            id: string;
-                            boardModelId: string;
                             revision: string;
                             memoryBytes: number;
                             baseAddress: number;
@@ -2546,6 +2544,8 @@ export interface operations {
                             maxPointsPerCurve: number;
                             pwmFrequencyHz: number;
                             tachPulsesPerRev: number;
+                            id: string;
+                            boardModelId: string;
                             notes: string;
                         };
                         boardModelName: string;
@@ -2627,8 +2627,6 @@ export interface operations {
                 content: {
                     "application/json": {
                         revision: {
-                            id: string;
-                            boardModelId: string;
                             revision: string;
                             memoryBytes: number;
                             baseAddress: number;
@@ -2636,6 +2634,8 @@ export interface operations {
                             maxPointsPerCurve: number;
                             pwmFrequencyHz: number;
                             tachPulsesPerRev: number;
+                            id: string;
+                            boardModelId: string;
                             notes: string;
                         };
                     };
