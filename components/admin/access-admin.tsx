@@ -3,6 +3,7 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
+import { formatUtc } from "@/lib/time/format";
 import { clearSignInThrottle, listEveryonesTokens, listSignInThrottle, revokeAnyToken, type OwnedTokenView } from "@/lib/api/operations/admin";
 import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
@@ -11,9 +12,9 @@ import { Panel } from "@/components/ui/panel";
 import { Badge } from "@/components/ui/badge";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 
-/** An instant as minutes in UTC, said so. */
+/** An instant as minutes in UTC, said so; a dash when there is none. */
 function utc(iso: string | null): string {
-  return iso ? `${iso.slice(0, 16).replace("T", " ")} UTC` : "—";
+  return iso ? formatUtc(iso) : "—";
 }
 
 function waitText(sec: number): string {
