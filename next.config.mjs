@@ -14,6 +14,9 @@ const securityHeaders = [
 const nextConfig = {
   distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,
+  // Browser source maps only when asked (the editor benchmark's profile reads them back to the
+  // sources); a normal build does not publish the sources.
+  productionBrowserSourceMaps: process.env.LOOPKEEPER_BROWSER_SOURCEMAPS === "1",
   reactStrictMode: true,
   serverExternalPackages: ["pino", "pg", "bcryptjs", "nodemailer", "smtp-server", "@aws-sdk/client-s3"],
   experimental: { authInterrupts: true },
