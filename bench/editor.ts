@@ -25,7 +25,7 @@ const PLOT_FREE_BUDGET_KIB = 180;
 interface Doc {
   name: string;
   pump: { points: { tempC: number; dutyPct: number }[] };
-  fans: { points: { tempC: number; dutyPct: number }[] };
+  fans: { points: { tempC: number; dutyPct: number }[]; rampDownPctPerSec: number };
 }
 
 const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)]!;
@@ -113,9 +113,14 @@ async function main() {
 
     // One typing step: a programmatic edit of the Monaco model (fan point 9's duty), timed in the
     // page to the editor's "markers and plots committed" measure.
-    const typeEdit = async (i: number) => {
+    const typeEdit = async (i: number, wholeDocument = false) => {
       const next = structuredClone(doc);
       next.fans.points[8]!.dutyPct += i % 2 === 0 ? 0.5 : 0;
+      if (wholeDocument) {
+        // The name (near the top) and the fans' ramp-down rate (the last value) change too: the edit spans the document.
+        next.name = i % 2 === 0 ? `${doc.name}*` : doc.name;
+        next.fans.rampDownPctPerSec += i % 2 === 0 ? 1 : 0;
+      }
       const text = `${JSON.stringify(next, null, 2)}\n`;
       // A string, not a function: the bundler's helper names do not exist in the page.
       return page.evaluate<number>(`(async (t) => {
@@ -140,6 +145,12 @@ async function main() {
     }
     const typing = summary(samples);
     if (typing.n === 0) throw new Error("the typing case collected no samples");
+    const wholeSamples: number[] = [];
+    for (let i = 0; i < WARMUP + EDITS; i++) {
+      const ms = await typeEdit(i, true);
+      if (i >= WARMUP) wholeSamples.push(ms);
+    }
+    const whole = summary(wholeSamples);
 
     // Where the typing time goes: the same steps again (not counted above) under the CDP
     // sampling profiler, with the renderer's own script, style and layout time around them.
@@ -249,13 +260,15 @@ async function main() {
       "",
       "All three cases come from the same run on the same page, so they compare with each other; figures from other runs on this shared machine (2 cores, up to 8 people building and testing at once) do not compare well.",
       "",
-      "- **Typing**: from just before a programmatic edit of the Monaco model (one fan point's duty) to the editor's `lk-edit-to-update` measure, taken in the effect that runs after the engine's validation, the Monaco markers and the plot are committed.",
+      "- **Typing**: from just before a programmatic edit of the Monaco model (one fan point's duty; `setText` with the whole new text, of which the editor replaces the span that differs) to the editor's `lk-edit-to-update` measure, taken in the effect that runs after the engine's validation, the Monaco markers and the plot are committed.",
+      "- **Whole-document edit**: the same, but the name at the top and the last value of the document change too, so the edit spans the whole text (a paste or an import).",
       `- **Drag step**: the mouse holds fan point 9 on the plot and moves ${DRAG_PX} px (several 0.5 % steps) up and back, one move per step; from the pointer event's timestamp to \`lk-drag-to-update\` (text edit through Monaco, validation, markers and plot committed). ${dragMoves} moves, ${unchanged} of which wrote nothing and were not timed.`,
       "- **Key step**: the same handle focused, ArrowUp/ArrowDown (0.5 % a press, one undo step each); from the key handler to the same measure.",
       "",
       "| case | samples | median ms | p95 ms | min ms | max ms | target (16 ms frame) |",
       "|---|---:|---:|---:|---:|---:|---|",
       row("typing", typing),
+      row("whole-document edit", whole),
       row("drag step", dragging),
       row("key step", keys),
       "",
