@@ -94,7 +94,9 @@ class Resolver {
     const file = path.join(this.root, this.distDir, "static", decodeURIComponent(url.slice(at + "/_next/static/".length).split("?")[0]!));
     if (this.maps.has(file)) return this.maps.get(file)!;
     let map: TraceMap | null = null;
-    const mapFile = `${file}.map`;
+    // The chunk names its map on its last line (the map's file name need not be the chunk's).
+    const named = existsSync(file) ? /\/\/# sourceMappingURL=(\S+)\s*$/.exec(readFileSync(file, "utf8"))?.[1] : undefined;
+    const mapFile = named && !named.startsWith("data:") ? path.join(path.dirname(file), decodeURIComponent(named)) : `${file}.map`;
     if (existsSync(mapFile)) {
       map = new AnyMap(readFileSync(mapFile, "utf8"));
       this.mapped = true;

@@ -19,7 +19,7 @@ const WARMUP = 5;
 const PROFILED_EDITS = 30;
 const PROFILE_SAMPLING_US = 100;
 /** How far each drag move goes on the plot, px: several 0.5 % duty steps of fan point 9. */
-const DRAG_PX = 6;
+const DRAG_PX = 4;
 const PLOT_FREE_BUDGET_KIB = 180;
 
 interface Doc {
@@ -159,7 +159,7 @@ async function main() {
     await cdp.send("Profiler.enable");
     await cdp.send("Profiler.setSamplingInterval", { interval: PROFILE_SAMPLING_US });
     const metricsOf = async () => {
-      const { metrics } = (await cdp.send("Performance.getMetrics")) as { metrics: { name: string; value: number }[] };
+      const { metrics } = await cdp.send("Performance.getMetrics");
       return new Map(metrics.map((m) => [m.name, m.value]));
     };
     const metricsBefore = await metricsOf();
@@ -194,9 +194,11 @@ async function main() {
 
     // Drag: fan point 9 (40 °C, 72 % between 68 % and 76 %) held and moved between its own spot and
     // DRAG_PX above it, measured from the pointer event's own timestamp. DRAG_PX is several 0.5 % steps on
-    // this plot (about 0.7 % a pixel for this fan), so every move writes an edit; a move that wrote
-    // nothing is counted and reported, never timed.
+    // this plot (about 0.5–0.7 % a pixel for this fan), so every move writes an edit; a move that wrote
+    // nothing is counted and reported, never timed. The press must land on the handle itself (checked:
+    // it takes the focus), not on a mark drawn over it.
     const handle = page.getByRole("slider", { name: "fan point 9", exact: true });
+    await handle.scrollIntoViewIfNeeded();
     const box = await handle.boundingBox();
     if (!box) throw new Error("fan point 9 handle not on screen");
     const cx = box.x + box.width / 2;
@@ -205,7 +207,10 @@ async function main() {
     await page.mouse.move(cx, cy);
     await page.mouse.down();
     const grabbed = await page.evaluate<string | null>(`document.activeElement && document.activeElement.getAttribute("aria-label")`);
-    if (grabbed !== "fan point 9") throw new Error(`the drag grabbed "${grabbed ?? "nothing"}" instead of fan point 9`);
+    if (grabbed !== "fan point 9") {
+      const under = await page.evaluate<string>(`(() => { const e = document.elementFromPoint(${cx}, ${cy}); return e ? e.outerHTML.slice(0, 300) : "nothing"; })()`);
+      throw new Error(`the drag grabbed "${grabbed ?? "nothing"}" instead of fan point 9; at (${cx.toFixed(0)}, ${cy.toFixed(0)}) is ${under}`);
+    }
     const dragSamples: number[] = [];
     let unchanged = 0;
     let dragMoves = 0;

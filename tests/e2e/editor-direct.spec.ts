@@ -76,6 +76,21 @@ test.describe("direct editing of curves on the plot, as an engineer", () => {
     await expect(page.getByRole("slider", { name: "fan point 2" })).toHaveAttribute("aria-valuenow", String(duty0));
   });
 
+  test("every point takes a press at its very centre: no mark drawn over the plot covers a handle", async ({ page }) => {
+    await openFreshProfile(page);
+    await page.getByTestId("curve-chart").scrollIntoViewIfNeeded();
+    // What the browser hits at each point handle's centre (fractional pixels, as a pointer reports them).
+    const hits = await page.getByTestId("curve-chart").evaluate((figure) =>
+      [...figure.querySelectorAll<SVGElement>('circle[role="slider"]')].map((handle) => {
+        const r = handle.getBoundingClientRect();
+        const hit = document.elementFromPoint(r.left + r.width / 2, r.top + r.height / 2);
+        return { handle: handle.getAttribute("aria-label"), hit: hit === handle ? "itself" : (hit?.outerHTML.slice(0, 120) ?? "nothing") };
+      }),
+    );
+    expect(hits.length).toBe(6);
+    for (const h of hits) expect(h, h.handle ?? "").toEqual({ handle: h.handle, hit: "itself" });
+  });
+
   test("a pump point dragged below the pump's minimum duty stops at the minimum and says why", async ({ page }) => {
     const { pumpMinDutyPct } = await openFreshProfile(page);
     const handle = page.getByRole("slider", { name: "pump point 1" });

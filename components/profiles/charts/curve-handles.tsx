@@ -60,7 +60,7 @@ export function CurveHandles({ profile, flashed, x, fromC, toC, bottom, editing,
   const inRange = (t: number) => t >= fromC && t <= toC;
   const reasonAt = (key: string, cx: number, cy: number) =>
     notice?.key === key ? (
-      <text x={cx > x.range[1] - 220 ? cx - 10 : cx + 10} y={cy - 10} textAnchor={cx > x.range[1] - 220 ? "end" : "start"} fontSize={11} fill={C.critical} stroke="white" strokeWidth={3} paintOrder="stroke" data-testid="handle-reason">
+      <text x={cx > x.range[1] - 220 ? cx - 10 : cx + 10} y={cy - 10} textAnchor={cx > x.range[1] - 220 ? "end" : "start"} fontSize={11} fill={C.critical} stroke="white" strokeWidth={3} paintOrder="stroke" pointerEvents="none" data-testid="handle-reason">
         {notice.text.length > 70 ? `${notice.text.slice(0, 68)}…` : notice.text}
       </text>
     ) : null;
@@ -146,7 +146,8 @@ export function CurveHandles({ profile, flashed, x, fromC, toC, bottom, editing,
           const cy = dutyToY(kind, anchor.dutyPct);
           return (
             <g key={key}>
-              <line x1={cx} x2={x(anchor.tempC)} y1={cy} y2={cy} stroke={colour(kind)} strokeDasharray="1 2" aria-hidden="true" />
+              {/* A guide only: it ends on the anchor point's centre, so it must not take that point's presses. */}
+              <line x1={cx} x2={x(anchor.tempC)} y1={cy} y2={cy} stroke={colour(kind)} strokeDasharray="1 2" aria-hidden="true" pointerEvents="none" />
               {focused === key && <circle cx={cx} cy={cy} r={10} fill="none" stroke={C.operating} strokeWidth={2} aria-hidden="true" />}
               <rect
                 data-handle={key}
@@ -207,8 +208,9 @@ function FanStop({
   const cy = bottom - 8;
   return (
     <g data-testid="fan-stop">
-      <line x1={cx} x2={cx} y1={bottom} y2={bottom - 120} stroke={C.fan} strokeDasharray={C.stopDash} strokeWidth={1.5} aria-hidden="true" />
-      <text x={cx + 4} y={bottom - 112} fontSize={11} fill={C.fan} stroke="white" strokeWidth={3} paintOrder="stroke" aria-hidden="true">fans stop below {fmt(stopC)} °C</text>
+      {/* Drawn over the curves: marks only, so the points under them stay grabbable. */}
+      <line x1={cx} x2={cx} y1={bottom} y2={bottom - 120} stroke={C.fan} strokeDasharray={C.stopDash} strokeWidth={1.5} aria-hidden="true" pointerEvents="none" />
+      <text x={cx + 4} y={bottom - 112} fontSize={11} fill={C.fan} stroke="white" strokeWidth={3} paintOrder="stroke" aria-hidden="true" pointerEvents="none">fans stop below {fmt(stopC)} °C</text>
       {focused && <circle cx={cx} cy={cy} r={10} fill="none" stroke={C.operating} strokeWidth={2} aria-hidden="true" />}
       {editing ? (
         <rect
