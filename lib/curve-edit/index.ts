@@ -3,7 +3,7 @@
  * text edit that changes exactly one number (or inserts/removes one point), and
  * the limits a dragged handle stops at, with the reason shown beside it.
  */
-export { applyTextEdit, formatNumber, insertPointEdit, numberSpan, removePointEdit, scanDocument, setNumberEdit, CurveEditError } from "./text-edit";
+export { applyTextEdit, changedSpan, formatNumber, insertPointEdit, numberSpan, removePointEdit, scanDocument, setNumberEdit, CurveEditError } from "./text-edit";
 export type { TextEdit } from "./text-edit";
 export {
   clampToBound,

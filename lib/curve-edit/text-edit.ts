@@ -115,3 +115,29 @@ export function removePointEdit(text: string, kind: CurveKind, index: number): T
   if (index > 0) return { start: spanOf(scan, `${pointsPointer(kind)}/${index - 1}`).end, end: own.end, text: "" };
   return { start: own.start, end: own.end, text: "" };
 }
+
+const isHighSurrogate = (code: number) => code >= 0xd800 && code <= 0xdbff;
+const isLowSurrogate = (code: number) => code >= 0xdc00 && code <= 0xdfff;
+
+/**
+ * The one span of `before` to replace so that it reads `after`: the common beginning and end
+ * are kept (never splitting a surrogate pair or a CR LF). Null when the texts are equal.
+ */
+export function changedSpan(before: string, after: string): TextEdit | null {
+  if (before === after) return null;
+  const max = Math.min(before.length, after.length);
+  let start = 0;
+  while (start < max && before.charCodeAt(start) === after.charCodeAt(start)) start++;
+  if (start > 0 && (isHighSurrogate(before.charCodeAt(start - 1)) || (before.charCodeAt(start - 1) === 13 && before.charCodeAt(start) === 10))) start--;
+  let end = before.length;
+  let endAfter = after.length;
+  while (end > start && endAfter > start && before.charCodeAt(end - 1) === after.charCodeAt(endAfter - 1)) {
+    end--;
+    endAfter--;
+  }
+  if (end < before.length && end > 0 && (isLowSurrogate(before.charCodeAt(end)) || (before.charCodeAt(end) === 10 && before.charCodeAt(end - 1) === 13))) {
+    end++;
+    endAfter++;
+  }
+  return { start, end, text: after.slice(start, endAfter) };
+}

@@ -2,8 +2,8 @@
 
 import Editor from "@monaco-editor/react";
 import type * as Monaco from "monaco-editor";
-import { memo, useEffect, useRef } from "react";
-import type { TextEdit } from "@/lib/curve-edit";
+import { memo, useCallback, useEffect, useMemo, useRef } from "react";
+import { changedSpan, type TextEdit } from "@/lib/curve-edit";
 import type { ValidationIssue } from "@/lib/engine";
 import { PROFILE_MODEL_URI, setupMonaco } from "./monaco-setup";
 
@@ -59,6 +59,27 @@ function JsonEditor({
   label: string;
 }) {
   const editorRef = useRef<Monaco.editor.IStandaloneCodeEditor | null>(null);
+  // Stable options and change handler: the wrapper re-applies options and re-subscribes its change
+  // listener whenever these props are new objects, which would be work on every keystroke.
+  const options = useMemo<Monaco.editor.IStandaloneEditorConstructionOptions>(
+    () => ({
+      readOnly,
+      domReadOnly: readOnly,
+      minimap: { enabled: false },
+      fontSize: 13,
+      tabSize: 2,
+      scrollBeyondLastLine: false,
+      automaticLayout: true,
+      ariaLabel: label,
+      quickSuggestions: { strings: true, other: true, comments: false },
+    }),
+    [readOnly, label],
+  );
+  const changed = useRef(onChange);
+  useEffect(() => {
+    changed.current = onChange;
+  }, [onChange]);
+  const onModelChange = useCallback((v: string | undefined) => changed.current(v ?? ""), []);
 
   useEffect(() => {
     const model = editorRef.current?.getModel();
@@ -71,18 +92,8 @@ function JsonEditor({
       language="json"
       path={PROFILE_MODEL_URI}
       value={value}
-      onChange={(v) => onChange(v ?? "")}
-      options={{
-        readOnly,
-        domReadOnly: readOnly,
-        minimap: { enabled: false },
-        fontSize: 13,
-        tabSize: 2,
-        scrollBeyondLastLine: false,
-        automaticLayout: true,
-        ariaLabel: label,
-        quickSuggestions: { strings: true, other: true, comments: false },
-      }}
+      onChange={onModelChange}
+      options={options}
       loading={<div className="h-full animate-pulse rounded bg-ink-100" aria-label="Loading the editor" />}
       onMount={(editor) => {
         editorRef.current = editor;
@@ -97,7 +108,13 @@ function JsonEditor({
           setText(text) {
             const m = editor.getModel();
             if (!m) return;
-            editor.executeEdits("loopkeeper", [{ range: m.getFullModelRange(), text, forceMoveMarkers: true }]);
+            // Only the span that differs is replaced (as typing would): Monaco re-tokenises and
+            // re-renders those lines alone, and the cursor and scroll position elsewhere stay put.
+            const span = changedSpan(m.getValue(), text);
+            if (!span) return;
+            const start = m.getPositionAt(span.start);
+            const end = m.getPositionAt(span.end);
+            editor.executeEdits("loopkeeper", [{ range: new monaco.Range(start.lineNumber, start.column, end.lineNumber, end.column), text: span.text, forceMoveMarkers: true }]);
           },
           getText() {
             return editor.getModel()?.getValue() ?? "";

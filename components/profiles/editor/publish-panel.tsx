@@ -22,14 +22,15 @@ type PublishForm = z.infer<typeof formSchema>;
 /** Publish the editor's text as a new immutable version; the server encodes and checks it again. */
 export function PublishPanel({
   profileId,
-  text,
+  getText,
   suggestion,
   defaultRange,
   onRangeChange,
   blocked,
 }: {
   profileId: string;
-  text: string;
+  /** The editor's text as it is now: read when the form is sent. */
+  getText: () => string;
   suggestion: VersionSuggestion | null;
   defaultRange: string;
   /** Called as the range is typed, so the memory gauge can judge it live. */
@@ -45,7 +46,7 @@ export function PublishPanel({
     if (followSuggestion) form.setValue("version", suggested);
   }, [suggested, followSuggestion, form]);
   const publish = useMutation({
-    mutationFn: (v: PublishForm) => apiCall(publishVersion, { params: { id: profileId }, body: { ...v, text } }),
+    mutationFn: (v: PublishForm) => apiCall(publishVersion, { params: { id: profileId }, body: { ...v, text: getText() } }),
     onSuccess: () => {
       form.reset({ version: suggested, changelog: "", boardRange: form.getValues("boardRange") });
       setFollowSuggestion(true);

@@ -1,6 +1,6 @@
 "use client";
 
-import { useCallback, useMemo, useState, type RefObject } from "react";
+import { useCallback, useLayoutEffect, useMemo, useRef, useState, type RefObject } from "react";
 import {
   clampToBound,
   CurveEditError,
@@ -51,8 +51,14 @@ export interface CurveEditing {
  * change replaces exactly the numbers it is about (lib/curve-edit), clamped to the
  * rules with the reason kept for the handle to show.
  */
-export function useCurveEditing(editor: RefObject<EditorHandle | null>, profile: CoolingProfile | undefined, hw: HardwareContext | null, enabled: boolean): CurveEditing | null {
+export function useCurveEditing(editor: RefObject<EditorHandle | null>, profileNow: CoolingProfile | undefined, hwNow: HardwareContext | null, enabled: boolean): CurveEditing | null {
   const [notice, setNotice] = useState<EditNotice | null>(null);
+  // The actions read the committed document through a ref, so they (and the object handed to the
+  // plot and the points table) stay the same from one keystroke to the next.
+  const committed = useRef({ profile: profileNow, hw: hwNow });
+  useLayoutEffect(() => {
+    committed.current = { profile: profileNow, hw: hwNow };
+  }, [profileNow, hwNow]);
 
   const apply = useCallback(
     (key: string, build: (text: string) => TextEdit[], undoStop: boolean, reason?: string) => {
@@ -74,6 +80,7 @@ export function useCurveEditing(editor: RefObject<EditorHandle | null>, profile:
 
   const movePoint = useCallback<CurveEditing["movePoint"]>(
     (kind, index, want, undoStop) => {
+      const { profile, hw } = committed.current;
       const key = `${kind}/${index}`;
       const point = profile?.[kind].points[index];
       if (!profile || !hw || !point) return;
@@ -93,11 +100,12 @@ export function useCurveEditing(editor: RefObject<EditorHandle | null>, profile:
         duty.reason ?? temp.reason,
       );
     },
-    [profile, hw, apply],
+    [apply],
   );
 
   const setValue = useCallback<CurveEditing["setValue"]>(
     (target, value, undoStop) => {
+      const { profile } = committed.current;
       if (!profile) return;
       const key = targetKey(target);
       if (target.type === "fanStop") {
@@ -111,11 +119,12 @@ export function useCurveEditing(editor: RefObject<EditorHandle | null>, profile:
         apply(key, (text) => [setNumberEdit(text, `/${target.kind}/hysteresisC`, clamped.value)], undoStop, clamped.reason);
       }
     },
-    [profile, apply],
+    [apply],
   );
 
   const addPoint = useCallback<CurveEditing["addPoint"]>(
     (kind, tempC) => {
+      const { profile, hw } = committed.current;
       if (!profile || !hw) return;
       const key = `${kind}/add`;
       const insertion = newPointAt(profile[kind].points, kind, hw.boardRevision.maxPointsPerCurve, tempC);
@@ -125,11 +134,12 @@ export function useCurveEditing(editor: RefObject<EditorHandle | null>, profile:
       }
       apply(key, (text) => [insertPointEdit(text, kind, insertion.index, insertion.point)], true);
     },
-    [profile, hw, apply],
+    [apply],
   );
 
   const removePoint = useCallback<CurveEditing["removePoint"]>(
     (kind, index) => {
+      const { profile } = committed.current;
       if (!profile) return;
       const key = `${kind}/${index}`;
       const refusal = removalRefusal(profile[kind].points, kind);
@@ -139,15 +149,16 @@ export function useCurveEditing(editor: RefObject<EditorHandle | null>, profile:
       }
       apply(key, (text) => [removePointEdit(text, kind, index)], true);
     },
-    [profile, apply],
+    [apply],
   );
 
   const beginGesture = useCallback(() => editor.current?.pushUndoStop(), [editor]);
   const endGesture = useCallback(() => editor.current?.pushUndoStop(), [editor]);
   const clearNotice = useCallback(() => setNotice(null), []);
 
+  const ready = enabled && Boolean(profileNow) && Boolean(hwNow);
   return useMemo(
-    () => (enabled && profile && hw ? { movePoint, setValue, addPoint, removePoint, beginGesture, endGesture, notice, clearNotice } : null),
-    [enabled, profile, hw, movePoint, setValue, addPoint, removePoint, beginGesture, endGesture, notice, clearNotice],
+    () => (ready ? { movePoint, setValue, addPoint, removePoint, beginGesture, endGesture, notice, clearNotice } : null),
+    [ready, movePoint, setValue, addPoint, removePoint, beginGesture, endGesture, notice, clearNotice],
   );
 }

@@ -11,7 +11,7 @@ import { operatingPoint, suggestNextVersion, type CoolingProfile } from "@/lib/e
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { evaluateEditorText } from "@/lib/registry/editor-evaluation";
 import { Select } from "@/components/ui/field";
-import { CoolerPicker, useCoolerChoices } from "./hardware-picker";
+import { CoolerPicker, useCoolerChoices, type CoolerChoice } from "./hardware-picker";
 import { EstimateCaution, Notice } from "@/components/ui/notice";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { Panel } from "@/components/ui/panel";
@@ -24,7 +24,7 @@ import { useCurveEditing } from "./use-curve-editing";
 import LiveCurvePlot, { type OperatingMark } from "../charts/live-curve-plot";
 import { ProblemsList } from "./problems-list";
 import { PublishPanel } from "./publish-panel";
-import { useAutosave } from "./use-autosave";
+import { useAutosave, type SaveState } from "./use-autosave";
 import { useLastPlotted } from "./use-last-plotted";
 import { DraftConflict } from "./draft-conflict";
 import { VersionHistory } from "./version-history";
@@ -37,6 +37,8 @@ const JsonEditor = dynamic(() => import("./json-editor"), { ssr: false, loading:
 const MemoOperatingPanel = memo(OperatingPanel);
 const MemoMemoryGauge = memo(MemoryGauge);
 const MemoVersionHistory = memo(VersionHistory);
+const MemoPublishPanel = memo(PublishPanel);
+const MemoProblemsList = memo(ProblemsList);
 
 declare global {
   interface Window {
@@ -70,14 +72,28 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
   const hw = useMemo(() => (revision ? toHardwareContext({ cooler: chosen.cooler, fan, pump, revision }) : null), [chosen.cooler, fan, pump, revision]);
   // Keystroke path: validation (markers, problems) and the curve table (plots) only.
   const evaluation = useMemo(() => (hw ? evaluateEditorText(text, hw) : null), [text, hw]);
-  // Everything slower (operating point and load sweep, memory, version suggestion)
+  // Everything else (points table, operating point and load sweep, memory, version suggestion)
   // renders in a background pass React may interrupt, so typing stays within a frame. The publish
-  // form takes the live text: what is sent is what is on screen (the server checks it again).
+  // form reads the editor's text when it is sent: what is sent is what is on screen (the server
+  // checks it again).
   const plotted = useLastPlotted(evaluation, hw, profile.lastPlottableDraftText);
   const deferredEvaluation = useDeferredValue(evaluation);
   const deferredHw = useDeferredValue(hw);
   const { state: save, adopt, keepMine } = useAutosave(profile.id, text, canWrite, profile.draftRevision);
-  const replaceText = (t: string) => (editor.current ? editor.current.setText(t) : setText(t));
+  const replaceText = useCallback((t: string) => (editor.current ? editor.current.setText(t) : setText(t)), []);
+  const onImported = useCallback(
+    (t: string, draftRevision: number) => {
+      adopt(t, draftRevision);
+      replaceText(t);
+    },
+    [adopt, replaceText],
+  );
+  // The publish form reads the text when it is sent (what is on screen), so it need not re-render per keystroke.
+  const latestText = useRef(text);
+  useEffect(() => {
+    latestText.current = text;
+  }, [text]);
+  const getText = useCallback(() => editor.current?.getText() ?? latestText.current, []);
   const editing = useCurveEditing(editor, evaluation?.profile, hw, canWrite);
   const [operatingInputs, setOperatingInputs] = useState<OperatingInputs>({ heatLoadW: "200", ambientC: "25" });
   // The operating point follows every drag step (one bisection, well under a millisecond).
@@ -139,41 +155,18 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
   return (
     <div className="space-y-5">
       <EstimateCaution />
-      <div className="flex flex-wrap items-end gap-4 rounded-md bg-white p-4 shadow-panel">
-        <div className="text-sm">
-          <span className="block font-medium text-ink-800">Profile for cooler model</span>
-          <span data-testid="cooler-name">{cooler.name}</span> <span className="text-ink-600">({cooler.fanCount} × {detail.fan.name}, {detail.pump.name})</span>
-        </div>
-        <CoolerPicker choices={choices} value={chosen.id} onChange={setCoolerId} loadError={loadError} />
-        <label className="text-sm">
-          <span className="mb-1 block font-medium text-ink-800">Board revision ({cooler.boardModelName})</span>
-          <Select value={revision?.id ?? ""} onChange={(e) => setRevisionId(e.target.value)} className="w-64">
-            {revisions.map((r) => (
-              <option key={r.id} value={r.id}>{r.revision} · {r.memoryBytes} B · {r.maxPointsPerCurve} points</option>
-            ))}
-          </Select>
-        </label>
-        <div className="ml-auto flex items-center gap-3 text-sm">
-          {canWrite ? (
-            <>
-              <span role="status" className="text-ink-600" data-testid="save-state">
-                {save.kind === "saving" && "Saving draft…"}
-                {save.kind === "saved" && "Draft saved"}
-                {save.kind === "error" && <span className="text-signal-fault">Draft not saved: {save.message}</span>}
-              </span>
-              <ImportButton
-                profileId={profile.id}
-                onImported={(t, draftRevision) => {
-                  adopt(t, draftRevision);
-                  replaceText(t);
-                }}
-              />
-            </>
-          ) : (
-            <span className="text-ink-600">Read only: your role may not edit profiles.</span>
-          )}
-        </div>
-      </div>
+      <MemoWorkspaceHeader
+        detail={detail}
+        choices={choices}
+        chosenId={chosen.id}
+        onCooler={setCoolerId}
+        loadError={loadError}
+        revisionId={revision?.id ?? ""}
+        onRevision={setRevisionId}
+        canWrite={canWrite}
+        save={save}
+        onImported={onImported}
+      />
       {save.kind === "conflict" && (
         <DraftConflict
           conflict={save}
@@ -208,7 +201,7 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
               onReady={onReady}
             />
           </div>
-          <ProblemsList issues={issues} onJump={onJump} />
+          <MemoProblemsList issues={issues} onJump={onJump} />
         </div>
         <div className="space-y-5">
           <Panel title={`Speeds and sound against liquid temperature · ${chosen.cooler.name}`}>
@@ -246,13 +239,12 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
               {editing?.notice?.text}
             </p>
           </Panel>
-          {evaluation?.profile && hw && (
-            <Panel title="Points">
-              <PointsTable profile={evaluation.profile} hw={hw} editing={editing} />
-            </Panel>
-          )}
           {deferredEvaluation?.profile && deferredHw && (
             <>
+              {/* The table follows in the background pass: the plot is where a drag or a keystroke is watched. */}
+              <Panel title="Points">
+                <PointsTable profile={deferredEvaluation.profile} hw={deferredHw} editing={editing} />
+              </Panel>
               <Panel title={`Operating point · ${deferredHw.name}`}>
                 <MemoOperatingPanel profile={deferredEvaluation.profile} hw={deferredHw} inputs={operatingInputs} onInputs={setOperatingInputs} />
               </Panel>
@@ -266,7 +258,7 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
 
       {canWrite && (
         <Panel title="Publish">
-          <PublishPanel profileId={profile.id} text={text} suggestion={suggestion} defaultRange={defaultRange} onRangeChange={setPublishRange} blocked={errors > 0 || !deferredEvaluation?.profile} />
+          <MemoPublishPanel profileId={profile.id} getText={getText} suggestion={suggestion} defaultRange={defaultRange} onRangeChange={setPublishRange} blocked={errors > 0 || !deferredEvaluation?.profile} />
         </Panel>
       )}
       <Panel title="Version history" actions={versions.length >= 2 ? <Link className="text-sm text-copper-700 underline" href={`/profiles/${profile.id}/compare`}>Compare versions</Link> : undefined}>
@@ -275,3 +267,62 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
     </div>
   );
 }
+
+/** Cooler and board revision choice, save state and import: nothing here follows the keystrokes. */
+function WorkspaceHeader({
+  detail,
+  choices,
+  chosenId,
+  onCooler,
+  loadError,
+  revisionId,
+  onRevision,
+  canWrite,
+  save,
+  onImported,
+}: {
+  detail: ProfileDetailView;
+  choices: CoolerChoice[];
+  chosenId: string;
+  onCooler: (id: string) => void;
+  loadError: boolean;
+  revisionId: string;
+  onRevision: (id: string) => void;
+  canWrite: boolean;
+  save: SaveState;
+  onImported: (text: string, draftRevision: number) => void;
+}) {
+  const { profile, cooler, revisions } = detail;
+  return (
+    <div className="flex flex-wrap items-end gap-4 rounded-md bg-white p-4 shadow-panel">
+      <div className="text-sm">
+        <span className="block font-medium text-ink-800">Profile for cooler model</span>
+        <span data-testid="cooler-name">{cooler.name}</span> <span className="text-ink-600">({cooler.fanCount} × {detail.fan.name}, {detail.pump.name})</span>
+      </div>
+      <CoolerPicker choices={choices} value={chosenId} onChange={onCooler} loadError={loadError} />
+      <label className="text-sm">
+        <span className="mb-1 block font-medium text-ink-800">Board revision ({cooler.boardModelName})</span>
+        <Select value={revisionId} onChange={(e) => onRevision(e.target.value)} className="w-64">
+          {revisions.map((r) => (
+            <option key={r.id} value={r.id}>{r.revision} · {r.memoryBytes} B · {r.maxPointsPerCurve} points</option>
+          ))}
+        </Select>
+      </label>
+      <div className="ml-auto flex items-center gap-3 text-sm">
+        {canWrite ? (
+          <>
+            <span role="status" className="text-ink-600" data-testid="save-state">
+              {save.kind === "saving" && "Saving draft…"}
+              {save.kind === "saved" && "Draft saved"}
+              {save.kind === "error" && <span className="text-signal-fault">Draft not saved: {save.message}</span>}
+            </span>
+            <ImportButton profileId={profile.id} onImported={onImported} />
+          </>
+        ) : (
+          <span className="text-ink-600">Read only: your role may not edit profiles.</span>
+        )}
+      </div>
+    </div>
+  );
+}
+const MemoWorkspaceHeader = memo(WorkspaceHeader);

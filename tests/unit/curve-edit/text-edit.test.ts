@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import type { CoolingProfile, CurveKind } from "@/lib/engine";
-import { applyTextEdit, CurveEditError, formatNumber, insertPointEdit, numberSpan, removePointEdit, setNumberEdit } from "@/lib/curve-edit";
+import { applyTextEdit, changedSpan, CurveEditError, formatNumber, insertPointEdit, numberSpan, removePointEdit, setNumberEdit } from "@/lib/curve-edit";
 import { quietProfile, readExample, validProfileArb } from "../engine/fixtures";
 
 /*
@@ -126,5 +126,54 @@ describe("insertPointEdit and removePointEdit", () => {
     const text = readExample("quiet.profile.json");
     expect(() => removePointEdit(text, "fans", 40)).toThrow(CurveEditError);
     expect(() => insertPointEdit(text, "fans", -1, { tempC: 1, dutyPct: 1 })).toThrow(CurveEditError);
+  });
+});
+
+describe("changedSpan: the one span an editor replaces to turn one text into another", () => {
+  // The reference is plain string identity (ECMA-262 §22.1.3: slice and concatenation in UTF-16
+  // code units): applying the span to the old text must give the new text exactly.
+  it("turns any text into any other, replacing no more than the part between their common ends", () => {
+    let longest = 0;
+    fc.assert(
+      fc.property(fc.string({ unit: "binary", maxLength: 4000, size: "xlarge" }), fc.string({ unit: "binary", maxLength: 400 }), fc.nat(), fc.nat(), (base, insert, a, b) => {
+        longest = Math.max(longest, base.length);
+        const from = Math.min(a, b) % (base.length + 1);
+        const to = Math.max(a, b) % (base.length + 1);
+        const [lo, hi] = from <= to ? [from, to] : [to, from];
+        const after = base.slice(0, lo) + insert + base.slice(hi);
+        const span = changedSpan(base, after);
+        if (base === after) return expect(span).toBeNull();
+        expect(span).not.toBeNull();
+        expect(applyTextEdit(base, span!)).toBe(after);
+        // Never wider than the edit that made the difference, give or take a kept pair.
+        expect(span!.end - span!.start).toBeLessThanOrEqual(hi - lo + 2);
+      }),
+      { numRuns: 400 },
+    );
+    // A profile's text is 1–4 thousand characters: the generated texts reach that.
+    expect(longest).toBeGreaterThan(1000);
+  });
+
+  it("replaces only the digits of a changed duty in a profile's text", () => {
+    const text = readExample("quiet.profile.json");
+    const doc = JSON.parse(text) as CoolingProfile;
+    const changed = structuredClone(doc);
+    changed.fans.points[1]!.dutyPct += 0.5;
+    const before = `${JSON.stringify(doc, null, 2)}\n`;
+    const after = `${JSON.stringify(changed, null, 2)}\n`;
+    const span = changedSpan(before, after)!;
+    expect(applyTextEdit(before, span)).toBe(after);
+    expect(span.end - span.start).toBeLessThanOrEqual(String(doc.fans.points[1]!.dutyPct).length);
+  });
+
+  it("keeps surrogate pairs and CR LF whole", () => {
+    // U+1F600 is the pair D83D DE00, U+1F601 is D83D DE01: they differ in the low half only.
+    const pair = changedSpan("a\u{1F600}b", "a\u{1F601}b")!;
+    expect(pair).toEqual({ start: 1, end: 3, text: "\u{1F601}" });
+    // "\r\n" → "\r\r\n": the common end is "\r\n", so the kept break must not be split.
+    const crlf = changedSpan("x\r\ny", "x\r\r\ny")!;
+    expect(applyTextEdit("x\r\ny", crlf)).toBe("x\r\r\ny");
+    expect(crlf.start === 1 || crlf.start === 3).toBe(true);
+    expect(changedSpan("same", "same")).toBeNull();
   });
 });
