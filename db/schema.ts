@@ -18,6 +18,9 @@ import {
   uniqueIndex,
   uuid,
 } from "drizzle-orm/pg-core";
+// The enums take their values from the one list each in lib/, so the database, the API and the screens agree.
+import { ROLES } from "../lib/auth/roles";
+import { STAGE_ORDER } from "../lib/release/stages";
 
 const bytea = customType<{ data: Uint8Array; driverData: Buffer }>({
   dataType: () => "bytea",
@@ -30,7 +33,7 @@ const timestamps = {
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
 };
 
-export const roleEnum = pgEnum("role", ["admin", "engineer", "release_manager", "support", "viewer"]);
+export const roleEnum = pgEnum("role", ROLES);
 
 // ---------------------------------------------------------------- people and access
 
@@ -281,7 +284,7 @@ export const uploads = pgTable(
 
 // ---------------------------------------------------------------- builds and stages
 
-export const buildStageEnum = pgEnum("build_stage", ["draft", "review", "validation", "pilot", "production", "withdrawn"]);
+export const buildStageEnum = pgEnum("build_stage", STAGE_ORDER);
 
 export const builds = pgTable(
   "builds",

@@ -103,6 +103,20 @@ describe("measurements against the estimate", () => {
     expect(bad).toEqual({ ok: false, errors: ["Line 2: expected 4 values, found 3.", "Line 3: pump_rpm must be a number from 0 to 20000."] });
     expect(parseMeasurementsCsv("temp,rpm\n1,2").ok).toBe(false);
   });
+
+  it("reads the lab CSV with the same RFC 4180 reader as lots files: quoted cells, CRLF, blank lines", () => {
+    // RFC 4180 §2 rules 5 and 6: any field may be enclosed in double quotes; lines end in CRLF.
+    const text = `${MEASUREMENT_HEADER}\r\n"40","2000",1200,"31.5"\r\n\r\n   \r\n45,2200,1400,33\r\n`;
+    expect(parseMeasurementsCsv(text)).toEqual({
+      ok: true,
+      rows: [
+        { liquidTempC: 40, pumpRpm: 2000, fanRpm: 1200, soundDbA: 31.5, backgroundDbA: null },
+        { liquidTempC: 45, pumpRpm: 2200, fanRpm: 1400, soundDbA: 33, backgroundDbA: null },
+      ],
+    });
+    // A quoted comma stays inside its cell, so the row has four cells and the third is not a number.
+    expect(parseMeasurementsCsv(`${MEASUREMENT_HEADER}\n40,2000,"1,200",31.5\n`)).toEqual({ ok: false, errors: ["Line 2: fan_rpm must be a number from 0 to 20000."] });
+  });
 });
 
 describe("stages and approvals", () => {

@@ -3,7 +3,7 @@ import { exportShippedCsv } from "@/lib/api/operations/support";
 import { getDb } from "@/db/client";
 import { shippedWithBuild } from "@/db/lots";
 import { formatSerial } from "@/lib/serials/serial";
-import { toCsv } from "@/lib/lots/csv-write";
+import { toCsv } from "@/lib/csv/write";
 import { AppError } from "@/lib/api/errors";
 
 export const GET = apiRoute(exportShippedCsv, async ({ params }) => {
