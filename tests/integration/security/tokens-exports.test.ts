@@ -11,7 +11,7 @@ import { and, eq, sql } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "../support/db";
 import { callRoute, tokenFor } from "../support/http";
 import { builds, productionLots, users } from "@/db/schema";
-import { updateUser } from "@/db/users";
+import { updateUser } from "@/lib/use-cases/admin/users";
 import * as meRoute from "@/app/api/v1/me/route";
 import * as tokensRoute from "@/app/api/v1/tokens/route";
 import * as tokenRoute from "@/app/api/v1/tokens/[id]/route";
