@@ -7,7 +7,8 @@ import { likeText, orderFor, pageWindow } from "./list-helpers";
 export type ComponentInput = Pick<
   Component,
   "kind" | "name" | "minDutyPct" | "rpmAtMinDuty" | "maxRpm" | "tachPulsesPerRev" | "refSoundDbA" | "refRpm" | "soundExponent" | "flowAtMaxRpmLpm"
->;
+> &
+  Partial<Pick<Component, "soundTable" | "stopsAtZeroDuty">>;
 
 const SORT_COLUMNS = {
   name: components.name,

@@ -105,6 +105,7 @@ export async function getProfileDetail(db: Executor, { id }: { id: string }) {
     cooler: {
       id: hw.cooler.id,
       name: hw.cooler.name,
+      radiatorMm: hw.cooler.radiatorMm,
       fanCount: hw.cooler.fanCount,
       radiatorKPerWAtMinFan: hw.cooler.radiatorKPerWAtMinFan,
       radiatorKPerWAtMaxFan: hw.cooler.radiatorKPerWAtMaxFan,

@@ -1,4 +1,5 @@
 import { relations, sql } from "drizzle-orm";
+import type { SoundTable } from "../lib/hardware/types";
 import {
   bigint,
   bigserial,
@@ -134,6 +135,10 @@ export const components = pgTable(
     refSoundDbA: doublePrecision("ref_sound_dba").notNull(),
     refRpm: integer("ref_rpm").notNull(),
     soundExponent: doublePrecision("sound_exponent").notNull().default(50),
+    /** Measured RPM → dB(A) table at a stated distance; null: the reference level and exponent are used. */
+    soundTable: jsonb("sound_table").$type<SoundTable>(),
+    /** True: stops at 0 % duty; false: keeps its minimum speed below the minimum duty (4-wire PWM fan spec rev. 1.3 §3.4). */
+    stopsAtZeroDuty: boolean("stops_at_zero_duty").notNull().default(false),
     flowAtMaxRpmLpm: doublePrecision("flow_at_max_rpm_lpm"),
     ...timestamps,
   },
@@ -142,6 +147,10 @@ export const components = pgTable(
     check("components_min_duty_range", sql`${t.minDutyPct} >= 0 and ${t.minDutyPct} <= 100`),
     check("components_rpm_order", sql`${t.rpmAtMinDuty} > 0 and ${t.maxRpm} > ${t.rpmAtMinDuty}`),
     check("components_tach_pulses", sql`${t.tachPulsesPerRev} between 1 and 12`),
+    check(
+      "components_sound_table_shape",
+      sql`${t.soundTable} is null or (jsonb_typeof(${t.soundTable}->'distanceM') = 'number' and jsonb_typeof(${t.soundTable}->'points') = 'array' and jsonb_array_length(${t.soundTable}->'points') between 2 and 64)`,
+    ),
   ],
 );
 

@@ -119,8 +119,9 @@ function statusOf(correction: BackgroundCorrection, deltaDb: number | null, tole
 /**
  * Measured sound against the estimate at the measured speeds: the measured level corrected
  * for the room's background (ISO 3744:2010 §8.2.3, see lib/acoustics/background-correction),
- * then compared with coolerNoise (fan-law scaling L = Lref + k·log10(N/Nref), n fans
- * +10·log10(n), incoherent sum with the pump). A point fails only when the cooler is
+ * then compared with coolerNoise (each unit's measured sound table where the registry has
+ * one, otherwise fan-law scaling L = Lref + k·log10(N/Nref); n fans +10·log10(n),
+ * incoherent sum with the pump). A point fails only when the cooler is
  * louder than estimated by more than the tolerance; quieter is not a fault of the curve.
  */
 export function compareMeasurements(rows: readonly MeasurementRow[], hw: HardwareContext, toleranceDb: number, minDifferenceDb = ISO_3744_MIN_DIFFERENCE_DB): MeasurementComparison[] {

@@ -25,7 +25,7 @@ function tinyPdf(): Buffer {
 function measurementsCsv(): Buffer {
   const fan = DEMO_COMPONENTS.find((c) => c.name === "Fellwind 120 PWM fan")!;
   const pump = DEMO_COMPONENTS.find((c) => c.name === "Brook D3 pump")!;
-  const hw = toHardwareContext({ cooler: { name: "Tarn 240", fanCount: 2, radiatorKPerWAtMinFan: 0.11, radiatorKPerWAtMaxFan: 0.045 }, fan, pump, revision: DEMO_REVISIONS[0]! });
+  const hw = toHardwareContext({ cooler: { name: "Tarn 240", radiatorMm: 240, fanCount: 2, radiatorKPerWAtMinFan: 0.11, radiatorKPerWAtMaxFan: 0.045 }, fan, pump, revision: DEMO_REVISIONS[0]! });
   const rows = [[32, 1500, 800, 0.6], [42, 2000, 1200, -0.9], [52, 2600, 1700, 1.0]] as const;
   return Buffer.from([MEASUREMENT_HEADER, ...rows.map(([t, p, f, d]) => `${t},${p},${f},${(coolerNoise(hw, f, p).totalDbA1m + d).toFixed(1)}`)].join("\n") + "\n");
 }
