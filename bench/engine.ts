@@ -9,6 +9,7 @@ import path from "node:path";
 import { encodeBank, evaluateCurves, loadSweep, validateProfile, type CoolingProfile, type CurvePoint, type HardwareContext } from "../lib/engine";
 
 const PROFILES = 10_000;
+const loadAtStart = os.loadavg()[0]!;
 const root = path.resolve(__dirname, "..");
 const hw = JSON.parse(readFileSync(path.join(root, "examples/cooler-360.hardware.json"), "utf8")) as HardwareContext;
 
@@ -84,6 +85,8 @@ const results = [
   }),
 ];
 const maxRssMiB = process.resourceUsage().maxRSS / 1024;
+const cores = os.cpus().length;
+const loadAtEnd = os.loadavg()[0]!;
 const heapMiB = process.memoryUsage().heapUsed / 1024 / 1024;
 
 const targets: Record<string, number> = { [results[0]!.label]: 50, [results[1]!.label]: 500 };
@@ -93,9 +96,12 @@ const section = [
   "## Engine",
   "",
   "Command: `npm run bench:engine` (bench/engine.ts). " +
-    `${PROFILES.toLocaleString("en")} generated profiles (3–8 points per curve, half with fan stop), example hardware context, one run after a warm-up of 200.`,
+    `${PROFILES.toLocaleString("en")} generated profiles (3–8 points per curve, half with fan stop), example hardware context (fans that stop at 0 % duty with the fallback sound law, a pump with a measured sound table), one run after a warm-up of 200.`,
   "",
-  `Machine: Node ${process.version}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? "cpu"}, ${os.platform()}, load average ${os.loadavg()[0]!.toFixed(1)} at the end of the run (the CPU column is the steadier one on a shared machine). Run ${new Date().toISOString().slice(0, 10)}.`,
+  `Machine: Node ${process.version}, ${cores} × ${os.cpus()[0]?.model ?? "cpu"}, ${os.platform()}, load average ${loadAtStart.toFixed(1)} at the start and ${loadAtEnd.toFixed(1)} at the end of the run (the CPU column is the steadier one on a shared machine). Run ${new Date().toISOString().slice(0, 16).replace("T", " ")} UTC.` +
+    (Math.max(loadAtStart, loadAtEnd) >= cores
+      ? ` **Loaded machine**: the load average was at or above the ${cores} cores, so other work competed for the CPU; these figures are not valid against the targets — rerun on a quiet machine before judging them.`
+      : ""),
   "",
   "| step | CPU µs per profile | wall µs per profile | target µs |",
   "|---|---:|---:|---:|",

@@ -2,6 +2,7 @@
 // node:http + pg handler running the same lot query, on loopback, with random serials
 // from the scale fixture (npm run seed:scale). Writes its section of docs/benchmarks.md.
 import { fork, spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { SourceMap, type SourceMapPayload } from "node:module";
 import { createHash, randomBytes } from "node:crypto";
 import fs from "node:fs";
 import http from "node:http";
@@ -22,6 +23,7 @@ const LOOKUP = "app GET /api/v1/lookup (token, rate limit on)";
 const OPENAPI = "app GET /api/v1/openapi.json";
 const BARE = "bare node:http + pg (lot query)";
 const PROFILE_DIR = path.join(root, ".data", "bench-cpu-profile");
+const PROFILE_S = 8;
 
 interface Result {
   target: string;
@@ -92,6 +94,23 @@ function stop(child: ChildProcess | undefined) {
   }
 }
 
+/** The production app (scripts/serve.mjs) in its own process group, with extra Node flags. */
+function startApp(env: NodeJS.ProcessEnv, nodeFlags: string[]): ChildProcess {
+  return spawn(process.execPath, [...nodeFlags, path.join(root, "scripts", "serve.mjs")], {
+    cwd: root,
+    env: { ...env, PORT: String(APP_PORT), HOST: "127.0.0.1" },
+    stdio: "ignore",
+    detached: true,
+  });
+}
+
+async function stopAndWait(child: ChildProcess | undefined): Promise<void> {
+  if (!child || child.exitCode !== null) return;
+  const exited = new Promise((r) => child.once("exit", r));
+  stop(child);
+  await exited;
+}
+
 async function main() {
   const pool = new Pool({ connectionString: DATABASE_URL, max: 1 });
   const fixture = await pool.query(`select count(*)::int as n from production_lots l join board_models m on m.id = l.board_model_id where m.serial_prefix = 'TCX'`);
@@ -130,19 +149,17 @@ async function main() {
   let bare: ChildProcess | undefined;
   const results: Result[] = [];
   let database: DatabaseTime | undefined;
+  let targets: { name: string; url: (s: string) => string; headers: Record<string, string> }[] = [];
+  let profiledRequests = 0;
+  let profiledWindow = { fromUs: 0, toUs: Infinity };
+  const loadAtStart = os.loadavg()[0]!;
   try {
-    // --cpu-prof: the app writes a V8 CPU profile when it exits; summarised below.
-    fs.rmSync(PROFILE_DIR, { recursive: true, force: true });
-    app = spawn(process.execPath, ["--cpu-prof", `--cpu-prof-dir=${PROFILE_DIR}`, path.join(root, "scripts", "serve.mjs")], {
-      cwd: root,
-      env: { ...env, PORT: String(APP_PORT), HOST: "127.0.0.1" },
-      stdio: "ignore",
-      detached: true,
-    });
+    // The measured runs go without a profiler; the lookup is profiled alone afterwards.
+    app = startApp(env, []);
     bare = fork(path.join(root, "bench", "bare-lookup-server.mjs"), [], { env: { ...process.env, DATABASE_URL, PORT: String(BARE_PORT) }, stdio: "ignore" });
     await waitFor(`http://127.0.0.1:${APP_PORT}/api/health`, 180_000);
     await waitFor(`http://127.0.0.1:${BARE_PORT}/lookup?serial=x`, 10_000);
-    const targets: { name: string; url: (s: string) => string; headers: Record<string, string> }[] = [
+    targets = [
       // The framework's floor in this run: a route handler with no I/O at all.
       { name: FLOOR, url: () => `http://127.0.0.1:${APP_PORT}/api/health/live`, headers: {} },
       { name: LOOKUP, url: (s: string) => `http://127.0.0.1:${APP_PORT}/api/v1/lookup?serial=${s}`, headers: { authorization: `Bearer ${secret}` } },
@@ -159,14 +176,25 @@ async function main() {
       }
     }
     database = await databaseTime(pool);
+    await stopAndWait(app);
+    app = undefined;
+    // Where the lookup's time goes: a fresh app under --cpu-prof that serves only the lookup.
+    fs.rmSync(PROFILE_DIR, { recursive: true, force: true });
+    app = startApp(env, ["--cpu-prof", `--cpu-prof-dir=${PROFILE_DIR}`]);
+    await waitFor(`http://127.0.0.1:${APP_PORT}/api/health`, 180_000);
+    const lookupTarget = targets.find((t) => t.name === LOOKUP)!;
+    await load(lookupTarget.url, lookupTarget.headers, 10, 3);
+    // CPU profile timestamps are V8 ticks on the monotonic clock, in µs, like hrtime here.
+    const from = Number(process.hrtime.bigint() / 1000n);
+    profiledRequests = (await load(lookupTarget.url, lookupTarget.headers, 10, PROFILE_S)).requests;
+    profiledWindow = { fromUs: from, toUs: Number(process.hrtime.bigint() / 1000n) };
   } finally {
-    stop(app);
-    if (app) await new Promise((r) => app!.once("exit", r));
+    await stopAndWait(app);
     bare?.kill("SIGTERM");
     await pool.query(`update api_tokens set revoked_at = now() where id = $1`, [tokenId]);
     await pool.end();
   }
-  writeSection(results, database, summariseProfile());
+  writeSection(results, database, summariseProfile(profiledRequests, profiledWindow), loadAtStart);
 }
 
 interface DatabaseTime {
@@ -202,42 +230,103 @@ async function databaseTime(pool: Pool): Promise<DatabaseTime> {
   return { samples: times.length, meanMs: times.reduce((a, b) => a + b, 0) / times.length, p99Ms: percentile(sorted, 99) };
 }
 
-interface ProfileLine {
-  what: string;
-  selfPct: number;
+interface ProfileSummary {
+  requests: number;
+  /** Share of the app's CPU time (idle left out) and CPU µs per lookup, by where the code lives. */
+  byArea: { area: string; busyPct: number; usPerRequest: number }[];
+  /** The busiest functions (self time), idle left out. */
+  topFunctions: { what: string; busyPct: number }[];
+  idlePct: number;
 }
 
-/** The app's CPU profile (whole run, all targets) summarised: self time by function and where it lives. */
-function summariseProfile(): ProfileLine[] {
-  if (!fs.existsSync(PROFILE_DIR)) return [];
-  const file = fs.readdirSync(PROFILE_DIR).find((f) => f.endsWith(".cpuprofile"));
-  if (!file) return [];
-  const profile = JSON.parse(fs.readFileSync(path.join(PROFILE_DIR, file), "utf8")) as {
-    nodes: { id: number; hitCount?: number; callFrame: { functionName: string; url: string; lineNumber: number } }[];
+/** Where a profiled frame's code lives: a package, a folder of ours, Node or V8 itself. */
+function makeLocator() {
+  const maps = new Map<string, SourceMap | null>();
+  const sourceMap = (file: string): SourceMap | null => {
+    if (!maps.has(file)) {
+      const mapFile = `${file}.map`;
+      maps.set(file, fs.existsSync(mapFile) ? new SourceMap(JSON.parse(fs.readFileSync(mapFile, "utf8")) as SourceMapPayload) : null);
+    }
+    return maps.get(file)!;
   };
-  const total = profile.nodes.reduce((a, n) => a + (n.hitCount ?? 0), 0) || 1;
-  const byWhat = new Map<string, number>();
-  for (const n of profile.nodes) {
-    const { functionName, url } = n.callFrame;
-    const where = url.includes("node_modules/")
-      ? url.slice(url.lastIndexOf("node_modules/") + 13).split("/").slice(0, url.includes("node_modules/@") ? 2 : 1).join("/")
-      : url.includes("/.next")
-        ? `app bundle ${path.basename(url)}`
-        : url.startsWith("node:")
-          ? url
-          : url
-            ? path.relative(root, url.replace(/^file:\/\//, ""))
-            : "(V8 / native)";
-    const key = `${functionName || "(anonymous)"} — ${where}`;
-    byWhat.set(key, (byWhat.get(key) ?? 0) + (n.hitCount ?? 0));
-  }
-  return [...byWhat.entries()]
-    .sort((a, b) => b[1] - a[1])
-    .slice(0, 20)
-    .map(([what, hits]) => ({ what, selfPct: (100 * hits) / total }));
+  const fromPath = (p: string): string => {
+    const nm = p.lastIndexOf("node_modules/");
+    if (nm >= 0) {
+      const parts = p.slice(nm + 13).split("/");
+      // drizzle-orm's own source maps point one folder up, at node_modules/src/….
+      if (parts[0] === "src") return "package drizzle-orm";
+      return `package ${parts[0]!.startsWith("@") ? parts.slice(0, 2).join("/") : parts[0]}`;
+    }
+    if (p.startsWith("turbopack:///[turbopack]")) return "Turbopack module runtime";
+    const rel = p.replace(/^.*?\[project\]\//, "").replace(/^(\.\.\/)+/, "");
+    return `ours: ${rel.split("/")[0]}/`;
+  };
+  return (frame: { functionName: string; url: string; lineNumber: number; columnNumber: number }): string => {
+    const { functionName, url } = frame;
+    if (!url) return functionName === "(idle)" ? "(idle)" : functionName === "(garbage collector)" ? "V8 garbage collector" : "V8 / native";
+    if (url.startsWith("node:")) return "Node.js built-ins";
+    const file = url.replace(/^file:\/\//, "");
+    if (file.includes(`/${DIST}/`)) {
+      const entry = sourceMap(file)?.findEntry(frame.lineNumber, frame.columnNumber);
+      const original = entry && "originalSource" in entry ? entry.originalSource : undefined;
+      return original ? fromPath(original) : "app bundle (no source map)";
+    }
+    return fromPath(file);
+  };
 }
 
-function writeSection(results: Result[], database: DatabaseTime | undefined, profile: ProfileLine[]) {
+/** The lookup-only CPU profile summarised by area and by function (self time). */
+function summariseProfile(requests: number, window: { fromUs: number; toUs: number }): ProfileSummary | undefined {
+  if (!fs.existsSync(PROFILE_DIR)) return undefined;
+  const file = fs.readdirSync(PROFILE_DIR).find((f) => f.endsWith(".cpuprofile"));
+  if (!file) return undefined;
+  const profile = JSON.parse(fs.readFileSync(path.join(PROFILE_DIR, file), "utf8")) as {
+    nodes: { id: number; callFrame: { functionName: string; url: string; lineNumber: number; columnNumber: number } }[];
+    startTime: number;
+    samples: number[];
+    timeDeltas: number[];
+  };
+  // Only the samples taken while the profiled load ran (not start-up, warm-up or shutdown).
+  const hitsById = new Map<number, number>();
+  let at = profile.startTime;
+  let total = 0;
+  profile.samples.forEach((id, i) => {
+    at += profile.timeDeltas[i] ?? 0;
+    if (at < window.fromUs || at > window.toUs) return;
+    hitsById.set(id, (hitsById.get(id) ?? 0) + 1);
+    total++;
+  });
+  if (!total) return undefined;
+  const usPerHit = (window.toUs - window.fromUs) / total;
+  const locate = makeLocator();
+  const areas = new Map<string, number>();
+  const functions = new Map<string, number>();
+  let idle = 0;
+  for (const n of profile.nodes) {
+    const hits = hitsById.get(n.id) ?? 0;
+    if (!hits) continue;
+    const area = locate(n.callFrame);
+    if (area === "(idle)") {
+      idle += hits;
+      continue;
+    }
+    areas.set(area, (areas.get(area) ?? 0) + hits);
+    const key = `${n.callFrame.functionName || "(anonymous)"} — ${area}`;
+    functions.set(key, (functions.get(key) ?? 0) + hits);
+  }
+  const busy = total - idle || 1;
+  const rank = (m: Map<string, number>) => [...m.entries()].sort((a, b) => b[1] - a[1]);
+  return {
+    requests,
+    idlePct: (100 * idle) / total,
+    byArea: rank(areas).map(([area, hits]) => ({ area, busyPct: (100 * hits) / busy, usPerRequest: requests ? (hits * usPerHit) / requests : NaN })),
+    topFunctions: rank(functions)
+      .slice(0, 15)
+      .map(([what, hits]) => ({ what, busyPct: (100 * hits) / busy })),
+  };
+}
+
+function writeSection(results: Result[], database: DatabaseTime | undefined, profile: ProfileSummary | undefined, loadAtStart: number) {
   const cpu = os.cpus();
   const row = (r: Result) => `| ${r.target} | ${r.concurrency} | ${r.requests.toLocaleString("en")} | ${r.rps.toFixed(0)} | ${r.p50.toFixed(2)} | ${r.p99.toFixed(2)} | ${r.errors} |`;
   const find = (target: string, c: number) => results.find((r) => r.concurrency === c && r.target === target);
@@ -259,10 +348,14 @@ function writeSection(results: Result[], database: DatabaseTime | undefined, pro
     "## Serial lookup, floor and OpenAPI (one run)",
     "",
     "Command: `npm run seed:scale && npm run bench:lookup` (bench/lookup.ts, bench/bare-lookup-server.mjs). 10,000,000 serials in 100,000 lots (prefix TCX); random serials; closed-loop load generator (node:http, keep-alive) on loopback, " +
-      `${DURATION_S} s per run after a 3 s warm-up. The app is scripts/serve.mjs on a production build, started with \`--cpu-prof\`; the lookup uses an API token of the support account with rate limiting on ` +
+      `${DURATION_S} s per run after a 3 s warm-up. The app is scripts/serve.mjs on a production build (no profiler during the measured runs); the lookup uses an API token of the support account with rate limiting on ` +
       "(counted in process and sent to PostgreSQL in batches; the budget set high enough that the run is never refused). The floor is `/api/health/live` (a route handler with no I/O); the bare handler is node:http + pg running the lot query as a named prepared statement, no framework.",
     "",
-    `Machine: Node ${process.version}, ${cpu.length} × ${cpu[0]?.model.trim() ?? "CPU"}, ${os.platform()}, load average ${os.loadavg()[0]!.toFixed(1)} at the end of the run. **Loaded machine**: 2 cores shared with seven other engineers' builds and tests while this ran, and the load generator, app, bare handler and PostgreSQL share them too; absolute figures are low and noisy, so compare only figures from this same run (the ratios). Run ${new Date().toISOString().slice(0, 16).replace("T", " ")} UTC.`,
+    `Machine: Node ${process.version}, ${cpu.length} × ${cpu[0]?.model.trim() ?? "CPU"}, ${os.platform()}; load average (1 min) ${loadAtStart.toFixed(1)} before the run and ${os.loadavg()[0]!.toFixed(1)} at its end. ` +
+      (loadAtStart < 1.5
+        ? "The machine was otherwise quiet, but the load generator, the app, the bare handler and PostgreSQL share its two cores, so the absolute figures are lower than on a server with the load generator elsewhere. "
+        : "**Loaded machine**: other work shared the two cores while this ran (besides the load generator, app, bare handler and PostgreSQL); absolute figures are low and noisy. ") +
+      `Compare figures within this run (the ratios). Run ${new Date().toISOString().slice(0, 16).replace("T", " ")} UTC.`,
     "",
     "| target | concurrent | requests | req/s | p50 ms | p99 ms | non-200 |",
     "|---|---:|---:|---:|---:|---:|---:|",
@@ -275,11 +368,21 @@ function writeSection(results: Result[], database: DatabaseTime | undefined, pro
     database
       ? `- Inside PostgreSQL: the lookup's statement (lot walk + builds + slots, one round trip) executes in ${database.meanMs.toFixed(3)} ms on average, p99 ${database.p99Ms.toFixed(3)} ms (EXPLAIN ANALYZE, ${database.samples} random serials, same run).`
       : "- Inside PostgreSQL: not measured in this run.",
-    "- App CPU profile (`--cpu-prof`, whole run, all targets; self time, top 20):",
-    "",
-    "| function — where | self % |",
-    "|---|---:|",
-    ...profile.map((p) => `| ${p.what.replace(/\|/g, "\\|")} | ${p.selfPct.toFixed(1)} |`),
+    ...(profile
+      ? [
+          `- In the app (a fresh instance under \`--cpu-prof\` serving only the lookup, 10 concurrent, ${PROFILE_S} s, ${profile.requests.toLocaleString("en")} requests; idle ${profile.idlePct.toFixed(0)} % of the profile, left out below). Frames in the app bundle are placed through its source maps. The µs column is the share times the window's wall time over the requests served, so it is the app's time per lookup at this concurrency, queueing for a core included:`,
+          "",
+          "| where the code lives | share of busy samples | µs of app time per lookup |",
+          "|---|---:|---:|",
+          ...profile.byArea.slice(0, 14).map((a) => `| ${a.area} | ${a.busyPct.toFixed(1)} % | ${a.usPerRequest.toFixed(0)} |`),
+          "",
+          "Busiest functions (self time, share of busy CPU):",
+          "",
+          "| function — where | self % |",
+          "|---|---:|",
+          ...profile.topFunctions.map((p) => `| ${p.what.replace(/\|/g, "\\|")} | ${p.busyPct.toFixed(1)} |`),
+        ]
+      : ["- App CPU profile: not taken in this run."]),
     "<!-- bench:lookup:end -->",
   ].join("\n");
   const file = path.join(root, "docs", "benchmarks.md");

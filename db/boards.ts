@@ -1,9 +1,7 @@
 import "server-only";
 import { asc, count, eq } from "drizzle-orm";
-import { boardModels, boardRevisions, productionLots, type BoardRevision } from "./schema";
-import type { Database, Executor } from "./client";
-import { recordAudit, type AuditActor } from "./audit";
-import { AppError } from "@/lib/api/errors";
+import { boardModels, boardRevisions, productionLots, type BoardModel, type BoardRevision } from "./schema";
+import type { Executor } from "./client";
 import { compareVersions } from "@/lib/engine";
 
 export type BoardRevisionInput = Pick<
@@ -11,7 +9,7 @@ export type BoardRevisionInput = Pick<
   "revision" | "memoryBytes" | "baseAddress" | "slotCount" | "maxPointsPerCurve" | "pwmFrequencyHz" | "tachPulsesPerRev" | "notes"
 >;
 
-const revisionView = (r: BoardRevision) => ({
+export const revisionView = (r: BoardRevision) => ({
   id: r.id,
   boardModelId: r.boardModelId,
   revision: r.revision,
@@ -29,16 +27,11 @@ export function sortRevisions<T extends { revision: string }>(rows: T[]): T[] {
   return [...rows].sort((a, b) => compareVersions(a.revision, b.revision));
 }
 
+/** Every board model by name, each with its revisions in semver order: the one board-model list (registry, build and lot forms). */
 export async function listBoardModels(db: Executor) {
   const models = await db.select().from(boardModels).orderBy(asc(boardModels.name));
   const revisions = await db.select().from(boardRevisions);
-  return models.map((m) => ({
-    id: m.id,
-    name: m.name,
-    serialPrefix: m.serialPrefix,
-    description: m.description,
-    revisions: sortRevisions(revisions.filter((r) => r.boardModelId === m.id)).map(revisionView),
-  }));
+  return models.map((m) => boardModelView(m, revisions.filter((r) => r.boardModelId === m.id)));
 }
 
 export async function listRevisionsOfModel(db: Executor, { boardModelId }: { boardModelId: string }) {
@@ -54,64 +47,56 @@ export async function getBoardRevision(db: Executor, { id }: { id: string }) {
   return row ? { revision: revisionView(row.revision), boardModelName: row.boardModelName } : undefined;
 }
 
-export async function createBoardModel(db: Database, actor: AuditActor, input: { name: string; serialPrefix: string; description: string }) {
-  return db.transaction(async (tx) => {
-    const [row] = await tx.insert(boardModels).values(input).returning();
-    if (!row) throw new AppError("internal", "The board model was not created.");
-    await recordAudit(tx, actor, { action: "board_model.create", entityType: "board_model", entityId: row.id, after: row });
-    return { id: row.id, name: row.name, serialPrefix: row.serialPrefix, description: row.description, revisions: [] };
-  });
+/** A board model, locked until the transaction ends (an update reads it, judges, then writes). */
+export async function lockBoardModel(tx: Executor, { id }: { id: string }) {
+  const [row] = await tx.select().from(boardModels).where(eq(boardModels.id, id)).for("update");
+  return row;
 }
 
-export async function createBoardRevision(db: Database, actor: AuditActor, { boardModelId, ...input }: BoardRevisionInput & { boardModelId: string }) {
-  return db.transaction(async (tx) => {
-    const [model] = await tx.select().from(boardModels).where(eq(boardModels.id, boardModelId));
-    if (!model) throw new AppError("not_found", "No such board model.");
-    const [row] = await tx.insert(boardRevisions).values({ ...input, boardModelId }).returning();
-    if (!row) throw new AppError("internal", "The revision was not created.");
-    await recordAudit(tx, actor, { action: "board_revision.create", entityType: "board_revision", entityId: row.id, after: row });
-    return revisionView(row);
-  });
+/** A board revision's own row, locked until the transaction ends. */
+export async function lockBoardRevision(tx: Executor, { id }: { id: string }) {
+  const [row] = await tx.select().from(boardRevisions).where(eq(boardRevisions.id, id)).for("update");
+  return row;
 }
 
-export async function updateBoardModel(db: Database, actor: AuditActor, { id, ...input }: { id: string; name: string; serialPrefix: string; description: string }) {
-  return db.transaction(async (tx) => {
-    const [before] = await tx.select().from(boardModels).where(eq(boardModels.id, id)).for("update");
-    if (!before) throw new AppError("not_found", "No such board model.");
-    if (input.serialPrefix !== before.serialPrefix) {
-      // Shipped serials carry the prefix; support looks boards up by it.
-      const [lots] = await tx.select({ n: count() }).from(productionLots).where(eq(productionLots.boardModelId, id));
-      if ((lots?.n ?? 0) > 0)
-        throw new AppError("conflict", `Boards of this model have shipped in ${lots!.n} production lot(s); the serial prefix cannot change.`, {
-          issues: [{ path: "/serialPrefix", message: "Keep the prefix once lots exist." }],
-        });
-    }
-    const [row] = await tx.update(boardModels).set({ ...input, updatedAt: new Date() }).where(eq(boardModels.id, id)).returning();
-    if (!row) throw new AppError("internal", "The board model was not updated.");
-    await recordAudit(tx, actor, { action: "board_model.update", entityType: "board_model", entityId: id, before, after: row });
-    const revisions = await listRevisionsOfModel(tx, { boardModelId: id });
-    return { id: row.id, name: row.name, serialPrefix: row.serialPrefix, description: row.description, revisions: revisions.map(revisionView) };
-  });
+/** Whether the board model exists, share-locked so it cannot be removed before the caller's insert. */
+export async function boardModelExists(tx: Executor, { id }: { id: string }): Promise<boolean> {
+  const [row] = await tx.select({ id: boardModels.id }).from(boardModels).where(eq(boardModels.id, id)).for("share");
+  return !!row;
 }
 
-/** Fields that describe the flashed memory layout: fixed once boards of the revision have shipped. */
-const LAYOUT_FIELDS = ["revision", "memoryBytes", "baseAddress", "slotCount", "maxPointsPerCurve", "pwmFrequencyHz", "tachPulsesPerRev"] as const;
+/** How many production lots name this board model, or this board revision. */
+export async function countLotsOf(db: Executor, by: { boardModelId: string } | { boardRevisionId: string }): Promise<number> {
+  const where = "boardModelId" in by ? eq(productionLots.boardModelId, by.boardModelId) : eq(productionLots.boardRevisionId, by.boardRevisionId);
+  const [row] = await db.select({ n: count() }).from(productionLots).where(where);
+  return row?.n ?? 0;
+}
 
-export async function updateBoardRevision(db: Database, actor: AuditActor, { id, ...input }: BoardRevisionInput & { id: string }) {
-  return db.transaction(async (tx) => {
-    const [before] = await tx.select().from(boardRevisions).where(eq(boardRevisions.id, id)).for("update");
-    if (!before) throw new AppError("not_found", "No such board revision.");
-    const changed = LAYOUT_FIELDS.filter((k) => input[k] !== before[k]);
-    if (changed.length > 0) {
-      const [lots] = await tx.select({ n: count() }).from(productionLots).where(eq(productionLots.boardRevisionId, id));
-      if ((lots?.n ?? 0) > 0)
-        throw new AppError("conflict", `Boards of revision ${before.revision} have shipped in ${lots!.n} production lot(s); only the notes can change. Add a new revision instead.`, {
-          issues: changed.map((k) => ({ path: `/${k}`, message: "Fixed once boards have shipped." })),
-        });
-    }
-    const [row] = await tx.update(boardRevisions).set({ ...input, updatedAt: new Date() }).where(eq(boardRevisions.id, id)).returning();
-    if (!row) throw new AppError("internal", "The revision was not updated.");
-    await recordAudit(tx, actor, { action: "board_revision.update", entityType: "board_revision", entityId: id, before, after: row });
-    return revisionView(row);
-  });
+export async function insertBoardModel(tx: Executor, input: { name: string; serialPrefix: string; description: string }) {
+  const [row] = await tx.insert(boardModels).values(input).returning();
+  if (!row) throw new Error("INSERT … RETURNING gave no row");
+  return row;
+}
+
+export async function updateBoardModelRow(tx: Executor, { id, ...input }: { id: string; name: string; serialPrefix: string; description: string }) {
+  const [row] = await tx.update(boardModels).set({ ...input, updatedAt: new Date() }).where(eq(boardModels.id, id)).returning();
+  if (!row) throw new Error("UPDATE … RETURNING gave no row");
+  return row;
+}
+
+export async function insertBoardRevision(tx: Executor, input: BoardRevisionInput & { boardModelId: string }) {
+  const [row] = await tx.insert(boardRevisions).values(input).returning();
+  if (!row) throw new Error("INSERT … RETURNING gave no row");
+  return row;
+}
+
+export async function updateBoardRevisionRow(tx: Executor, { id, ...input }: BoardRevisionInput & { id: string }) {
+  const [row] = await tx.update(boardRevisions).set({ ...input, updatedAt: new Date() }).where(eq(boardRevisions.id, id)).returning();
+  if (!row) throw new Error("UPDATE … RETURNING gave no row");
+  return row;
+}
+
+/** A board model with its revisions in semver order, as the API shows it. */
+export function boardModelView(m: BoardModel, revisions: BoardRevision[]) {
+  return { id: m.id, name: m.name, serialPrefix: m.serialPrefix, description: m.description, revisions: sortRevisions(revisions).map(revisionView) };
 }

@@ -1,10 +1,8 @@
 import "server-only";
 import { asc, desc, eq, inArray } from "drizzle-orm";
-import { boardModels, buildReviews, builds, buildSlots, buildTransitions, coolerModels, profiles, profileVersions, uploads, users, type BuildStage } from "./schema";
-import type { Database, Executor } from "./client";
+import { boardModels, buildReviews, builds, buildSlots, buildTransitions, coolerModels, profiles, profileVersions, users, type BuildStage } from "./schema";
+import type { Executor } from "./client";
 import { listVersionsWithHardware } from "./profile-versions";
-import { recordAudit, type AuditActor } from "./audit";
-import { AppError } from "@/lib/api/errors";
 import type { BuildSlotFacts } from "@/lib/release/build-check";
 
 /** Build columns without the image bytes: what lists and pages need. */
@@ -169,38 +167,29 @@ export interface NewBuildInput {
   boardModelId: string;
   version: string;
   revisionRange: string;
+  authorUserId: string;
   firmwareUploadId: string;
   profileVersionIds: string[];
   bank: { image: Uint8Array; bankBytes: number; sha256: string; crc32: number };
 }
 
-/** Creates a draft build with its slots and bank image, and its audit event, in one transaction. */
-export async function createBuild(db: Database, actor: AuditActor & { userId: string }, input: NewBuildInput) {
-  return db.transaction(async (tx) => {
-    const [fw] = await tx.select({ id: uploads.id, kind: uploads.kind }).from(uploads).where(eq(uploads.id, input.firmwareUploadId)).limit(1);
-    if (!fw || fw.kind !== "firmware") throw new AppError("validation_failed", "Upload the firmware image first; that upload is not a firmware image.", { issues: [{ path: "/firmwareUploadId", message: "Not a firmware upload." }] });
-    const [row] = await tx
-      .insert(builds)
-      .values({
-        boardModelId: input.boardModelId,
-        version: input.version,
-        revisionRange: input.revisionRange,
-        authorUserId: actor.userId,
-        firmwareUploadId: input.firmwareUploadId,
-        bankImage: input.bank.image,
-        bankBytes: input.bank.bankBytes,
-        bankSha256: input.bank.sha256,
-        bankCrc32: input.bank.crc32,
-      })
-      .returning({ id: builds.id, version: builds.version, stage: builds.stage });
-    if (!row) throw new AppError("internal", "The build was not created.");
-    await tx.insert(buildSlots).values(input.profileVersionIds.map((profileVersionId, slotIndex) => ({ buildId: row.id, slotIndex, profileVersionId })));
-    await recordAudit(tx, actor, {
-      action: "build.create",
-      entityType: "build",
-      entityId: row.id,
-      after: { version: input.version, revisionRange: input.revisionRange, slots: input.profileVersionIds, bankSha256: input.bank.sha256, bankBytes: input.bank.bankBytes },
-    });
-    return row;
-  });
+/** Writes a draft build with its slots (in slot order) and bank image; call inside the transaction that audits it. */
+export async function insertBuild(tx: Executor, input: NewBuildInput) {
+  const [row] = await tx
+    .insert(builds)
+    .values({
+      boardModelId: input.boardModelId,
+      version: input.version,
+      revisionRange: input.revisionRange,
+      authorUserId: input.authorUserId,
+      firmwareUploadId: input.firmwareUploadId,
+      bankImage: input.bank.image,
+      bankBytes: input.bank.bankBytes,
+      bankSha256: input.bank.sha256,
+      bankCrc32: input.bank.crc32,
+    })
+    .returning({ id: builds.id, version: builds.version, stage: builds.stage });
+  if (!row) throw new Error("INSERT … RETURNING gave no row");
+  await tx.insert(buildSlots).values(input.profileVersionIds.map((profileVersionId, slotIndex) => ({ buildId: row.id, slotIndex, profileVersionId })));
+  return row;
 }

@@ -1,15 +1,14 @@
 import "server-only";
-import { and, count, eq, ilike, type SQL } from "drizzle-orm";
+import { and, count, eq, ilike, inArray, type SQL } from "drizzle-orm";
 import { components, type Component } from "./schema";
-import type { Database, Executor } from "./client";
-import { recordAudit, type AuditActor } from "./audit";
+import type { Executor } from "./client";
 import { likeText, orderFor, pageWindow } from "./list-helpers";
-import { AppError } from "@/lib/api/errors";
 
 export type ComponentInput = Pick<
   Component,
   "kind" | "name" | "minDutyPct" | "rpmAtMinDuty" | "maxRpm" | "tachPulsesPerRev" | "refSoundDbA" | "refRpm" | "soundExponent" | "flowAtMaxRpmLpm"
->;
+> &
+  Partial<Pick<Component, "soundTable" | "stopsAtZeroDuty">>;
 
 const SORT_COLUMNS = {
   name: components.name,
@@ -40,22 +39,27 @@ export async function listComponents(
   return { items, total: total?.n ?? 0, page: f.page, pageSize: f.pageSize };
 }
 
-export async function createComponent(db: Database, actor: AuditActor, input: ComponentInput): Promise<Component> {
-  return db.transaction(async (tx) => {
-    const [row] = await tx.insert(components).values(input).returning();
-    if (!row) throw new AppError("internal", "The component was not created.");
-    await recordAudit(tx, actor, { action: "component.create", entityType: "component", entityId: row.id, after: row });
-    return row;
-  });
+/** A component's row, locked until the transaction ends. */
+export async function lockComponent(tx: Executor, { id }: { id: string }) {
+  const [row] = await tx.select().from(components).where(eq(components.id, id)).for("update");
+  return row;
 }
 
-export async function updateComponent(db: Database, actor: AuditActor, { id, ...input }: ComponentInput & { id: string }): Promise<Component> {
-  return db.transaction(async (tx) => {
-    const [before] = await tx.select().from(components).where(eq(components.id, id)).for("update");
-    if (!before) throw new AppError("not_found", "No such component.");
-    const [row] = await tx.update(components).set({ ...input, updatedAt: new Date() }).where(eq(components.id, id)).returning();
-    if (!row) throw new AppError("internal", "The component was not updated.");
-    await recordAudit(tx, actor, { action: "component.update", entityType: "component", entityId: id, before, after: row });
-    return row;
-  });
+/** The kinds of the components with these ids (fan or pump); ids no component has are absent. */
+export async function componentKinds(db: Executor, { ids }: { ids: string[] }): Promise<Map<string, Component["kind"]>> {
+  if (ids.length === 0) return new Map();
+  const rows = await db.select({ id: components.id, kind: components.kind }).from(components).where(inArray(components.id, ids));
+  return new Map(rows.map((r) => [r.id, r.kind]));
+}
+
+export async function insertComponent(tx: Executor, input: ComponentInput): Promise<Component> {
+  const [row] = await tx.insert(components).values(input).returning();
+  if (!row) throw new Error("INSERT … RETURNING gave no row");
+  return row;
+}
+
+export async function updateComponentRow(tx: Executor, { id, ...input }: ComponentInput & { id: string }): Promise<Component> {
+  const [row] = await tx.update(components).set({ ...input, updatedAt: new Date() }).where(eq(components.id, id)).returning();
+  if (!row) throw new Error("UPDATE … RETURNING gave no row");
+  return row;
 }

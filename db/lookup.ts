@@ -87,6 +87,7 @@ function buildLookupBySerial(db: Database) {
       profileName: profiles.name,
       cooler: {
         name: coolerModels.name,
+        radiatorMm: coolerModels.radiatorMm,
         fanCount: coolerModels.fanCount,
         radiatorKPerWAtMinFan: coolerModels.radiatorKPerWAtMinFan,
         radiatorKPerWAtMaxFan: coolerModels.radiatorKPerWAtMaxFan,
@@ -101,6 +102,8 @@ function buildLookupBySerial(db: Database) {
         refSoundDbA: fan.refSoundDbA,
         refRpm: fan.refRpm,
         soundExponent: fan.soundExponent,
+        soundTable: fan.soundTable,
+        stopsAtZeroDuty: fan.stopsAtZeroDuty,
         flowAtMaxRpmLpm: fan.flowAtMaxRpmLpm,
       },
       pump: {
@@ -113,6 +116,8 @@ function buildLookupBySerial(db: Database) {
         refSoundDbA: pump.refSoundDbA,
         refRpm: pump.refRpm,
         soundExponent: pump.soundExponent,
+        soundTable: pump.soundTable,
+        stopsAtZeroDuty: pump.stopsAtZeroDuty,
         flowAtMaxRpmLpm: pump.flowAtMaxRpmLpm,
       },
     })

@@ -1,80 +1,33 @@
 import "server-only";
-import { sortRevisions } from "./boards";
 import { and, asc, count, desc, eq, inArray, sql, sum, type SQL } from "drizzle-orm";
-import { boardModels, boardRevisions, builds, buildTransitions, productionLots, users, type ProductionLot } from "./schema";
-import type { Database, Executor } from "./client";
-import { recordAudit, recordAuditMany, type AuditActor } from "./audit";
-import { AppError } from "@/lib/api/errors";
-import { satisfiesRange } from "@/lib/versioning/semver-helpers";
-import { formatSerial, parseSerial } from "@/lib/serials/serial";
-import type { LotInput } from "@/lib/lots/input";
-
-/** Stages whose builds the factory may flash, so a lot may name them. */
-export const LOT_STAGES = ["pilot", "production"] as const;
-
-export interface ResolvedLot {
-  lotCode: string;
-  boardModelId: string;
-  boardRevisionId: string;
-  buildId: string;
-  serialFrom: number;
-  serialTo: number;
-  producedOn: string;
-  line: string;
-}
-
-/** A problem with one field of a lot, for forms and CSV rows. */
-export interface LotFieldIssue {
-  field: keyof LotInput;
-  message: string;
-}
+import { boardModels, boardRevisions, builds, buildTransitions, productionLots, users, type BuildStage, type ProductionLot } from "./schema";
+import type { Executor } from "./client";
+import type { LotKeys, ResolvedLot } from "@/lib/lots/rules";
 
 /**
- * Looks up the natural keys of a lot (serial prefix → board model, revision, build
- * version) and checks the rules the database cannot express simply: the build is at
- * pilot or production and its revision range includes the board revision. With
- * `lockBuild` the build row is share-locked until the transaction ends, so it cannot
- * be withdrawn between this check and the insert.
+ * What a lot's natural keys name: the board model of the serial prefix, and that model's
+ * revision and build with the given numbers (each absent when there is none). With
+ * `lockBuild` the build row is share-locked until the transaction ends, so it cannot be
+ * withdrawn between the caller's check and its insert.
  */
-export async function resolveLot(tx: Executor, lot: LotInput, { lockBuild }: { lockBuild: boolean }): Promise<{ resolved?: ResolvedLot; issues: LotFieldIssue[] }> {
-  const from = parseSerial(lot.serialFrom);
-  const to = parseSerial(lot.serialTo);
-  if (!from.ok || !to.ok) return { issues: [{ field: "serialFrom", message: "Give both serials as PREFIX-NUMBER." }] };
-  const [model] = await tx.select().from(boardModels).where(eq(boardModels.serialPrefix, from.serial.prefix)).limit(1);
-  if (!model) return { issues: [{ field: "serialFrom", message: `No board model uses the serial prefix ${from.serial.prefix}.` }] };
-  const issues: LotFieldIssue[] = [];
-  const [revision] = await tx
-    .select()
+export async function findLotKeys(
+  tx: Executor,
+  { serialPrefix, revision, buildVersion, lockBuild }: { serialPrefix: string; revision: string; buildVersion: string; lockBuild: boolean },
+): Promise<LotKeys> {
+  const [model] = await tx.select({ id: boardModels.id, name: boardModels.name }).from(boardModels).where(eq(boardModels.serialPrefix, serialPrefix)).limit(1);
+  if (!model) return {};
+  const [found] = await tx
+    .select({ id: boardRevisions.id, revision: boardRevisions.revision })
     .from(boardRevisions)
-    .where(and(eq(boardRevisions.boardModelId, model.id), eq(boardRevisions.revision, lot.boardRevision)))
+    .where(and(eq(boardRevisions.boardModelId, model.id), eq(boardRevisions.revision, revision)))
     .limit(1);
-  if (!revision) issues.push({ field: "boardRevision", message: `${model.name} has no revision ${lot.boardRevision}.` });
   const buildQuery = tx
     .select({ id: builds.id, version: builds.version, stage: builds.stage, revisionRange: builds.revisionRange })
     .from(builds)
-    .where(and(eq(builds.boardModelId, model.id), eq(builds.version, lot.buildVersion)))
+    .where(and(eq(builds.boardModelId, model.id), eq(builds.version, buildVersion)))
     .limit(1);
   const [build] = lockBuild ? await buildQuery.for("share") : await buildQuery;
-  if (!build) issues.push({ field: "buildVersion", message: `${model.name} has no build ${lot.buildVersion}.` });
-  else if (!(LOT_STAGES as readonly string[]).includes(build.stage)) {
-    issues.push({ field: "buildVersion", message: `Build ${build.version} is at stage "${build.stage}"; lots may only name builds at pilot or production.` });
-  } else if (revision && !satisfiesRange(revision.revision, build.revisionRange)) {
-    issues.push({ field: "boardRevision", message: `Build ${build.version} is for board revisions ${build.revisionRange}; revision ${revision.revision} is outside it.` });
-  }
-  if (issues.length || !revision || !build) return { issues };
-  return {
-    issues,
-    resolved: {
-      lotCode: lot.lotCode,
-      boardModelId: model.id,
-      boardRevisionId: revision.id,
-      buildId: build.id,
-      serialFrom: from.serial.number,
-      serialTo: to.serial.number,
-      producedOn: lot.producedOn,
-      line: lot.line,
-    },
-  };
+  return { model, revision: found, build };
 }
 
 /** The lot whose serial range shares a serial with [from, to] on this board model, through the exclusion constraint's GiST index. */
@@ -93,166 +46,29 @@ export async function findOverlappingLot(db: Executor, { boardModelId, serialFro
   return row;
 }
 
-export function overlapMessage(lot: { lotCode: string; serialFrom: number; serialTo: number; prefix: string }): string {
-  return `Those serials overlap lot ${lot.lotCode} (${formatSerial(lot.prefix, lot.serialFrom)} to ${formatSerial(lot.prefix, lot.serialTo)}). Serial ranges of one board model never overlap; check the range.`;
+/** Writes one lot; an overlapping range is refused by the exclusion constraint (a storage failure of kind "exclusion"). */
+export async function insertLot(tx: Executor, lot: ResolvedLot): Promise<ProductionLot> {
+  const [row] = await tx.insert(productionLots).values(lot).returning();
+  if (!row) throw new Error("INSERT … RETURNING gave no row");
+  return row;
 }
 
-function isExclusionViolation(err: unknown): boolean {
-  let e: unknown = err;
-  for (let i = 0; i < 3 && e && typeof e === "object"; i++) {
-    if ((e as { code?: unknown }).code === "23P01") return true;
-    e = (e as { cause?: unknown }).cause;
-  }
-  return false;
+/** Writes a batch of lots in one statement. */
+export async function insertLots(tx: Executor, lots: ResolvedLot[]): Promise<ProductionLot[]> {
+  return lots.length ? tx.insert(productionLots).values(lots).returning() : [];
 }
 
-function issuesError(issues: LotFieldIssue[]): AppError {
-  return new AppError("validation_failed", issues[0]?.message ?? "The lot is not valid.", { issues: issues.map((i) => ({ path: `/${i.field}`, message: i.message })) });
-}
-
-/** Records one production lot with its audit event; an overlapping range is refused by PostgreSQL and named here. */
-export async function createLot(db: Database, actor: AuditActor, lot: LotInput): Promise<ProductionLot> {
-  let attempted: ResolvedLot | undefined;
-  try {
-    return await db.transaction(async (tx) => {
-      const { resolved, issues } = await resolveLot(tx, lot, { lockBuild: true });
-      if (!resolved) throw issuesError(issues);
-      attempted = resolved;
-      const [row] = await tx.insert(productionLots).values(resolved).returning();
-      if (!row) throw new AppError("internal", "The lot was not recorded.");
-      await recordAudit(tx, actor, { action: "lot.create", entityType: "production_lot", entityId: row.id, after: row });
-      return row;
-    });
-  } catch (err) {
-    // The transaction is rolled back by now, so the lot in the way can be read.
-    if (attempted && isExclusionViolation(err)) {
-      const other = await findOverlappingLot(db, attempted);
-      throw new AppError("conflict", other ? overlapMessage(other) : "Those serials overlap an existing lot of this board model.");
-    }
-    throw err;
-  }
-}
-
-export interface LotRowIssue {
-  row: number;
-  column: string;
-  message: string;
-}
-
-const COLUMN_OF: Record<keyof LotInput, string> = {
-  lotCode: "lot_code",
-  boardRevision: "board_revision",
-  buildVersion: "build_version",
-  serialFrom: "serial_from",
-  serialTo: "serial_to",
-  producedOn: "produced_on",
-  line: "line",
-};
-
-/** Thrown inside the transaction to roll back a dry run or a file with bad rows. */
-class RollBack extends Error {
-  constructor(readonly issues: LotRowIssue[]) {
-    super("roll back");
-  }
-}
-
-/** Rows checked and written per statement: 1,000 lots × 7 columns stays far below PostgreSQL's 65,535 parameters. */
-const IMPORT_BATCH = 1000;
-
-/** How far an import has got, for a progress bar: rows checked against the database, then rows written. */
-export interface ImportProgress {
-  phase: "checking" | "writing";
-  done: number;
-  total: number;
-}
-
-/** Thrown between batches when the client has gone (cancelled); the transaction rolls back. */
-export class ImportCancelled extends Error {
-  constructor() {
-    super("The import was cancelled; nothing was recorded.");
-  }
-}
-
-/**
- * Checks parsed CSV rows against the database (board, revision, build stage and
- * range, existing lot codes and overlapping lots) and, unless this is a dry run,
- * inserts them all in ONE transaction with one audit event per lot. Any bad row
- * means nothing is written; the issues name row, column and problem.
- *
- * Built for files of 100,000 lots: the natural keys (prefix, revision, build version) are
- * looked up once per distinct combination, lot codes and overlaps are checked a batch at a
- * time, and lots and their audit events are inserted a batch per statement. `onProgress`
- * hears after each batch; an aborted `signal` stops between batches and rolls everything back.
- */
-export async function importLots(
-  db: Database,
-  actor: AuditActor,
-  { rows, dryRun, onProgress, signal }: { rows: { row: number; lot: LotInput }[]; dryRun: boolean; onProgress?: (p: ImportProgress) => void | Promise<void>; signal?: AbortSignal },
-): Promise<{ issues: LotRowIssue[]; committed: number; checked: number }> {
-  const stopIfCancelled = () => {
-    if (signal?.aborted) throw new ImportCancelled();
-  };
-  try {
-    const committed = await db.transaction(async (tx) => {
-      const issues: LotRowIssue[] = [];
-      const ready: { row: number; lot: ResolvedLot }[] = [];
-      // One lookup per distinct (prefix, revision, build version); a factory file repeats a handful.
-      const keyed = new Map<string, Promise<{ resolved?: ResolvedLot; issues: LotFieldIssue[] }>>();
-      for (let at = 0; at < rows.length; at += IMPORT_BATCH) {
-        stopIfCancelled();
-        const batch: { row: number; lot: ResolvedLot }[] = [];
-        for (const { row, lot } of rows.slice(at, at + IMPORT_BATCH)) {
-          const prefix = parseSerial(lot.serialFrom);
-          const key = `${prefix.ok ? prefix.serial.prefix : lot.serialFrom}\u0000${lot.boardRevision}\u0000${lot.buildVersion}`;
-          let pending = keyed.get(key);
-          if (!pending) {
-            pending = resolveLot(tx, lot, { lockBuild: !dryRun });
-            keyed.set(key, pending);
-          }
-          const { resolved, issues: found } = await pending;
-          for (const i of found) issues.push({ row, column: COLUMN_OF[i.field], message: i.message });
-          if (!resolved) continue;
-          const from = parseSerial(lot.serialFrom);
-          const to = parseSerial(lot.serialTo);
-          if (!from.ok || !to.ok) continue;
-          batch.push({ row, lot: { ...resolved, lotCode: lot.lotCode, serialFrom: from.serial.number, serialTo: to.serial.number, producedOn: lot.producedOn, line: lot.line } });
-        }
-        const taken = batch.length
-          ? new Set((await tx.select({ code: productionLots.lotCode }).from(productionLots).where(inArray(productionLots.lotCode, batch.map((b) => b.lot.lotCode)))).map((r) => r.code))
-          : new Set<string>();
-        const overlaps = await findOverlappingLots(tx, batch.map((b) => b.lot));
-        batch.forEach((b, i) => {
-          const dup = taken.has(b.lot.lotCode);
-          if (dup) issues.push({ row: b.row, column: "lot_code", message: `Lot ${b.lot.lotCode} is already recorded.` });
-          const other = overlaps.get(i);
-          if (other) issues.push({ row: b.row, column: "serial_from", message: overlapMessage(other) });
-          if (!dup && !other) ready.push(b);
-        });
-        await onProgress?.({ phase: "checking", done: Math.min(at + IMPORT_BATCH, rows.length), total: rows.length });
-      }
-      if (issues.length || dryRun) throw new RollBack(issues);
-      for (let at = 0; at < ready.length; at += IMPORT_BATCH) {
-        stopIfCancelled();
-        const inserted = await tx.insert(productionLots).values(ready.slice(at, at + IMPORT_BATCH).map((r) => r.lot)).returning();
-        await recordAuditMany(tx, actor, inserted.map((lot) => ({ action: "lot.import", entityType: "production_lot", entityId: lot.id, after: lot })));
-        await onProgress?.({ phase: "writing", done: Math.min(at + IMPORT_BATCH, ready.length), total: ready.length });
-      }
-      stopIfCancelled();
-      return ready.length;
-    });
-    return { issues: [], committed, checked: rows.length };
-  } catch (err) {
-    if (err instanceof RollBack) return { issues: err.issues.sort((a, b) => a.row - b.row), committed: 0, checked: rows.length };
-    if (isExclusionViolation(err)) throw new AppError("conflict", "Another lot overlapping these serials was recorded at the same moment; nothing was imported. Run the preview again.");
-    throw err;
-  }
+/** Which of these lot codes are already recorded. */
+export async function lotCodesTaken(db: Executor, { codes }: { codes: string[] }): Promise<Set<string>> {
+  if (codes.length === 0) return new Set();
+  return new Set((await db.select({ code: productionLots.lotCode }).from(productionLots).where(inArray(productionLots.lotCode, codes))).map((r) => r.code));
 }
 
 /**
  * For each lot of a batch, an existing lot of its board model whose serials it shares (by the
  * lot's position in the batch), in one query over the exclusion constraint's GiST index.
  */
-async function findOverlappingLots(tx: Executor, lots: ResolvedLot[]): Promise<Map<number, { lotCode: string; serialFrom: number; serialTo: number; prefix: string }>> {
+export async function findOverlappingLots(tx: Executor, lots: ResolvedLot[]): Promise<Map<number, { lotCode: string; serialFrom: number; serialTo: number; prefix: string }>> {
   const found = new Map<number, { lotCode: string; serialFrom: number; serialTo: number; prefix: string }>();
   if (lots.length === 0) return found;
   // Arrays travel as one text parameter each; uuids and integers came from the database and the parser.
@@ -321,21 +137,13 @@ export async function listLots(db: Executor, f: LotFilter) {
     .offset(f.offset);
 }
 
-/** Board models with their revisions and the builds a lot may name, for the lot form and filters. */
-export async function lotOptions(db: Executor) {
-  const models = await db.select({ id: boardModels.id, name: boardModels.name, serialPrefix: boardModels.serialPrefix }).from(boardModels).orderBy(asc(boardModels.name));
-  // Semantic-version order (2.0.0 before 10.0.0), the same as every other revision list.
-  const revisions = sortRevisions(await db.select({ boardModelId: boardRevisions.boardModelId, revision: boardRevisions.revision }).from(boardRevisions));
-  const buildRows = await db
+/** Builds at these stages, newest first, with their board model: what the lot forms and filters offer. */
+export async function listBuildsAtStages(db: Executor, { stages }: { stages: readonly BuildStage[] }) {
+  return db
     .select({ id: builds.id, boardModelId: builds.boardModelId, version: builds.version, stage: builds.stage, revisionRange: builds.revisionRange })
     .from(builds)
-    .where(inArray(builds.stage, ["pilot", "production", "withdrawn"]))
+    .where(inArray(builds.stage, [...stages]))
     .orderBy(desc(builds.createdAt));
-  return models.map((m) => ({
-    ...m,
-    revisions: revisions.filter((r) => r.boardModelId === m.id).map((r) => r.revision),
-    builds: buildRows.filter((b) => b.boardModelId === m.id).map(({ boardModelId: _m, ...b }) => b),
-  }));
 }
 
 /** Withdrawn builds with how many boards shipped with each and in how many lots. */
@@ -362,7 +170,7 @@ export async function listWithdrawnBuilds(db: Executor) {
     .orderBy(desc(builds.updatedAt));
 }
 
-/** Every lot that shipped with a build, for the withdrawn-build report and its CSV export. */
+/** Every lot that shipped with a build, for the withdrawn-build report and its CSV export; undefined when there is no such build. */
 export async function shippedWithBuild(db: Executor, { buildId }: { buildId: string }) {
   const [build] = await db
     .select({ id: builds.id, version: builds.version, stage: builds.stage, withdrawnReason: builds.withdrawnReason, boardModelName: boardModels.name, serialPrefix: boardModels.serialPrefix })
@@ -370,7 +178,7 @@ export async function shippedWithBuild(db: Executor, { buildId }: { buildId: str
     .innerJoin(boardModels, eq(boardModels.id, builds.boardModelId))
     .where(eq(builds.id, buildId))
     .limit(1);
-  if (!build) throw new AppError("not_found", "No such build.");
+  if (!build) return undefined;
   const lots = await db
     .select({
       lotCode: productionLots.lotCode,

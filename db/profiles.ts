@@ -2,12 +2,10 @@ import "server-only";
 import { and, count, desc, eq, ilike, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { components, coolerModels, boardModels, profiles, profileVersions, users } from "./schema";
-import type { Database, Executor } from "./client";
-import { recordAudit, type AuditActor } from "./audit";
+import type { Executor } from "./client";
 import { likeText, orderFor, pageWindow } from "./list-helpers";
 import { listRevisionsOfModel } from "./boards";
-import { AppError } from "@/lib/api/errors";
-import { documentText, starterProfile } from "@/lib/registry/starter-profile";
+import { documentText } from "@/lib/registry/starter-profile";
 import { validateProfileText } from "@/lib/engine";
 
 const SORT_COLUMNS = { name: profiles.name, coolerModel: coolerModels.name, updatedAt: profiles.updatedAt };
@@ -48,20 +46,11 @@ export async function listProfiles(
   return { items, total: total?.n ?? 0, page: f.page, pageSize: f.pageSize };
 }
 
-/** Creates a profile with a starter draft fitted to its cooler's parts. */
-export async function createProfile(db: Database, actor: AuditActor & { userId: string }, input: { coolerModelId: string; name: string; description: string }) {
-  return db.transaction(async (tx) => {
-    const hw = await getCoolerHardware(tx, { coolerModelId: input.coolerModelId });
-    if (!hw) throw new AppError("validation_failed", "Pick an existing cooler model.", { issues: [{ path: "/coolerModelId", message: "No such cooler model." }] });
-    const draft = starterProfile({ name: input.name, description: input.description, pumpMinDutyPct: hw.pump.minDutyPct, fanMinDutyPct: hw.fan.minDutyPct });
-    const [row] = await tx
-      .insert(profiles)
-      .values({ ...input, ownerUserId: actor.userId, draftText: documentText(draft), draftDocument: draft, draftUpdatedAt: new Date() })
-      .returning();
-    if (!row) throw new AppError("internal", "The profile was not created.");
-    await recordAudit(tx, actor, { action: "profile.create", entityType: "profile", entityId: row.id, after: { ...input, ownerUserId: actor.userId } });
-    return { id: row.id, name: row.name };
-  });
+/** Writes a new profile owned by `ownerUserId`, its starter draft as text and as the last plottable document. */
+export async function insertProfile(tx: Executor, input: { coolerModelId: string; name: string; description: string; ownerUserId: string; draftText: string; draftDocument: unknown }) {
+  const [row] = await tx.insert(profiles).values({ ...input, draftUpdatedAt: new Date() }).returning();
+  if (!row) throw new Error("INSERT … RETURNING gave no row");
+  return row;
 }
 
 const fanPart = alias(components, "fan_part");
@@ -116,6 +105,7 @@ export async function getProfileDetail(db: Executor, { id }: { id: string }) {
     cooler: {
       id: hw.cooler.id,
       name: hw.cooler.name,
+      radiatorMm: hw.cooler.radiatorMm,
       fanCount: hw.cooler.fanCount,
       radiatorKPerWAtMinFan: hw.cooler.radiatorKPerWAtMinFan,
       radiatorKPerWAtMaxFan: hw.cooler.radiatorKPerWAtMaxFan,
@@ -128,42 +118,26 @@ export async function getProfileDetail(db: Executor, { id }: { id: string }) {
   };
 }
 
+/** A profile's draft revision, when and by whom it was last saved; the profile row stays locked until the transaction ends. */
+export async function lockDraft(tx: Executor, { id }: { id: string }) {
+  const [row] = await tx
+    .select({ draftRevision: profiles.draftRevision, draftUpdatedAt: profiles.draftUpdatedAt, savedBy: users.name })
+    .from(profiles)
+    .leftJoin(users, eq(users.id, profiles.draftSavedByUserId))
+    .where(eq(profiles.id, id))
+    .for("update", { of: profiles });
+  return row;
+}
+
 /**
- * Saves the working draft as the exact text typed (even when it is not valid JSON yet), so
- * nothing typed is lost or reordered. When the text passes the schema it is also kept as the
- * draft's last plottable document, which the editor plots (greyed) while the text is broken.
- * Optimistic concurrency: the caller says which draft revision its text is based on; if
- * someone saved since, the save is refused (409) naming who, so nobody overwrites another's
- * work unseen. `baseRevision` undefined replaces the draft outright (an explicit import).
+ * Stores the draft text as typed, with its new revision and who saved it; `plottable`, when
+ * given, replaces the draft's last plottable document.
  */
-export async function saveDraft(db: Database, actor: AuditActor & { userId: string }, { id, text, baseRevision }: { id: string; text: string; baseRevision?: number }) {
-  const plottable = validateProfileText(text).value;
-  return db.transaction(async (tx) => {
-    const [current] = await tx
-      .select({ draftRevision: profiles.draftRevision, draftUpdatedAt: profiles.draftUpdatedAt, savedBy: users.name })
-      .from(profiles)
-      .leftJoin(users, eq(users.id, profiles.draftSavedByUserId))
-      .where(eq(profiles.id, id))
-      .for("update", { of: profiles });
-    if (!current) throw new AppError("not_found", "No such profile.");
-    if (baseRevision !== undefined && baseRevision !== current.draftRevision) {
-      const who = current.savedBy ?? "Someone";
-      const when = current.draftUpdatedAt ? ` at ${current.draftUpdatedAt.toISOString().slice(11, 16)} UTC` : "";
-      throw new AppError(
-        "conflict",
-        `${who} saved this draft${when} after you loaded it (draft revision ${current.draftRevision}, yours is based on ${baseRevision}). Compare your text with theirs or reload it before saving again.`,
-      );
-    }
-    const now = new Date();
-    const draftRevision = current.draftRevision + 1;
-    await tx
-      .update(profiles)
-      .set({ draftText: text, ...(plottable ? { draftDocument: plottable } : {}), draftUpdatedAt: now, updatedAt: now, draftRevision, draftSavedByUserId: actor.userId })
-      .where(eq(profiles.id, id));
-    // The draft itself is not repeated in the log: autosave runs on every pause in typing.
-    await recordAudit(tx, actor, { action: "profile.draft_save", entityType: "profile", entityId: id, after: { bytes: text.length, draftRevision } });
-    return { draftUpdatedAt: now.toISOString(), draftRevision };
-  });
+export async function writeDraft(tx: Executor, { id, text, plottable, draftRevision, savedByUserId, at }: { id: string; text: string; plottable?: unknown; draftRevision: number; savedByUserId: string; at: Date }) {
+  await tx
+    .update(profiles)
+    .set({ draftText: text, ...(plottable ? { draftDocument: plottable } : {}), draftUpdatedAt: at, updatedAt: at, draftRevision, draftSavedByUserId: savedByUserId })
+    .where(eq(profiles.id, id));
 }
 
 export async function listVersionsOfProfile(db: Executor, { profileId }: { profileId: string }) {

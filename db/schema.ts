@@ -1,4 +1,5 @@
 import { relations, sql } from "drizzle-orm";
+import type { SoundTable } from "../lib/hardware/types";
 import {
   bigint,
   bigserial,
@@ -18,6 +19,9 @@ import {
   uniqueIndex,
   uuid,
 } from "drizzle-orm/pg-core";
+// The enums take their values from the one list each in lib/, so the database, the API and the screens agree.
+import { ROLES } from "../lib/auth/roles";
+import { STAGE_ORDER } from "../lib/release/stages";
 
 const bytea = customType<{ data: Uint8Array; driverData: Buffer }>({
   dataType: () => "bytea",
@@ -30,7 +34,7 @@ const timestamps = {
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
 };
 
-export const roleEnum = pgEnum("role", ["admin", "engineer", "release_manager", "support", "viewer"]);
+export const roleEnum = pgEnum("role", ROLES);
 
 // ---------------------------------------------------------------- people and access
 
@@ -131,6 +135,10 @@ export const components = pgTable(
     refSoundDbA: doublePrecision("ref_sound_dba").notNull(),
     refRpm: integer("ref_rpm").notNull(),
     soundExponent: doublePrecision("sound_exponent").notNull().default(50),
+    /** Measured RPM → dB(A) table at a stated distance; null: the reference level and exponent are used. */
+    soundTable: jsonb("sound_table").$type<SoundTable>(),
+    /** True: stops at 0 % duty; false: keeps its minimum speed below the minimum duty (4-wire PWM fan spec rev. 1.3 §3.4). */
+    stopsAtZeroDuty: boolean("stops_at_zero_duty").notNull().default(false),
     flowAtMaxRpmLpm: doublePrecision("flow_at_max_rpm_lpm"),
     ...timestamps,
   },
@@ -139,6 +147,10 @@ export const components = pgTable(
     check("components_min_duty_range", sql`${t.minDutyPct} >= 0 and ${t.minDutyPct} <= 100`),
     check("components_rpm_order", sql`${t.rpmAtMinDuty} > 0 and ${t.maxRpm} > ${t.rpmAtMinDuty}`),
     check("components_tach_pulses", sql`${t.tachPulsesPerRev} between 1 and 12`),
+    check(
+      "components_sound_table_shape",
+      sql`${t.soundTable} is null or (jsonb_typeof(${t.soundTable}->'distanceM') = 'number' and jsonb_typeof(${t.soundTable}->'points') = 'array' and jsonb_array_length(${t.soundTable}->'points') between 2 and 64)`,
+    ),
   ],
 );
 
@@ -281,7 +293,7 @@ export const uploads = pgTable(
 
 // ---------------------------------------------------------------- builds and stages
 
-export const buildStageEnum = pgEnum("build_stage", ["draft", "review", "validation", "pilot", "production", "withdrawn"]);
+export const buildStageEnum = pgEnum("build_stage", STAGE_ORDER);
 
 export const builds = pgTable(
   "builds",

@@ -2,12 +2,10 @@ import "server-only";
 import { and, desc, eq, gt, isNull, sql } from "drizzle-orm";
 import { apiTokens, users, type ApiToken, type User } from "./schema";
 import type { Database, Executor } from "./client";
-import { recordAudit, type AuditActor } from "./audit";
-import { AppError } from "@/lib/api/errors";
 
 export type PublicToken = Omit<ApiToken, "tokenHash">;
 
-function toPublic({ tokenHash: _h, ...rest }: ApiToken): PublicToken {
+export function toPublicToken({ tokenHash: _h, ...rest }: ApiToken): PublicToken {
   return rest;
 }
 
@@ -22,7 +20,7 @@ export async function listAllTokens(db: Executor, { liveOnly = false }: { liveOn
     .where(liveOnly ? and(isNull(apiTokens.revokedAt), gt(apiTokens.expiresAt, sql`now()`)) : undefined)
     .orderBy(desc(apiTokens.createdAt))
     .limit(500);
-  return rows.map((r) => ({ ...toPublic(r.token), userEmail: r.userEmail, userName: r.userName }));
+  return rows.map((r) => ({ ...toPublicToken(r.token), userEmail: r.userEmail, userName: r.userName }));
 }
 
 /** Revokes every live token of a user in the caller's transaction (disable, password change); returns how many. */
@@ -37,49 +35,38 @@ export async function revokeAllTokens(tx: Executor, { userId }: { userId: string
 
 export async function listTokens(db: Executor, { userId }: { userId: string }): Promise<PublicToken[]> {
   const rows = await db.select().from(apiTokens).where(eq(apiTokens.userId, userId)).orderBy(desc(apiTokens.createdAt));
-  return rows.map(toPublic);
+  return rows.map(toPublicToken);
 }
 
-/** Refuses a new token when the user already holds `maxLive` live ones (the policy cap). */
-async function assertBelowCap(tx: Executor, userId: string, maxLive: number): Promise<void> {
-  // The user row is locked so two requests at once cannot both pass the cap.
+/**
+ * How many live tokens a user holds, with the user row locked until the transaction ends, so
+ * two requests at once cannot both pass a cap judged on this count.
+ */
+export async function lockLiveTokenCount(tx: Executor, { userId }: { userId: string }): Promise<number> {
   await tx.select({ id: users.id }).from(users).where(eq(users.id, userId)).for("update");
   const [live] = await tx
     .select({ n: sql<number>`count(*)::int` })
     .from(apiTokens)
     .where(and(eq(apiTokens.userId, userId), isNull(apiTokens.revokedAt), gt(apiTokens.expiresAt, sql`now()`)));
-  if (Number(live?.n ?? 0) >= maxLive) {
-    throw new AppError("conflict", `You already hold ${maxLive} live API tokens, the most allowed; revoke one you no longer use, then create the new one.`);
-  }
+  return Number(live?.n ?? 0);
 }
 
-export async function createToken(
-  db: Database,
-  actor: AuditActor,
-  input: { userId: string; name: string; tokenHash: string; tokenPrefix: string; expiresAt: Date },
-  { maxLive }: { maxLive?: number } = {},
-): Promise<PublicToken> {
-  return db.transaction(async (tx) => {
-    if (maxLive !== undefined) await assertBelowCap(tx, input.userId, maxLive);
-    const [row] = await tx.insert(apiTokens).values(input).returning();
-    if (!row) throw new AppError("internal", "Token was not created.");
-    await recordAudit(tx, actor, { action: "token.create", entityType: "api_token", entityId: row.id, after: toPublic(row) });
-    return toPublic(row);
-  });
+export async function insertToken(tx: Executor, input: { userId: string; name: string; tokenHash: string; tokenPrefix: string; expiresAt: Date }): Promise<PublicToken> {
+  const [row] = await tx.insert(apiTokens).values(input).returning();
+  if (!row) throw new Error("INSERT … RETURNING gave no row");
+  return toPublicToken(row);
 }
 
-/** Revokes a token; `userId` null means an admin acting on anyone's token. */
-export async function revokeToken(db: Database, actor: AuditActor, { id, userId }: { id: string; userId: string | null }): Promise<PublicToken> {
-  return db.transaction(async (tx) => {
-    const [current] = await tx.select().from(apiTokens).where(eq(apiTokens.id, id)).for("update");
-    // Someone else's token gets the same answer as an unknown id: the id tells nothing.
-    if (!current || (userId !== null && current.userId !== userId)) throw new AppError("not_found", "You have no token with this id.");
-    if (current.revokedAt) return toPublic(current);
-    const [row] = await tx.update(apiTokens).set({ revokedAt: new Date() }).where(eq(apiTokens.id, id)).returning();
-    if (!row) throw new AppError("internal", "Token was not revoked.");
-    await recordAudit(tx, actor, { action: "token.revoke", entityType: "api_token", entityId: id, before: toPublic(current), after: toPublic(row) });
-    return toPublic(row);
-  });
+/** A token's row (without its hash), locked until the transaction ends. */
+export async function lockToken(tx: Executor, { id }: { id: string }): Promise<PublicToken | undefined> {
+  const [row] = await tx.select().from(apiTokens).where(eq(apiTokens.id, id)).for("update");
+  return row ? toPublicToken(row) : undefined;
+}
+
+export async function markTokenRevoked(tx: Executor, { id }: { id: string }): Promise<PublicToken> {
+  const [row] = await tx.update(apiTokens).set({ revokedAt: new Date() }).where(eq(apiTokens.id, id)).returning();
+  if (!row) throw new Error("UPDATE … RETURNING gave no row");
+  return toPublicToken(row);
 }
 
 /** The live token with this hash and its user, or nothing when revoked, expired or the user is disabled. */

@@ -1,17 +1,12 @@
 import "server-only";
 import { asc, eq, sql } from "drizzle-orm";
 import { users, type Role, type User } from "./schema";
-import type { Database, Executor } from "./client";
-import { recordAudit, type AuditActor } from "./audit";
-import { revokeAllTokens } from "./tokens";
-import { endOtherSessions } from "./sessions";
-import { AppError } from "@/lib/api/errors";
-import { userChangeActions } from "@/lib/audit/describe";
+import type { Executor } from "./client";
 
 /** What the app may show of a user: never the password hash. */
 export type PublicUser = Pick<User, "id" | "email" | "name" | "role" | "disabledAt" | "createdAt">;
 
-function toPublic(u: User): PublicUser {
+export function toPublicUser(u: User): PublicUser {
   return { id: u.id, email: u.email, name: u.name, role: u.role, disabledAt: u.disabledAt, createdAt: u.createdAt };
 }
 
@@ -27,78 +22,34 @@ export async function getUserByEmail(db: Executor, { email }: { email: string })
 
 export async function listUsers(db: Executor): Promise<PublicUser[]> {
   const rows = await db.select().from(users).orderBy(asc(users.name));
-  return rows.map(toPublic);
+  return rows.map(toPublicUser);
 }
 
 export async function listActiveUsersByRole(db: Executor, { roles }: { roles: Role[] }): Promise<PublicUser[]> {
   const rows = await db.select().from(users).orderBy(asc(users.name));
-  return rows.filter((u) => !u.disabledAt && roles.includes(u.role)).map(toPublic);
+  return rows.filter((u) => !u.disabledAt && roles.includes(u.role)).map(toPublicUser);
 }
 
-export async function createUser(
-  db: Database,
-  actor: AuditActor,
-  input: { email: string; name: string; role: Role; passwordHash: string },
-): Promise<PublicUser> {
-  return db.transaction(async (tx) => {
-    const existing = await getUserByEmail(tx, { email: input.email });
-    if (existing) throw new AppError("conflict", `A user with the e-mail ${input.email} already exists.`);
-    const [row] = await tx.insert(users).values(input).returning();
-    if (!row) throw new AppError("internal", "User was not created.");
-    const after = toPublic(row);
-    await recordAudit(tx, actor, { action: "user.create", entityType: "user", entityId: row.id, after });
-    return after;
-  });
+export async function insertUser(tx: Executor, input: { email: string; name: string; role: Role; passwordHash: string }): Promise<User> {
+  const [row] = await tx.insert(users).values(input).returning();
+  if (!row) throw new Error("INSERT … RETURNING gave no row");
+  return row;
 }
 
-export async function updateUser(
-  db: Database,
-  actor: AuditActor,
-  { id, role, disabled }: { id: string; role?: Role; disabled?: boolean },
-): Promise<PublicUser> {
-  return db.transaction(async (tx) => {
-    const [current] = await tx.select().from(users).where(eq(users.id, id)).for("update");
-    if (!current) throw new AppError("not_found", "No such user.");
-    if (actor.userId === id && (disabled === true || (role && role !== "admin"))) {
-      throw new AppError("conflict", "You cannot disable yourself or remove your own admin role; ask another admin.");
-    }
-    const patch: Partial<User> = { updatedAt: new Date() };
-    if (role) patch.role = role;
-    let tokensRevoked = 0;
-    if (disabled === true && !current.disabledAt) {
-      patch.disabledAt = new Date();
-      // Sessions signed before this moment stop working at their next request.
-      patch.sessionEpoch = current.sessionEpoch + 1;
-      // Tokens are revoked, not merely blocked while disabled, so re-enabling does not revive them.
-      tokensRevoked = await revokeAllTokens(tx, { userId: id });
-    }
-    if (disabled === false) patch.disabledAt = null;
-    const [row] = await tx.update(users).set(patch).where(eq(users.id, id)).returning();
-    if (!row) throw new AppError("internal", "User was not updated.");
-    // One event per kind of change (role change, disable, re-enable), so the log tells them apart.
-    const actions = userChangeActions(current, row);
-    for (const action of actions.length ? actions : ["user.update"]) {
-      await recordAudit(tx, actor, { action, entityType: "user", entityId: id, before: toPublic(current), after: { ...toPublic(row), ...(tokensRevoked ? { tokensRevoked } : {}) } });
-    }
-    return toPublic(row);
-  });
+/** A user's row, locked until the transaction ends. */
+export async function lockUser(tx: Executor, { id }: { id: string }): Promise<User | undefined> {
+  const [row] = await tx.select().from(users).where(eq(users.id, id)).for("update");
+  return row;
 }
 
-/**
- * A new password ends every other session of the user (the one making the change stays) and,
- * when asked, revokes all their API tokens; one transaction with its audit event.
- */
-export async function changePasswordEndingSessions(
-  db: Database,
-  actor: AuditActor,
-  { id, passwordHash, keepSessionId, revokeTokens }: { id: string; passwordHash: string; keepSessionId?: string; revokeTokens: boolean },
-): Promise<{ otherSessionsEnded: number; tokensRevoked: number }> {
-  return db.transaction(async (tx) => {
-    const res = await tx.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, id)).returning({ id: users.id });
-    if (res.length === 0) throw new AppError("not_found", "No such user.");
-    const otherSessionsEnded = await endOtherSessions(tx, { userId: id, keepSessionId });
-    const tokensRevoked = revokeTokens ? await revokeAllTokens(tx, { userId: id }) : 0;
-    await recordAudit(tx, actor, { action: "user.password_change", entityType: "user", entityId: id, after: { otherSessionsEnded, tokensRevoked } });
-    return { otherSessionsEnded, tokensRevoked };
-  });
+export async function updateUserRow(tx: Executor, { id, patch }: { id: string; patch: Partial<User> }): Promise<User> {
+  const [row] = await tx.update(users).set(patch).where(eq(users.id, id)).returning();
+  if (!row) throw new Error("UPDATE … RETURNING gave no row");
+  return row;
+}
+
+/** Stores a new password hash; false when there is no such user. */
+export async function setPasswordHash(tx: Executor, { id, passwordHash }: { id: string; passwordHash: string }): Promise<boolean> {
+  const res = await tx.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, id)).returning({ id: users.id });
+  return res.length > 0;
 }

@@ -1,18 +1,18 @@
 import { writeIntelHex } from "../../lib/engine";
 import { defineCommand } from "../args";
 import { writeOutput as write, type CommandResult } from "../io";
-import { encodeProfileFiles } from "./encode-files";
+import { encodeProfileFiles, profileFilesPositional, versionsOption } from "./encode-files";
 
 /** `bank`: encode profiles into a bank image for the board revision, optionally as Intel HEX too. */
 export const bankCommand = defineCommand({
   name: "bank",
   summary: "encode profiles, one per slot in the order given, into a bank image for the board revision of the hardware context.",
-  positionals: { name: "<profile.json>...", description: "profile documents, slot 1 first", min: 1, max: Infinity },
+  positionals: profileFilesPositional,
   options: {
     hardware: { kind: "text", value: "hw.json", description: "hardware context whose board revision sets memory size, slot count and base address", required: true },
     out: { kind: "text", value: "bank.bin", description: "file the binary bank image is written to", required: true },
     hex: { kind: "text", value: "bank.hex", description: "also write the image as Intel HEX at the board's base address" },
-    versions: { kind: "text", value: "v1,v2,…", description: "one semver version per profile, comma-separated, in order", defaultText: "1.0.0 for each" },
+    versions: versionsOption,
   },
   examples: ["bank examples/quiet.profile.json examples/performance.profile.json --hardware examples/cooler-360.hardware.json --out bank.bin --hex bank.hex --versions 1.0.0,2.3.1"],
   run: (args) => bank(args.positionals, { hwFile: args.text("hardware")!, out: args.text("out")!, hexFile: args.text("hex"), versionList: args.text("versions") }),

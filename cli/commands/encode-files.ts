@@ -3,6 +3,12 @@ import { UsageError } from "../args";
 import { formatIssues, readText, type CommandResult } from "../io";
 import { loadHardware, loadProfile } from "./load";
 
+/** The profile list both bank-writing commands (`bank`, `vectors`) take, slot 1 first. */
+export const profileFilesPositional = { name: "<profile.json>...", description: "profile documents, slot 1 first", min: 1, max: Infinity } as const;
+
+/** The `--versions` option both bank-writing commands take. */
+export const versionsOption = { kind: "text", value: "v1,v2,…", description: "one semver version per profile, comma-separated, in order", defaultText: "1.0.0 for each" } as const;
+
 /** Profile files encoded into one bank for the hardware context's board revision. */
 export interface EncodedFiles {
   bytes: Uint8Array;

@@ -1,4 +1,4 @@
-import { COOLANTS, type Coolant, evaluateCurves, loadSweep, operatingPoint } from "../../lib/engine";
+import { COOLANTS, type Coolant, evaluateCurves, listenerDistanceProblem, loadSweep, operatingPoint } from "../../lib/engine";
 import { defineCommand, UsageError } from "../args";
 import { fmtDb, formatIssues, jsonSafe, type CommandResult } from "../io";
 import { loadHardware, loadProfile } from "./load";
@@ -16,7 +16,7 @@ export const evaluateCommand = defineCommand({
     hardware: { kind: "text", value: "hw.json", description: "hardware context (board revision, pump, fans, radiator)", required: true },
     load: { kind: "number", value: "W", description: "heat load on the cold plate in watts", defaultText: `${DEFAULTS.heatLoadW}` },
     ambient: { kind: "number", value: "°C", description: "ambient air temperature", defaultText: `${DEFAULTS.ambientC}` },
-    distance: { kind: "number", value: "m", description: "listener distance for the noise estimate", defaultText: `${DEFAULTS.distanceM}` },
+    distance: { kind: "number", value: "m", description: "listener distance for the noise estimate; refused inside the cooler's near field (closer than about the radiator's largest dimension)", defaultText: `${DEFAULTS.distanceM}` },
     coolant: { kind: "text", value: Object.keys(COOLANTS).join("|"), description: "coolant in the loop", defaultText: DEFAULTS.coolant },
   },
   examples: ["evaluate examples/performance.profile.json --hardware examples/cooler-360.hardware.json --load 250 --ambient 30"],
@@ -36,6 +36,8 @@ export const evaluateCommand = defineCommand({
 function evaluate(file: string, hwFile: string, { heatLoadW, ambientC, distanceM, coolant }: { heatLoadW: number; ambientC: number; distanceM: number; coolant: Coolant }): CommandResult {
   const hw = loadHardware(hwFile);
   if (!hw.ok || !hw.value) return { exitCode: 1, human: formatIssues(hw.file, hw.issues), json: { ok: false, hardware: { file: hw.file, issues: hw.issues } } };
+  const distanceProblem = listenerDistanceProblem(hw.value, distanceM);
+  if (distanceProblem) throw new UsageError(`--distance: ${distanceProblem}`);
   const profile = loadProfile(file, hw.value);
   if (!profile.ok || !profile.value) return { exitCode: 1, human: formatIssues(file, profile.issues), json: { ok: false, file, issues: profile.issues } };
 

@@ -1,17 +1,17 @@
 import { bankVectors, vectorsJson } from "../../lib/firmware";
 import { defineCommand } from "../args";
 import { writeOutput, type CommandResult } from "../io";
-import { encodeProfileFiles } from "./encode-files";
+import { encodeProfileFiles, profileFilesPositional, versionsOption } from "./encode-files";
 
 /** `vectors`: firmware test vectors for the bank the profiles encode to. */
 export const vectorsCommand = defineCommand({
   name: "vectors",
   summary: "write firmware test vectors (stored codes, duty over a temperature sweep, per-tick transient traces) for the bank these profiles encode to.",
-  positionals: { name: "<profile.json>...", description: "profile documents, slot 1 first", min: 1, max: Infinity },
+  positionals: profileFilesPositional,
   options: {
     hardware: { kind: "text", value: "hw.json", description: "hardware context whose limits the profiles are checked against and whose board revision they must fit", required: true },
     out: { kind: "text", value: "vectors.json", description: "file the vectors are written to", required: true },
-    versions: { kind: "text", value: "v1,v2,…", description: "one semver version per profile, comma-separated, in order", defaultText: "1.0.0 for each" },
+    versions: versionsOption,
   },
   examples: ["vectors examples/quiet.profile.json examples/performance.profile.json --hardware examples/cooler-360.hardware.json --out vectors.json"],
   notes: [

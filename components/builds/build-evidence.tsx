@@ -4,6 +4,7 @@ import { useState } from "react";
 import { apiCall } from "@/lib/api/client";
 import { recordWaiver, type BuildDetail, type UploadView, type WaiverBody } from "@/lib/api/operations/builds";
 import { can, type Role } from "@/lib/auth/roles";
+import { takesEvidence } from "@/lib/release/stages";
 import { Button } from "@/components/ui/button";
 import { Field, Textarea } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -13,8 +14,6 @@ import { ErrorNotice } from "@/components/ui/error-notice";
 import { SoundPlot } from "./sound-plot";
 import { EvidenceUpload } from "./evidence-upload";
 import { useBuildMutation } from "./use-build";
-
-const EVIDENCE_STAGES = ["draft", "review", "validation"];
 
 function UploadRow({ label, upload }: { label: string; upload: UploadView | null }) {
   return (
@@ -40,7 +39,7 @@ export function BuildEvidence({ detail, role }: { detail: BuildDetail; role: Rol
   const { build, uploads, comparison } = detail;
   const [waiver, setWaiver] = useState("");
   const waive = useBuildMutation(build.id, (body: WaiverBody) => apiCall(recordWaiver, { params: { id: build.id }, body }));
-  const mayAttach = can(role, "build:promote") && EVIDENCE_STAGES.includes(build.stage);
+  const mayAttach = can(role, "build:promote") && takesEvidence(build.stage);
   const outside = comparison.state === "ok" ? comparison.rows.filter((r) => !r.withinTolerance).length : 0;
   const tooClose = comparison.state === "ok" ? comparison.rows.filter((r) => r.status === "too_close_to_background").length : 0;
   const compared = comparison.state === "ok" ? comparison.rows.length - tooClose : 0;

@@ -7,14 +7,28 @@ import { apiCall, operationKey } from "@/lib/api/client";
 import { createComponent, listComponents } from "@/lib/api/operations/registry";
 import { componentBody, type ComponentBody } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
-import { Field, Input, Select, describedBy } from "@/components/ui/field";
+import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
+import { parseSoundTableText } from "@/lib/registry/sound-table-text";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { NumberField } from "./number-field";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 
-const DEFAULTS: Partial<ComponentBody> = { kind: "fan", tachPulsesPerRev: 2, soundExponent: 50, flowAtMaxRpmLpm: null };
+const DEFAULTS: Partial<ComponentBody> = { kind: "fan", tachPulsesPerRev: 2, soundExponent: 50, soundTable: null, stopsAtZeroDuty: false, flowAtMaxRpmLpm: null };
+
+/** The first message zod gave anywhere inside the sound table (its distance, a point, the order). */
+function soundTableError(e: unknown): string | undefined {
+  if (typeof e !== "object" || e === null) return undefined;
+  const own = (e as { message?: unknown }).message;
+  if (typeof own === "string") return own;
+  for (const [key, value] of Object.entries(e)) {
+    if (key === "ref" || key === "type") continue;
+    const inner = soundTableError(value);
+    if (inner) return inner;
+  }
+  return undefined;
+}
 
 export function ComponentForm() {
   const qc = useQueryClient();
@@ -49,7 +63,26 @@ export function ComponentForm() {
         <NumberField id="c-tach" label="Tach pulses per revolution" error={errors.tachPulsesPerRev?.message} reg={num("tachPulsesPerRev")} />
         <NumberField id="c-db" label="Reference sound level, dB(A) at 1 m" error={errors.refSoundDbA?.message} reg={num("refSoundDbA")} />
         <NumberField id="c-ref-rpm" label="Reference RPM" error={errors.refRpm?.message} reg={num("refRpm")} />
-        <NumberField id="c-exp" label="Sound exponent k" hint="50 by the fan laws unless measured." error={errors.soundExponent?.message} reg={num("soundExponent")} />
+        <NumberField id="c-exp" label="Sound exponent k" hint="50 by the fan laws; used only without a measured sound table." error={errors.soundExponent?.message} reg={num("soundExponent")} />
+        <Field
+          id="c-sound-table"
+          label="Measured sound table (optional)"
+          hint={'One measurement per line, "RPM dB(A)"; first line "at 1 m" for the microphone distance (1 m when left out). Replaces the reference level and exponent.'}
+          error={soundTableError(errors.soundTable)}
+        >
+          <Textarea
+            rows={4}
+            placeholder={"at 1 m\n600 14\n1200 24\n2000 33"}
+            {...describedBy("c-sound-table", soundTableError(errors.soundTable))}
+            {...form.register("soundTable", { setValueAs: (v: unknown) => (typeof v === "string" ? parseSoundTableText(v) : v) })}
+          />
+        </Field>
+        <div className="md:col-span-2 flex items-start gap-2 self-end text-sm">
+          <input id="c-stops" type="checkbox" className="mt-1" {...form.register("stopsAtZeroDuty")} />
+          <label htmlFor="c-stops">
+            Stops at 0 % duty. Leave unticked for a motor that keeps its minimum speed below its minimum duty, 0 % included (4-wire PWM fan specification rev. 1.3 §3.4 allows both).
+          </label>
+        </div>
         <NumberField
           id="c-flow"
           label="Flow at max RPM (L/min)"

@@ -20,7 +20,16 @@ const columns: ColumnDef<ComponentView>[] = [
   { id: "minDutyPct", accessorKey: "minDutyPct", header: "Min duty %", cell: (c) => <span className="tabular-nums">{c.row.original.minDutyPct}</span> },
   { id: "rpm", header: "RPM at min → max", enableSorting: false, cell: (c) => <span className="tabular-nums">{c.row.original.rpmAtMinDuty} → {c.row.original.maxRpm}</span> },
   { id: "maxRpm", accessorKey: "maxRpm", header: "Max RPM", cell: (c) => <span className="tabular-nums">{c.row.original.maxRpm}</span> },
-  { id: "refSoundDbA", accessorKey: "refSoundDbA", header: "Sound dB(A) @ ref RPM", cell: (c) => <span className="tabular-nums">{c.row.original.refSoundDbA} @ {c.row.original.refRpm}</span> },
+  {
+    id: "refSoundDbA",
+    accessorKey: "refSoundDbA",
+    header: "Sound dB(A) @ ref RPM",
+    cell: (c) => {
+      const t = c.row.original.soundTable;
+      return <span className="tabular-nums">{t ? `measured table, ${t.points.length} points at ${t.distanceM} m` : `${c.row.original.refSoundDbA} @ ${c.row.original.refRpm}`}</span>;
+    },
+  },
+  { id: "belowMin", header: "At 0 % duty", enableSorting: false, cell: (c) => (c.row.original.stopsAtZeroDuty ? "stops" : "keeps min RPM") },
   { id: "tach", header: "Tach pulses/rev", enableSorting: false, cell: (c) => <span className="tabular-nums">{c.row.original.tachPulsesPerRev}</span> },
   { id: "flow", header: "Flow at max (L/min)", enableSorting: false, cell: (c) => <span className="tabular-nums">{c.row.original.flowAtMaxRpmLpm ?? "—"}</span> },
 ];

@@ -5,6 +5,7 @@ import type { Executor } from "../client";
 import { buildReviews, buildTransitions, uploads, type BuildStage } from "../schema";
 import { coolerNoise, type HardwareContext } from "@/lib/engine";
 import { gateIssues, pilotGate } from "@/lib/release/gates";
+import { PROMOTION_PATH } from "@/lib/release/transitions";
 import { compareMeasurements, MEASUREMENT_HEADER_WITH_BACKGROUND, parseMeasurementsCsv, soundGateIssues, soundGateSummary } from "@/lib/release/measurements";
 
 /**
@@ -15,7 +16,7 @@ import { compareMeasurements, MEASUREMENT_HEADER_WITH_BACKGROUND, parseMeasureme
  */
 
 const DAY_MS = 86_400_000;
-const PATH: BuildStage[] = ["draft", "review", "validation", "pilot", "production"];
+const PATH: readonly BuildStage[] = PROMOTION_PATH;
 
 /** Days after creation at which each step happens (a plausible pace for a small maker). */
 const DAYS_AFTER_CREATION = { review: 1, firstApproval: 2, secondApproval: 3, validation: 4, labEvidence: 10, pilot: 12, production: 20 } as const;

@@ -5,12 +5,16 @@ import { boardModels, boardRevisions, components, coolerModels } from "../schema
 /**
  * The invented demo maker "Tarnwell Thermal": two product lines (240 mm and 360 mm
  * radiators), one controller board with three revisions of different memory sizes.
- * All figures are invented for the demo; they are plausible, not measured.
+ * All figures are invented for the demo; they are plausible, not measured. Both fans
+ * stop at 0 % duty (the demo profiles use fan stop); the pump keeps its minimum speed.
  */
 export const DEMO_COMPONENTS = [
-  { kind: "fan" as const, name: "Fellwind 120 PWM fan", minDutyPct: 20, rpmAtMinDuty: 450, maxRpm: 2000, tachPulsesPerRev: 2, refSoundDbA: 33, refRpm: 2000, soundExponent: 50, flowAtMaxRpmLpm: null },
-  { kind: "fan" as const, name: "Fellwind 120 HP fan", minDutyPct: 25, rpmAtMinDuty: 600, maxRpm: 2600, tachPulsesPerRev: 2, refSoundDbA: 38, refRpm: 2600, soundExponent: 55, flowAtMaxRpmLpm: null },
-  { kind: "pump" as const, name: "Brook D3 pump", minDutyPct: 40, rpmAtMinDuty: 1400, maxRpm: 2900, tachPulsesPerRev: 4, refSoundDbA: 24, refRpm: 2900, soundExponent: 50, flowAtMaxRpmLpm: 1.4 },
+  { kind: "fan" as const, name: "Fellwind 120 PWM fan", minDutyPct: 20, rpmAtMinDuty: 450, maxRpm: 2000, tachPulsesPerRev: 2, refSoundDbA: 33, refRpm: 2000, soundExponent: 50, soundTable: null, stopsAtZeroDuty: true, flowAtMaxRpmLpm: null },
+  { kind: "fan" as const, name: "Fellwind 120 HP fan", minDutyPct: 25, rpmAtMinDuty: 600, maxRpm: 2600, tachPulsesPerRev: 2, refSoundDbA: 38, refRpm: 2600, soundExponent: 55, soundTable: null, stopsAtZeroDuty: true, flowAtMaxRpmLpm: null },
+  { kind: "pump" as const, name: "Brook D3 pump", minDutyPct: 40, rpmAtMinDuty: 1400, maxRpm: 2900, tachPulsesPerRev: 4, refSoundDbA: 24, refRpm: 2900, soundExponent: 50,
+    // Invented "measured" levels at 1 m: a demo stand-in for the lab table a real pump would come with.
+    soundTable: { distanceM: 1, points: [{ rpm: 1400, soundDbA: 18 }, { rpm: 2200, soundDbA: 21.5 }, { rpm: 2900, soundDbA: 24 }] },
+    stopsAtZeroDuty: false, flowAtMaxRpmLpm: 1.4 },
 ];
 
 export const DEMO_BOARD = { name: "TC-1 cooler controller", serialPrefix: "TC1", description: "Pump-housing controller: one liquid sensor, one pump header, one fan header." };

@@ -1,5 +1,7 @@
 import { DEFAULT_SOUND_EXPONENT, type HardwareContext, type MotorComponent } from "../hardware/types";
 import { addLevelsDb, identicalSourcesDb, levelAtDistanceDb, levelAtSpeedDb } from "./levels";
+import { requireListenerDistance } from "./near-field";
+import { prepareSoundTable } from "./sound-table";
 
 /** Estimated A-weighted sound pressure level of a cooler. */
 export interface NoiseEstimate {
@@ -14,18 +16,39 @@ export interface NoiseEstimate {
   distanceM: number;
 }
 
-/** Level of one component at `rpm`, at 1 m: fan-law scaling from its reference point. */
+/**
+ * Level of one unit at `rpm`, at 1 m, dB(A) (-Infinity when stopped).
+ * - With a measured sound table: the table (prepareSoundTable: linear in dB over
+ *   log RPM, clamped at its ends), moved from the table's distance to 1 m by the
+ *   inverse-square law, +20·log10(d / 1 m).
+ * - Without one (fallback): L = Lref + k·log10(N/Nref) from the reference level at
+ *   1 m, k = soundExponent or 50 (see levelAtSpeedDb for the basis and its limits).
+ */
+export function prepareComponentLevel(component: MotorComponent): (rpm: number) => number {
+  const table = component.soundTable;
+  if (table) {
+    const at = prepareSoundTable(table);
+    const to1mDb = 20 * Math.log10(table.distanceM);
+    return (rpm) => at(rpm) + to1mDb;
+  }
+  const exponent = component.soundExponent ?? DEFAULT_SOUND_EXPONENT;
+  return (rpm) => levelAtSpeedDb(component.soundRefDbA, component.soundRefRpm, rpm, exponent);
+}
+
+/** Level of one component at `rpm`, at 1 m (prepareComponentLevel). */
 export function componentLevelDbA(component: MotorComponent, rpm: number): number {
-  return levelAtSpeedDb(component.soundRefDbA, component.soundRefRpm, rpm, component.soundExponent ?? DEFAULT_SOUND_EXPONENT);
+  return prepareComponentLevel(component)(rpm);
 }
 
 /**
- * Noise of the cooler: each fan by L = Lref + k·log10(N/Nref), n fans +10·log10(n),
- * plus the pump, summed incoherently, then moved to the listener distance by
- * −20·log10(r / 1 m). Treats every source as a point at the same place, in a
- * free field: an estimate, not a measurement.
+ * Noise of the cooler: each fan's level at 1 m (componentLevelDbA), n fans
+ * +10·log10(n), plus the pump, summed incoherently, then moved to the listener
+ * distance by −20·log10(r / 1 m). Treats every source as a point at the same place, in a
+ * free field: an estimate, not a measurement. Refuses (EngineInputError) a listener
+ * distance inside the cooler's near field (requireListenerDistance).
  */
 export function coolerNoise(hw: HardwareContext, fanRpm: number, pumpRpm: number, distanceM = 1): NoiseEstimate {
+  requireListenerDistance(hw, distanceM);
   const fansDbA = identicalSourcesDb(componentLevelDbA(hw.fan, fanRpm), hw.fanCount);
   const pumpDbA = componentLevelDbA(hw.pump, pumpRpm);
   const totalDbA1m = addLevelsDb([fansDbA, pumpDbA]);
@@ -34,16 +57,26 @@ export function coolerNoise(hw: HardwareContext, fanRpm: number, pumpRpm: number
 
 /**
  * Total level of fans and pump at 1 m, the same result as coolerNoise's
- * totalDbA1m, computed in the power domain: Σ n·10^(Lref/10)·(N/Nref)^(k/10),
- * then 10·log10.
+ * totalDbA1m, computed in the power domain: Σ n·10^(L(N)/10), then 10·log10.
  */
 export function coolerTotalDbA1m(hw: HardwareContext, fanRpm: number, pumpRpm: number): number {
   return prepareCoolerTotal(hw)(fanRpm, pumpRpm);
 }
 
-/** coolerTotalDbA1m with per-component constants computed once: two powers and one logarithm per call. */
+/**
+ * coolerTotalDbA1m with per-component constants computed once. Without a sound table a
+ * source costs one power per call (Lref and k folded into one scale); with a table, its
+ * interpolation and one power.
+ */
 export function prepareCoolerTotal(hw: HardwareContext): (fanRpm: number, pumpRpm: number) => number {
   const source = (c: MotorComponent, count: number): ((rpm: number) => number) => {
+    if (c.soundTable) {
+      const level = prepareComponentLevel(c);
+      return (rpm) => {
+        const l = level(rpm);
+        return l === -Infinity ? 0 : count * 10 ** (l / 10);
+      };
+    }
     const exponent = (c.soundExponent ?? DEFAULT_SOUND_EXPONENT) / 10;
     if (!(c.soundRefRpm > 0)) return () => 0;
     const scale = (count * 10 ** (c.soundRefDbA / 10)) / c.soundRefRpm ** exponent;

@@ -8,9 +8,9 @@
 /** Profile document types (schemas/cooling-profile.schema.json). */
 export type { CoolingProfile, ProfileSettings, PumpCurve, FanCurve, CurveSettings, CurvePoint, CurveKind } from "../profile/types";
 /** Hardware context types (schemas/hardware-context.schema.json). */
-export type { HardwareContext, MotorComponent, PumpComponent, RadiatorThermal, BoardRevision } from "../hardware/types";
-/** Sound exponent when a component gives none (50, fan-law sound scaling); stopped-radiator factor (3×, assumption). */
-export { DEFAULT_SOUND_EXPONENT, DEFAULT_STOPPED_RESISTANCE_FACTOR } from "../hardware/types";
+export type { HardwareContext, MotorComponent, PumpComponent, RadiatorThermal, BoardRevision, SoundTable, SoundTablePoint } from "../hardware/types";
+/** Sound exponent when a component gives none (50, fan-law sound scaling); stopped-radiator factor (3×, assumption); radiator size assumed for the near-field check (480 mm, assumption). */
+export { DEFAULT_SOUND_EXPONENT, DEFAULT_STOPPED_RESISTANCE_FACTOR, DEFAULT_LARGEST_DIMENSION_MM } from "../hardware/types";
 /** Canonical JSON (sorted keys, no whitespace) and its SHA-256 hex: the content identity of a document. */
 export { canonicalJson, contentHashHex } from "../profile/canonical";
 /** Thrown by computations on out-of-range numbers; names the parameter. */
@@ -29,8 +29,8 @@ export type { TextPosition, TextRange } from "../validation/positions";
 // ── Speeds ───────────────────────────────────────────────────────────────────
 /** Curve duty at a temperature: linear between points, held outside them. */
 export { dutyAtTemp, maxDutyPct } from "../speeds/curve";
-/** Duty → RPM: linear from (min duty, RPM at min) to (100 %, max RPM); holds min RPM below. */
-export { dutyToRpm } from "../speeds/rpm";
+/** Duty → RPM: linear from (min duty, RPM at min) to (100 %, max RPM); below, min RPM — or 0 RPM at 0 % for a fan that stops at 0 % duty. */
+export { dutyToRpm, rpmAtZeroDuty } from "../speeds/rpm";
 /** Steady-state pump/fan duty and RPM at a liquid temperature (fan stop, critical override). */
 export { pumpStateAt, fanStateAt, fansStoppedAt } from "../speeds/at-temp";
 /** Duty, RPM and stopped flag of a motor group. */
@@ -43,8 +43,12 @@ export type { CurveRow, CurveTableOptions } from "../evaluation/curve-table";
 // ── Acoustics ────────────────────────────────────────────────────────────────
 /** L = Lref + k·log10(N/Nref); incoherent sum; n sources +10·log10(n); −20·log10(r). */
 export { levelAtSpeedDb, addLevelsDb, identicalSourcesDb, levelAtDistanceDb } from "../acoustics/levels";
-/** Noise of a cooler (fans × n + pump) at 1 m and at a listener distance. */
-export { coolerNoise, coolerTotalDbA1m, prepareCoolerTotal, componentLevelDbA } from "../acoustics/cooler-noise";
+/** Noise of a cooler (fans × n + pump) at 1 m and at a listener distance; one unit's level from its sound table or the fallback law. */
+export { coolerNoise, coolerTotalDbA1m, prepareCoolerTotal, componentLevelDbA, prepareComponentLevel } from "../acoustics/cooler-noise";
+/** Measured sound table: linear in dB over log RPM, clamped to its end points. */
+export { prepareSoundTable, soundTableDbA } from "../acoustics/sound-table";
+/** Listener distances inside the cooler's near field (below about the radiator's largest dimension) are refused. */
+export { nearFieldLimitM, listenerDistanceProblem, requireListenerDistance } from "../acoustics/near-field";
 /** Fans, pump and total levels at 1 m and at the listener distance. */
 export type { NoiseEstimate } from "../acoustics/cooler-noise";
 

@@ -2,6 +2,24 @@
  * TypeScript shape of `schemas/hardware-context.schema.json`.
  */
 
+/** One measured point of a sound table: the A-weighted level of one unit at a speed. */
+export interface SoundTablePoint {
+  rpm: number;
+  soundDbA: number;
+}
+
+/**
+ * Levels of one unit measured at several speeds, at the stated distance (free field,
+ * far enough from the unit to be out of its own near field). Preferred over the
+ * reference level and exponent when given (lib/acoustics/sound-table.ts).
+ */
+export interface SoundTable {
+  /** Microphone distance the levels were measured at, m. */
+  distanceM: number;
+  /** At least two points with strictly increasing RPM. */
+  points: SoundTablePoint[];
+}
+
 /** A fan or pump model. */
 export interface MotorComponent {
   name?: string;
@@ -12,8 +30,17 @@ export interface MotorComponent {
   tachPulsesPerRev: number;
   soundRefDbA: number;
   soundRefRpm: number;
-  /** k in L = Lref + k·log10(N/Nref); 50 when left out. */
+  /** k in L = Lref + k·log10(N/Nref); 50 when left out. Only used without a sound table. */
   soundExponent?: number;
+  /** Measured levels over speed; when given, the reference level and exponent are not used. */
+  soundTable?: SoundTable;
+  /**
+   * What the motor does at 0 % duty (Intel, "4-Wire Pulse Width Modulation (PWM)
+   * Controlled Fans", rev. 1.3, §3.4 allows both): false (the default) — it keeps its
+   * minimum speed at every duty below the minimum duty, 0 % included; true — it stops
+   * at 0 % duty and keeps its minimum speed between 0 % and the minimum duty.
+   */
+  stopsAtZeroDuty?: boolean;
   /** Required for pumps. */
   flowAtMaxRpmLpm?: number;
 }
@@ -24,6 +51,8 @@ export interface PumpComponent extends MotorComponent {
 }
 
 export interface RadiatorThermal {
+  /** Largest outside dimension of the radiator with its fans, mm: the near field of the cooler ends at about this distance. */
+  largestDimensionMm?: number;
   thermalResistanceAtMinFanKPerW: number;
   thermalResistanceAtMaxFanKPerW: number;
   thermalResistanceFansStoppedKPerW?: number;
@@ -49,6 +78,13 @@ export interface HardwareContext {
   radiator: RadiatorThermal;
   boardRevision: BoardRevision;
 }
+
+/**
+ * Largest dimension assumed for the near-field check when the hardware context gives
+ * none: 480 mm, the longest radiator commonly fitted to all-in-one coolers (an
+ * assumption of this tool, chosen so that the check errs on the safe side).
+ */
+export const DEFAULT_LARGEST_DIMENSION_MM = 480;
 
 /** Fan-law sound exponent used when a component does not give one. */
 export const DEFAULT_SOUND_EXPONENT = 50;

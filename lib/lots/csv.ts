@@ -1,6 +1,7 @@
 import { LOT_CSV_COLUMNS, lotInput, type LotInput } from "./input";
 import { parseSerial, rangesOverlap } from "../serials/serial";
 import { unsafeTextReason } from "../validation/text";
+import { splitCsv, withoutBom } from "../csv/read";
 
 /** A problem in one cell or row of an uploaded lots CSV; row 1 is the header. */
 export interface CsvRowIssue {
@@ -22,59 +23,6 @@ export interface ParsedLotsCsv {
 export const MAX_CSV_ROWS = 100_000;
 
 /**
- * Splits CSV text into records (RFC 4180: comma separated, double-quoted fields may
- * hold commas, newlines and doubled quotes; CRLF or LF line ends). Returns each
- * record with the 1-based line it starts on.
- */
-export function splitCsv(text: string): { line: number; fields: string[] }[] {
-  const out: { line: number; fields: string[] }[] = [];
-  let fields: string[] = [];
-  let field = "";
-  let quoted = false;
-  let line = 1;
-  let startLine = 1;
-  let sawAny = false;
-  for (let i = 0; i < text.length; i++) {
-    const ch = text[i]!;
-    if (quoted) {
-      if (ch === '"') {
-        if (text[i + 1] === '"') {
-          field += '"';
-          i++;
-        } else quoted = false;
-      } else {
-        if (ch === "\n") line++;
-        field += ch;
-      }
-      continue;
-    }
-    if (ch === '"' && field === "") {
-      quoted = true;
-      sawAny = true;
-    } else if (ch === ",") {
-      fields.push(field);
-      field = "";
-      sawAny = true;
-    } else if (ch === "\n" || ch === "\r") {
-      if (ch === "\r" && text[i + 1] === "\n") i++;
-      fields.push(field);
-      if (sawAny || fields.some((f) => f !== "")) out.push({ line: startLine, fields });
-      fields = [];
-      field = "";
-      sawAny = false;
-      line++;
-      startLine = line;
-    } else {
-      field += ch;
-      sawAny = true;
-    }
-  }
-  fields.push(field);
-  if (sawAny || fields.some((f) => f !== "")) out.push({ line: startLine, fields });
-  return out;
-}
-
-/**
  * Reads a lots CSV: a header naming the seven columns (any order), then one lot per
  * row. Each row is checked with the same schema as the form and the API; rows whose
  * serial ranges overlap each other are reported too. Nothing is looked up here: the
@@ -82,7 +30,7 @@ export function splitCsv(text: string): { line: number; fields: string[] }[] {
  */
 export function parseLotsCsv(text: string): ParsedLotsCsv {
   const issues: CsvRowIssue[] = [];
-  const records = splitCsv(text.replace(/^\uFEFF/, ""));
+  const records = splitCsv(withoutBom(text));
   const header = records.shift();
   if (!header) return { rows: [], issues: [{ row: 1, column: "", message: "The file is empty; the first row must name the columns." }] };
   const names = header.fields.map((f) => f.trim().toLowerCase());

@@ -62,14 +62,14 @@ export function plotRangeC(profile: ProfileSettings): { fromC: number; toC: numb
 /**
  * Pump or fan RPM while the liquid cools at `tempC`: the firmware holds the curve's
  * input at T + hysteresis (play operator, lib/transient), so the falling branch is the
- * curve read there; full speed at or above the critical temperature; fans stopped while
- * the held temperature is below the stop temperature.
+ * curve read there; full speed at or above the critical temperature; fans at 0 % while
+ * the held temperature is below the stop temperature (standing still only if they stop at 0 % duty).
  */
 export function coolingBranchRpm(profile: ProfileSettings, hw: HardwareContext, kind: CurveKind, tempC: number): number {
   const motor = kind === "pump" ? hw.pump : hw.fan;
   if (tempC >= profile.criticalTempC) return dutyToRpm(100, motor);
   const held = tempC + profile[kind].hysteresisC;
-  if (kind === "fans" && profile.fans.stopBelowTempC !== undefined && held < profile.fans.stopBelowTempC) return 0;
+  if (kind === "fans" && profile.fans.stopBelowTempC !== undefined && held < profile.fans.stopBelowTempC) return dutyToRpm(0, motor);
   return dutyToRpm(dutyAtTemp(profile[kind].points, held), motor);
 }
 
@@ -113,7 +113,7 @@ export function evaluateEditorText(text: string, hw: HardwareContext): EditorEva
 export interface PointRow {
   tempC: number;
   dutyPct: number;
-  /** Speed at this duty (dutyToRpm); 0 for a fan point below the fan stop temperature. */
+  /** Speed at this duty (dutyToRpm); a fan point below the fan stop temperature gets 0 % (0 RPM only for a fan that stops at 0 % duty). */
   rpm: number;
   /** This motor group's own level at 1 m: the pump alone, or all fans together (+10·log10 n). */
   soundDbA: number;
@@ -125,7 +125,7 @@ export function pointRows(profile: ProfileSettings, hw: HardwareContext, kind: C
   const stop = kind === "fans" ? profile.fans.stopBelowTempC : undefined;
   return profile[kind].points.map((p) => {
     const stopped = stop !== undefined && p.tempC < stop && p.tempC < profile.criticalTempC;
-    const rpm = stopped ? 0 : dutyToRpm(p.dutyPct, motor);
+    const rpm = dutyToRpm(stopped ? 0 : p.dutyPct, motor);
     const own = rpm > 0 ? componentLevelDbA(motor, rpm) : -Infinity;
     const soundDbA = kind === "pump" ? own : identicalSourcesDb(own, hw.fanCount);
     return { tempC: p.tempC, dutyPct: p.dutyPct, rpm, soundDbA };

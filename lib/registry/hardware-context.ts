@@ -1,4 +1,4 @@
-import type { BoardRevision as EngineBoardRevision, HardwareContext, MotorComponent } from "@/lib/engine";
+import type { BoardRevision as EngineBoardRevision, HardwareContext, MotorComponent, SoundTable } from "@/lib/engine";
 
 /** The registry's fields the engine needs; plain objects, so client and server can both map them. */
 export interface ComponentFields {
@@ -11,11 +11,17 @@ export interface ComponentFields {
   refSoundDbA: number;
   refRpm: number;
   soundExponent: number;
+  /** Measured RPM → dB(A) at a stated distance; null when only the reference level and exponent are known. */
+  soundTable: SoundTable | null;
+  /** True: stops at 0 % duty; false: keeps its minimum speed below the minimum duty. */
+  stopsAtZeroDuty: boolean;
   flowAtMaxRpmLpm: number | null;
 }
 
 export interface CoolerFields {
   name: string;
+  /** Nominal radiator length, mm: taken as about its largest dimension for the near-field limit of noise estimates. */
+  radiatorMm: number;
   fanCount: number;
   radiatorKPerWAtMinFan: number;
   radiatorKPerWAtMaxFan: number;
@@ -42,6 +48,8 @@ export function toEngineComponent(c: ComponentFields): MotorComponent {
     soundRefDbA: c.refSoundDbA,
     soundRefRpm: c.refRpm,
     soundExponent: c.soundExponent,
+    stopsAtZeroDuty: c.stopsAtZeroDuty,
+    ...(c.soundTable !== null ? { soundTable: c.soundTable } : {}),
     ...(c.flowAtMaxRpmLpm !== null ? { flowAtMaxRpmLpm: c.flowAtMaxRpmLpm } : {}),
   };
 }
@@ -67,6 +75,7 @@ export function toHardwareContext(input: { cooler: CoolerFields; fan: ComponentF
     fanCount: input.cooler.fanCount,
     pump: { ...pump, kind: "pump", flowAtMaxRpmLpm: input.pump.flowAtMaxRpmLpm ?? 1 },
     radiator: {
+      largestDimensionMm: input.cooler.radiatorMm,
       thermalResistanceAtMinFanKPerW: input.cooler.radiatorKPerWAtMinFan,
       thermalResistanceAtMaxFanKPerW: input.cooler.radiatorKPerWAtMaxFan,
     },

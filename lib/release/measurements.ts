@@ -1,4 +1,5 @@
 import { coolerNoise, type HardwareContext } from "../engine";
+import { splitCsv, withoutBom } from "../csv/read";
 import { correctForBackground, ISO_3744_MIN_DIFFERENCE_DB, type BackgroundCorrection } from "../acoustics/background-correction";
 
 /** The header a lab measurement CSV must start with (liquid °C, pump RPM, fan RPM, sound dB(A) at 1 m). */
@@ -28,9 +29,10 @@ const LIMITS: Record<(typeof MEASUREMENT_COLUMNS)[number] | typeof BACKGROUND_CO
   background_dba: [0, 140],
 };
 
+/** The header's column names, read from the first line alone (the content check runs on whole uploads). */
 function headerColumns(text: string): string[] {
-  const first = text.replace(/^\uFEFF/, "").split(/\r?\n/, 1)[0] ?? "";
-  return first.split(",").map((c) => c.trim().toLowerCase());
+  const first = withoutBom(text).split(/\r?\n/, 1)[0] ?? "";
+  return (splitCsv(first)[0]?.fields ?? []).map((c) => c.trim().toLowerCase());
 }
 
 /** Whether `text` starts with the measurement header, with or without the background column (the content check of an upload). */
@@ -47,18 +49,18 @@ export function hasMeasurementHeader(text: string): boolean {
 export function parseMeasurementsCsv(text: string): ParseMeasurementsResult {
   if (!hasMeasurementHeader(text)) return { ok: false, errors: [`The first line must be the header "${MEASUREMENT_HEADER}" (optionally followed by ",${BACKGROUND_COLUMN}").`] };
   const columns = headerColumns(text) as (keyof typeof LIMITS)[];
-  const lines = text.replace(/^\uFEFF/, "").split(/\r?\n/);
+  const records = splitCsv(withoutBom(text)).slice(1);
   const rows: MeasurementRow[] = [];
   const errors: string[] = [];
   const backgroundGiven: boolean[] = [];
-  for (let i = 1; i < lines.length; i++) {
-    const line = lines[i]!.trim();
-    if (!line) continue;
-    const cells = line.split(",").map((c) => c.trim());
+  for (const { line, fields } of records) {
+    const cells = fields.map((c) => c.trim());
+    // A line of nothing but spaces is a blank line.
+    if (cells.length === 1 && cells[0] === "") continue;
     // A trailing empty background cell may be left off.
     if (columns.length === 5 && cells.length === 4) cells.push("");
     if (cells.length !== columns.length) {
-      errors.push(`Line ${i + 1}: expected ${columns.length} values, found ${cells.length}.`);
+      errors.push(`Line ${line}: expected ${columns.length} values, found ${cells.length}.`);
       continue;
     }
     const values = cells.map(Number);
@@ -70,7 +72,7 @@ export function parseMeasurementsCsv(text: string): ParseMeasurementsResult {
     });
     if (bad >= 0) {
       const col = columns[bad]!;
-      errors.push(`Line ${i + 1}: ${col} must be a number from ${LIMITS[col][0]} to ${LIMITS[col][1]}.`);
+      errors.push(`Line ${line}: ${col} must be a number from ${LIMITS[col][0]} to ${LIMITS[col][1]}.`);
       continue;
     }
     const hasBackground = columns.length === 5 && cells[4] !== "";
@@ -117,8 +119,9 @@ function statusOf(correction: BackgroundCorrection, deltaDb: number | null, tole
 /**
  * Measured sound against the estimate at the measured speeds: the measured level corrected
  * for the room's background (ISO 3744:2010 §8.2.3, see lib/acoustics/background-correction),
- * then compared with coolerNoise (fan-law scaling L = Lref + k·log10(N/Nref), n fans
- * +10·log10(n), incoherent sum with the pump). A point fails only when the cooler is
+ * then compared with coolerNoise (each unit's measured sound table where the registry has
+ * one, otherwise fan-law scaling L = Lref + k·log10(N/Nref); n fans +10·log10(n),
+ * incoherent sum with the pump). A point fails only when the cooler is
  * louder than estimated by more than the tolerance; quieter is not a fault of the curve.
  */
 export function compareMeasurements(rows: readonly MeasurementRow[], hw: HardwareContext, toleranceDb: number, minDifferenceDb = ISO_3744_MIN_DIFFERENCE_DB): MeasurementComparison[] {

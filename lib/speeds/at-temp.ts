@@ -7,33 +7,35 @@ import { dutyToRpm } from "./rpm";
 export interface MotorState {
   dutyPct: number;
   rpm: number;
+  /** The motors stand still (0 RPM). */
   stopped: boolean;
 }
 
-/** True when the fan curve's stop temperature applies at `tempC`. */
+/** True when the fan curve's stop temperature applies at `tempC` (the firmware outputs 0 % to the fans). */
 export function fansStoppedAt(fans: FanCurve, tempC: number): boolean {
   return fans.stopBelowTempC !== undefined && tempC < fans.stopBelowTempC;
 }
 
 /**
  * Pump duty and RPM at a steady liquid temperature: the curve duty (at or above
- * the critical temperature 100 %), converted by `dutyToRpm`. The pump never
- * stops: below its minimum duty it holds its minimum RPM.
+ * the critical temperature 100 %), converted by `dutyToRpm`. Below its minimum
+ * duty the pump holds its minimum RPM (a 0 % pump point is refused by validation).
  */
 export function pumpStateAt(profile: ProfileSettings, hw: HardwareContext, tempC: number): MotorState {
   const dutyPct = tempC >= profile.criticalTempC ? 100 : dutyAtTemp(profile.pump.points, tempC);
-  return { dutyPct, rpm: dutyToRpm(dutyPct, hw.pump), stopped: false };
+  const rpm = dutyToRpm(dutyPct, hw.pump);
+  return { dutyPct, rpm, stopped: rpm === 0 };
 }
 
 /**
- * Fan duty and RPM at a steady liquid temperature: 0 RPM below the profile's
- * fan stop temperature, otherwise the curve duty (100 % at or above the
- * critical temperature) converted by `dutyToRpm`.
+ * Fan duty and RPM at a steady liquid temperature: 0 % below the profile's fan
+ * stop temperature, otherwise the curve duty (100 % at or above the critical
+ * temperature), converted by `dutyToRpm`. What 0 % (or a duty below the minimum)
+ * does depends on the fan: one that stops at 0 % duty stands still, one that holds
+ * its minimum speed keeps turning at it (Intel 4-wire PWM fan spec rev. 1.3 §3.4).
  */
 export function fanStateAt(profile: ProfileSettings | CoolingProfile, hw: HardwareContext, tempC: number): MotorState {
-  if (tempC < profile.criticalTempC && fansStoppedAt(profile.fans, tempC)) {
-    return { dutyPct: 0, rpm: 0, stopped: true };
-  }
-  const dutyPct = tempC >= profile.criticalTempC ? 100 : dutyAtTemp(profile.fans.points, tempC);
-  return { dutyPct, rpm: dutyToRpm(dutyPct, hw.fan), stopped: false };
+  const dutyPct = tempC >= profile.criticalTempC ? 100 : fansStoppedAt(profile.fans, tempC) ? 0 : dutyAtTemp(profile.fans.points, tempC);
+  const rpm = dutyToRpm(dutyPct, hw.fan);
+  return { dutyPct, rpm, stopped: rpm === 0 };
 }

@@ -1,4 +1,5 @@
 import { coolerNoise, type NoiseEstimate } from "../acoustics/cooler-noise";
+import { requireListenerDistance } from "../acoustics/near-field";
 import { requireFinite } from "../guards/input-error";
 import { DEFAULT_STOPPED_RESISTANCE_FACTOR, type HardwareContext } from "../hardware/types";
 import type { ProfileSettings } from "../profile/types";
@@ -60,7 +61,7 @@ export function heatBalanceResidualK(profile: ProfileSettings, hw: HardwareConte
  * g(T) = T − Tamb − P·R(N(T)) is non-decreasing and the root is unique; the
  * bracket [Tamb + P·Rfast, Tamb + P·Rlargest] always holds it. Then: pump and fan speeds,
  * noise (see coolerNoise), pump flow V̇ ∝ N and coolant rise ΔT = Q/(ṁ·c_p)
- * (Incropera & DeWitt, ch. 1). An estimate from a lumped model: a release still
+ * (Incropera & DeWitt, 6th edition, §1.3.1, from memory). An estimate from a lumped model: a release still
  * needs lab measurement on real hardware.
  */
 export function operatingPoint(profile: ProfileSettings, hw: HardwareContext, options: OperatingPointOptions): OperatingPoint {
@@ -71,7 +72,7 @@ function solve(profile: ProfileSettings, hw: HardwareContext, resistance: (fanRp
   const heatLoadW = requireFinite("heatLoadW", options.heatLoadW, 0, 100_000);
   const ambientC = requireFinite("ambientC", options.ambientC, -50, 100);
   const toleranceK = requireFinite("toleranceK", options.toleranceK ?? DEFAULT_TOLERANCE_K, 1e-9, 10);
-  const distanceM = requireFinite("distanceM", options.distanceM ?? 1, 0.01, 1000);
+  const distanceM = requireListenerDistance(hw, requireFinite("distanceM", options.distanceM ?? 1, 0.01, 1000));
   const coolant = options.coolant ?? WATER_25C;
   const g = (tempC: number): number => tempC - ambientC - heatLoadW * resistance(fanStateAt(profile, hw, tempC).rpm);
 

@@ -3,8 +3,11 @@ import { DEFAULT_STOPPED_RESISTANCE_FACTOR, type HardwareContext } from "../hard
 /**
  * Exponent of the air-side law. Forced-convection heat transfer over fins
  * grows roughly with air velocity^0.8 in turbulent flow (Dittus–Boelter-type
- * correlations; Incropera & DeWitt, "Fundamentals of Heat and Mass Transfer",
- * ch. 7–8), and fan airflow is proportional to speed (fan laws), so the
+ * correlations, Nu ∝ Re^0.8; Incropera & DeWitt, "Fundamentals of Heat and Mass
+ * Transfer", 6th edition, §8.5, eq. 8.60 — section and equation from memory; a
+ * modelling choice for fin banks, not a published radiator law), and fan airflow is
+ * proportional to speed (fan laws, ASHRAE Handbook — HVAC Systems and Equipment, 2020
+ * edition, ch. 21 "Fans", from memory), so the
  * speed-dependent part of the resistance falls as N^-0.8.
  */
 export const AIR_SIDE_EXPONENT = 0.8;

@@ -16,6 +16,7 @@ export interface TransientMotor {
   heldTempC: number | null;
   dutyPct: number;
   rpm: number;
+  /** The motors stand still: 0 % out to a fan that stops at 0 % duty. */
   stopped: boolean;
 }
 
@@ -74,9 +75,11 @@ function step(curve: CurveSettings, state: CurveState, tempC: number, critical: 
   state.dutyPct = started ? applyRampPct(state.dutyPct, target, dtSec, curve.rampUpPctPerSec, curve.rampDownPctPerSec) : target;
 }
 
-function motorOut(state: CurveState, component: MotorComponent, stopped: boolean): TransientMotor {
-  if (stopped) return { heldTempC: state.heldC, dutyPct: 0, rpm: 0, stopped: true };
-  return { heldTempC: state.heldC, dutyPct: state.dutyPct, rpm: dutyToRpm(state.dutyPct, component), stopped: false };
+/** Output of one motor group; `cut` is the profile's fan stop (0 % out). Whether the motor then stands still is the component's (dutyToRpm). */
+function motorOut(state: CurveState, component: MotorComponent, cut: boolean): TransientMotor {
+  const dutyPct = cut ? 0 : state.dutyPct;
+  const rpm = dutyToRpm(dutyPct, component);
+  return { heldTempC: state.heldC, dutyPct, rpm, stopped: rpm === 0 };
 }
 
 function checkTrace(trace: readonly TraceSample[]): void {
@@ -111,9 +114,10 @@ function checkTrace(trace: readonly TraceSample[]): void {
  *   hysteresis continues where it was and the duty ramps down from the
  *   sensor-loss duty instead of cycling.
  *
- * Fan stop is an immediate cut, not a ramp: the fans stop while the held fan
+ * Fan stop is an immediate cut, not a ramp: the fans get 0 % while the held fan
  * temperature is below the stop temperature (so the hysteresis also keeps the
- * stop from chattering). Below the lowest duty it follows, a fan's speed no
+ * stop from chattering); a fan that stops at 0 % duty then stands still, one that
+ * holds its minimum speed keeps turning at it (dutyToRpm). Below the lowest duty it follows, a fan's speed no
  * longer follows the duty (it holds its minimum speed or stops), so ramping the
  * duty toward 0 would not slow it any further, only delay the stop. The fan
  * duty keeps following the curve while stopped, so the fans restart at the

@@ -18,6 +18,31 @@ function componentRules(path: string, c: MotorComponent, kind: "fan" | "pump", o
   if (c.minDutyPct >= 100) {
     out.push({ code: "component.min_duty_full", path: `${path}/minDutyPct`, severity: "error", message: "A minimum duty of 100 % leaves no speed control: give the lowest duty the motor follows." });
   }
+  if (c.soundTable) soundTableRules(path, c, out);
+}
+
+const rpmText = (n: number): string => String(Math.round(n * 1000) / 1000);
+
+/** A measured sound table must have rising speeds; outside its range levels are clamped, so say where that applies. */
+function soundTableRules(path: string, c: MotorComponent, out: ValidationIssue[]): void {
+  const points = c.soundTable?.points ?? [];
+  let ordered = true;
+  points.forEach((p, i) => {
+    const prev = points[i - 1];
+    if (prev && !(p.rpm > prev.rpm)) {
+      ordered = false;
+      out.push({ code: "component.sound_table_rpm_order", path: `${path}/soundTable/points/${i}/rpm`, severity: "error", message: `Sound table point ${i + 1} is at ${rpmText(p.rpm)} RPM, not above point ${i} at ${rpmText(prev.rpm)} RPM: list the measurements by rising speed, one per speed.` });
+    }
+  });
+  const first = points[0];
+  const last = points[points.length - 1];
+  if (!ordered || !first || !last) return;
+  if (first.rpm > c.rpmAtMinDuty) {
+    out.push({ code: "component.sound_table_range", path: `${path}/soundTable/points/0/rpm`, severity: "warning", message: `The sound table starts at ${rpmText(first.rpm)} RPM, above the minimum speed ${rpmText(c.rpmAtMinDuty)} RPM: below it the level is taken as ${rpmText(first.soundDbA)} dB(A) (held, not extrapolated), which overstates it. Add a measurement at the minimum speed.` });
+  }
+  if (last.rpm < c.maxRpm) {
+    out.push({ code: "component.sound_table_range", path: `${path}/soundTable/points/${points.length - 1}/rpm`, severity: "warning", message: `The sound table ends at ${rpmText(last.rpm)} RPM, below the maximum speed ${rpmText(c.maxRpm)} RPM: above it the level is taken as ${rpmText(last.soundDbA)} dB(A) (held, not extrapolated), which understates it. Add a measurement at full speed.` });
+  }
 }
 
 /** The parts of a hardware context the rules read; each present only when it could be read. */

@@ -79,11 +79,7 @@ function hardwareRules(doc: ReadableProfile, hw: HardwareContext, out: Validatio
       out.push(error("pump.below_min_duty", `/pump/points/${i}/dutyPct`, `${fmt(p.dutyPct)} % is below the pump's minimum duty ${fmt(hw.pump.minDutyPct)} %: raise it to at least ${fmt(hw.pump.minDutyPct)} %.`));
     }
   });
-  doc.fans?.points.forEach((p, i) => {
-    if (p.dutyPct < hw.fan.minDutyPct) {
-      out.push(warning("fans.below_min_duty", `/fans/points/${i}/dutyPct`, `${fmt(p.dutyPct)} % is below the fan's minimum duty ${fmt(hw.fan.minDutyPct)} %: the fans hold their minimum ${fmt(hw.fan.rpmAtMinDuty)} RPM there. Raise it, or use stopBelowTempC to stop them.`));
-    }
-  });
+  fanBelowMinDutyRules(doc, hw, out);
   const limit = hw.boardRevision.maxPointsPerCurve;
   for (const [kind, curve] of readableCurves(doc)) {
     const n = curve.points.length;
@@ -95,6 +91,42 @@ function hardwareRules(doc: ReadableProfile, hw: HardwareContext, out: Validatio
   const imageBytes = bankBytes([{ pumpPoints: doc.pump.points.length, fanPoints: doc.fans.points.length }]);
   if (imageBytes > hw.boardRevision.memoryBytes) {
     out.push(error("bank.exceeds_memory", "", `A bank holding this profile alone takes ${imageBytes} bytes; board revision ${hw.boardRevision.version} has ${hw.boardRevision.memoryBytes}: remove curve points.`));
+  }
+}
+
+/**
+ * What the fans do below their minimum duty depends on the fan (Intel, "4-Wire Pulse Width
+ * Modulation (PWM) Controlled Fans", rev. 1.3, §3.4 allows both kinds; the hardware context
+ * says which, `stopsAtZeroDuty`):
+ * - a fan that stops at 0 % duty stops at a 0 % point. A stop the curve makes by itself
+ *   bypasses the fan stop temperature — its hysteresis, and the rule that keeps it below
+ *   the critical temperature — so a 0 % point is an error unless it lies below the fan
+ *   stop temperature (where the fans are stopped anyway);
+ * - a fan that keeps its minimum speed never stops on a 0 % output, so a fan stop
+ *   temperature only lowers it to that speed: a warning, since the profile then does
+ *   not do what it says.
+ */
+function fanBelowMinDutyRules(doc: ReadableProfile, hw: HardwareContext, out: ValidationIssue[]): void {
+  const fans = doc.fans;
+  if (!fans) return;
+  const stops = hw.fan.stopsAtZeroDuty === true;
+  const stopC = fans.stopBelowTempC;
+  fans.points.forEach((p, i) => {
+    if (stops && p.dutyPct <= 0) {
+      if (stopC === undefined) {
+        out.push(error("fans.zero_duty_stops_fan", `/fans/points/${i}/dutyPct`, `Fan point ${pointNo(i)} asks for 0 %, and this fan stops at 0 % duty: the fans would stop at ${fmt(p.tempC)} °C without a fan stop temperature, so without its hysteresis and safety checks. Set stopBelowTempC to stop them (e.g. ${fmt(p.tempC)} °C), or give this point at least the fan's minimum duty ${fmt(hw.fan.minDutyPct)} %.`));
+      } else if (p.tempC >= stopC) {
+        out.push(error("fans.zero_duty_stops_fan", `/fans/points/${i}/dutyPct`, `Fan point ${pointNo(i)} asks for 0 % at ${fmt(p.tempC)} °C, at or above the fan stop temperature ${fmt(stopC)} °C, and this fan stops at 0 % duty: the fans would stop there although the stop temperature says they run. Raise this point to at least the fan's minimum duty ${fmt(hw.fan.minDutyPct)} %, or raise stopBelowTempC above ${fmt(p.tempC)} °C.`));
+      }
+      return;
+    }
+    if (p.dutyPct < hw.fan.minDutyPct) {
+      const stopAdvice = stops ? "Raise it, or use stopBelowTempC to stop them." : "Raise it; this fan does not stop at 0 % duty.";
+      out.push(warning("fans.below_min_duty", `/fans/points/${i}/dutyPct`, `Fan point ${pointNo(i)}: ${fmt(p.dutyPct)} % is below the fan's minimum duty ${fmt(hw.fan.minDutyPct)} %, so the fans hold their minimum ${fmt(hw.fan.rpmAtMinDuty)} RPM there. ${stopAdvice}`));
+    }
+  });
+  if (!stops && stopC !== undefined) {
+    out.push(warning("fans.stop_on_fan_that_holds_speed", "/fans/stopBelowTempC", `The fans are set to stop below ${fmt(stopC)} °C, but this fan keeps its minimum speed at 0 % duty: below ${fmt(stopC)} °C they run at ${fmt(hw.fan.rpmAtMinDuty)} RPM, not stopped. Use a fan that stops at 0 % duty, or remove stopBelowTempC.`));
   }
 }
 

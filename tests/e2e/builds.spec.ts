@@ -1,10 +1,11 @@
-import { expect, test, type Browser, type Page } from "@playwright/test";
+import { expect, test, type Browser } from "@playwright/test";
 import { coolerNoise } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { MEASUREMENT_HEADER } from "@/lib/release/measurements";
 import { DEMO_COMPONENTS, DEMO_REVISIONS } from "@/db/seed/hardware";
-import { signInPage } from "./support/accounts";
-import { expectAccessible } from "./support/a11y";
+import { ACCOUNTS, signInPage } from "./support/accounts";
+import { MailboxPage } from "./pages/admin";
+import { BuildDetail, BuildsPipeline, NewBuildForm } from "./pages/builds";
 
 /** A one-page PDF made here: header, one object per part, cross-reference table, trailer. */
 function tinyPdf(): Buffer {
@@ -24,16 +25,15 @@ function tinyPdf(): Buffer {
 function measurementsCsv(): Buffer {
   const fan = DEMO_COMPONENTS.find((c) => c.name === "Fellwind 120 PWM fan")!;
   const pump = DEMO_COMPONENTS.find((c) => c.name === "Brook D3 pump")!;
-  const hw = toHardwareContext({ cooler: { name: "Tarn 240", fanCount: 2, radiatorKPerWAtMinFan: 0.11, radiatorKPerWAtMaxFan: 0.045 }, fan, pump, revision: DEMO_REVISIONS[0]! });
+  const hw = toHardwareContext({ cooler: { name: "Tarn 240", radiatorMm: 240, fanCount: 2, radiatorKPerWAtMinFan: 0.11, radiatorKPerWAtMaxFan: 0.045 }, fan, pump, revision: DEMO_REVISIONS[0]! });
   const rows = [[32, 1500, 800, 0.6], [42, 2000, 1200, -0.9], [52, 2600, 1700, 1.0]] as const;
   return Buffer.from([MEASUREMENT_HEADER, ...rows.map(([t, p, f, d]) => `${t},${p},${f},${(coolerNoise(hw, f, p).totalDbA1m + d).toFixed(1)}`)].join("\n") + "\n");
 }
 
-async function as(browser: Browser, email: string, url: string): Promise<Page> {
-  const ctx = await browser.newContext();
-  const page = await ctx.newPage();
+/** A fresh browser context signed in as `email`. */
+async function signedIn(browser: Browser, email: string) {
+  const page = await (await browser.newContext()).newPage();
   await signInPage(page, email);
-  await page.goto(url);
   return page;
 }
 
@@ -43,99 +43,79 @@ test("a build goes from draft to the factory and is withdrawn, with reviews, lab
   const title = `TC-1 cooler controller ${version}`;
 
   // The engineer creates the build and asks for review.
-  const engineer = await as(browser, "engineer@tarnwell.example", "/builds/new");
-  await engineer.getByLabel("Board model").selectOption({ label: "TC-1 cooler controller" });
-  await engineer.getByLabel("Build version").fill(version);
-  await engineer.getByLabel("Board revisions").fill(">=1.0.0 <3.0.0");
-  const slot1 = engineer.getByLabel("Slot 1", { exact: true });
-  await expect(slot1.locator("option", { hasText: "Tarn 240 · Quiet office" }).first()).toBeAttached();
-  const pick = async (slot: string, text: string) => {
-    const select = engineer.getByLabel(slot, { exact: true });
-    const value = await select.locator("option", { hasText: text }).first().getAttribute("value");
-    expect(value).toBeTruthy();
-    await select.selectOption(value ?? "");
-  };
+  const form = await new NewBuildForm(await signedIn(browser, ACCOUNTS.engineer)).goto();
+  await form.describe({ board: "TC-1 cooler controller", version, revisions: ">=1.0.0 <3.0.0" });
+  await expect(form.slotOption(1, "Tarn 240 · Quiet office")).toBeAttached();
   // Demo profiles authored by engineer@, so engineer2@ and engineer3@ are independent reviewers.
-  await pick("Slot 1", "Tarn 240 · Quiet office");
-  await pick("Slot 2", "Tarn 360 · Hush");
-  await expectAccessible(engineer);
-  await engineer.getByLabel("Firmware image").setInputFiles({ name: "tc1-fw.bin", mimeType: "application/octet-stream", buffer: Buffer.alloc(4096, 0xa5) });
-  await engineer.getByRole("button", { name: "Create build" }).click();
-  await engineer.waitForURL(/\/builds\/[0-9a-f-]{36}$/);
-  const buildUrl = new URL(engineer.url()).pathname;
-  await expect(engineer.getByRole("heading", { level: 1 })).toContainText(title);
-  await expect(engineer.getByTestId("bank-sha256")).toHaveText(/^[0-9a-f]{64}$/);
-  await expect(engineer.getByText("Estimates, not measurements")).toBeVisible();
-  await engineer.getByRole("button", { name: "Ask for review" }).click();
-  await expect(engineer.getByRole("heading", { level: 1 })).toContainText("In review");
+  await form.pickSlot(1, "Tarn 240 · Quiet office");
+  await form.pickSlot(2, "Tarn 360 · Hush");
+  await form.expectAccessible();
+  await form.attachFirmware("tc1-fw.bin", Buffer.alloc(4096, 0xa5));
+  const buildUrl = await form.create();
+  const authored = new BuildDetail(form.page);
+  await expect(authored.heading).toContainText(title);
+  await expect(authored.bankSha256).toHaveText(/^[0-9a-f]{64}$/);
+  await expect(authored.estimateCaution).toBeVisible();
+  await authored.move("Ask for review", "In review");
   // The author has no approve button: the server would refuse it anyway, and says why.
-  await expect(engineer.getByRole("button", { name: "Approve" })).toHaveCount(0);
-  await expect(engineer.getByTestId("review-refusal")).toContainText("You created this build");
+  await authored.expectNoButton("Approve");
+  await expect(authored.reviewRefusal).toContainText("You created this build");
 
   // The release manager watches the checklist of the next stage fill in.
-  const release = await as(browser, "release@tarnwell.example", buildUrl);
-  const checklist = (stage: string) => release.getByRole("list", { name: `Checklist for ${stage}` });
-  const line = (stage: string, text: string) => checklist(stage).getByRole("listitem").filter({ hasText: text });
-  const promote = release.getByRole("button", { name: "Promote to lab validation" });
-  await expect(line("lab validation", "Approvals 0 of 2")).toHaveAttribute("data-state", "unmet");
+  const release = await new BuildDetail(await signedIn(browser, ACCOUNTS.release_manager)).goto(buildUrl);
+  const promote = release.button("Promote to lab validation");
+  await expect(release.requirement("lab validation", "Approvals 0 of 2")).toHaveAttribute("data-state", "unmet");
   await expect(promote).toBeDisabled();
 
   // Two other engineers approve; each approval is listed as counting.
   for (const [i, email] of ["engineer2@tarnwell.example", "engineer3@tarnwell.example"].entries()) {
-    const reviewer = await as(browser, email, buildUrl);
-    await reviewer.getByLabel("Comment").fill("Curves and bank size look right.");
-    await reviewer.getByRole("button", { name: "Approve" }).click();
-    await expect(reviewer.getByRole("list", { name: "Reviews" }).getByText("Counts toward the approvals.")).toHaveCount(i + 1);
+    const reviewer = await new BuildDetail(await signedIn(browser, email)).goto(buildUrl);
+    await reviewer.approve("Curves and bank size look right.");
+    await expect(reviewer.countingReviews).toHaveCount(i + 1);
     // A second approval would be refused: the form now changes the reviewer's verdict instead.
-    await expect(reviewer.getByText("You approved; sending again changes your verdict.")).toBeVisible();
-    await reviewer.context().close();
-    await release.reload();
-    await expect(line("lab validation", `Approvals ${i + 1} of 2`)).toHaveAttribute("data-state", i === 0 ? "unmet" : "met");
+    await expect(reviewer.page.getByText("You approved; sending again changes your verdict.")).toBeVisible();
+    await reviewer.page.context().close();
+    await release.page.reload();
+    await expect(release.requirement("lab validation", `Approvals ${i + 1} of 2`)).toHaveAttribute("data-state", i === 0 ? "unmet" : "met");
     await (i === 0 ? expect(promote).toBeDisabled() : expect(promote).toBeEnabled());
   }
-  await promote.click();
-  await expect(release.getByRole("heading", { level: 1 })).toContainText("Lab validation");
+  await release.move("Promote to lab validation", "Lab validation");
 
   // Lab evidence arrives; the pilot checklist follows it.
-  const toPilot = release.getByRole("button", { name: "Promote to pilot run" });
-  await expect(line("pilot run", "Lab report attached")).toHaveAttribute("data-state", "unmet");
-  await expect(line("pilot run", "Measured sound within tolerance")).toHaveAttribute("data-state", "unmet");
+  const toPilot = release.button("Promote to pilot run");
+  await expect(release.requirement("pilot run", "Lab report attached")).toHaveAttribute("data-state", "unmet");
+  await expect(release.requirement("pilot run", "Measured sound within tolerance")).toHaveAttribute("data-state", "unmet");
   await expect(toPilot).toBeDisabled();
-  await release.getByLabel("Lab report (PDF)").setInputFiles({ name: "lab-report.pdf", mimeType: "application/pdf", buffer: tinyPdf() });
-  await expect(release.getByRole("link", { name: "lab-report.pdf" })).toBeVisible();
-  await expect(line("pilot run", "Lab report attached")).toHaveAttribute("data-state", "met");
+  await release.attachLabReport("lab-report.pdf", tinyPdf());
+  await expect(release.page.getByRole("link", { name: "lab-report.pdf" })).toBeVisible();
+  await expect(release.requirement("pilot run", "Lab report attached")).toHaveAttribute("data-state", "met");
   await expect(toPilot).toBeDisabled();
-  await release.getByLabel("Measurements (CSV)").setInputFiles({ name: "measurements.csv", mimeType: "text/csv", buffer: measurementsCsv() });
-  await expect(release.getByTestId("sound-plot")).toBeVisible();
+  await release.attachMeasurements("measurements.csv", measurementsCsv());
+  await expect(release.soundPlot).toBeVisible();
   // Measured, corrected for the room's background, and estimated.
-  await expect(release.getByTestId("sound-plot").locator(".recharts-line")).toHaveCount(3);
-  await expect(release.getByText("no compared point is louder than the estimate by more than that.")).toBeVisible();
-  await expect(line("pilot run", "Measurement CSV attached")).toHaveAttribute("data-state", "met");
-  await expect(line("pilot run", "Measured sound within tolerance")).toHaveAttribute("data-state", "met");
-  await expectAccessible(release);
-  await toPilot.click();
-  await expect(release.getByRole("heading", { level: 1 })).toContainText("Pilot run");
+  await expect(release.soundPlot.locator(".recharts-line")).toHaveCount(3);
+  await expect(release.page.getByText("no compared point is louder than the estimate by more than that.")).toBeVisible();
+  await expect(release.requirement("pilot run", "Measurement CSV attached")).toHaveAttribute("data-state", "met");
+  await expect(release.requirement("pilot run", "Measured sound within tolerance")).toHaveAttribute("data-state", "met");
+  await release.expectAccessible();
+  await release.move("Promote to pilot run", "Pilot run");
 
   // Release to the factory happens only after confirming in a dialog that names the build.
-  await release.getByRole("button", { name: "Release to the factory…" }).click();
-  const dialog = release.getByRole("dialog", { name: `Release build ${title} to the factory?` });
+  await release.button("Release to the factory…").click();
+  const dialog = release.releaseDialog(title);
   await expect(dialog).toBeVisible();
   await expect(dialog).toContainText("This cannot be undone.");
-  const confirmRelease = dialog.getByRole("button", { name: "Release to the factory" });
-  await expect(confirmRelease).toBeDisabled();
-  await expectAccessible(release);
+  await expect(dialog.getByRole("button", { name: "Release to the factory", exact: true })).toBeDisabled();
+  await release.expectAccessible();
   // Cancelling changes nothing.
   await dialog.getByRole("button", { name: "Cancel" }).click();
   await expect(dialog).toBeHidden();
-  await expect(release.getByRole("heading", { level: 1 })).toContainText("Pilot run");
-  await release.getByRole("button", { name: "Release to the factory…" }).click();
-  await dialog.getByLabel("Release notes").fill("First factory run of the e2e build.");
-  await confirmRelease.click();
+  await release.expectStage("Pilot run");
+  await release.releaseToFactory("First factory run of the e2e build.");
   await expect(dialog).toBeHidden();
-  await expect(release.getByRole("heading", { level: 1 })).toContainText("Factory release");
 
   // The stage mails arrive in the local mailbox.
-  const admin = await as(browser, "admin@tarnwell.example", "/admin/mailbox");
+  const mailbox = await new MailboxPage(await signedIn(browser, ACCOUNTS.admin)).goto();
   for (const subject of [
     `Build ${title} is waiting for your review`,
     `Your build ${title} was approved`,
@@ -143,28 +123,24 @@ test("a build goes from draft to the factory and is withdrawn, with reviews, lab
     `Build ${title} has entered the pilot run`,
     `Build ${title} was released to the factory`,
   ]) {
-    await expect(admin.getByText(subject).first()).toBeVisible({ timeout: 30_000 });
+    await expect(mailbox.message(subject)).toBeVisible({ timeout: 30_000 });
   }
-  await expectAccessible(admin);
+  await mailbox.expectAccessible();
 
   // Then it turns out bad and is withdrawn with a reason, behind its own confirmation.
-  await expect(release.getByLabel("Reason for withdrawing")).toHaveCount(0);
-  await release.getByRole("button", { name: "Withdraw build…" }).click();
-  const withdraw = release.getByRole("dialog", { name: `Withdraw build ${title}?` });
-  await withdraw.getByLabel("Reason for withdrawing").fill("Fan ramp too aggressive on returned units.");
-  await withdraw.getByRole("button", { name: "Withdraw build" }).click();
-  await expect(release.getByRole("heading", { level: 1 })).toContainText("Withdrawn");
-  await expect(release.getByRole("alert").filter({ hasText: "This build was withdrawn" })).toContainText("Fan ramp too aggressive");
-  await expect(admin.getByText(`Build ${title} was withdrawn`).first()).toBeVisible({ timeout: 30_000 });
-  await expect(release.getByTestId("timeline")).toContainText("Withdrawn");
+  await expect(release.withdrawReason).toHaveCount(0);
+  await release.withdraw("Fan ramp too aggressive on returned units.");
+  await expect(release.withdrawnNotice).toContainText("Fan ramp too aggressive");
+  await expect(mailbox.message(`Build ${title} was withdrawn`)).toBeVisible({ timeout: 30_000 });
+  await expect(release.timeline).toContainText("Withdrawn");
 });
 
 test("the pipeline shows builds in columns by stage", async ({ page }) => {
-  await signInPage(page, "viewer@tarnwell.example");
-  await page.goto("/builds");
-  for (const stage of ["draft", "review", "validation", "pilot", "production", "withdrawn"]) {
-    await expect(page.getByTestId(`pipeline-${stage}`).getByRole("link").first()).toBeVisible();
+  await signInPage(page, ACCOUNTS.viewer);
+  const pipeline = await new BuildsPipeline(page).goto();
+  for (const stage of BuildsPipeline.stages) {
+    await expect(pipeline.column(stage).getByRole("link").first()).toBeVisible();
   }
-  await expect(page.getByRole("link", { name: "New build" })).toHaveCount(0);
-  await expectAccessible(page);
+  await expect(pipeline.newBuildLink).toHaveCount(0);
+  await pipeline.expectAccessible();
 });

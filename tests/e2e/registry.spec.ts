@@ -1,7 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { ACCOUNTS, signInPage } from "./support/accounts";
 import { ProfileCompare, ProfileEditor, ProfilesList } from "./pages/profiles";
-import { BoardsPage, CoolerModelsList } from "./pages/registry";
+import { BoardsPage, ComponentsList, CoolerModelsList } from "./pages/registry";
 
 interface Doc {
   pump: { points: { tempC: number; dutyPct: number }[] };
@@ -185,5 +185,36 @@ test.describe("registry edits, as an engineer", () => {
     await form.getByRole("button", { name: "Save changes" }).click();
     await coolers.expectNoButton("Save changes");
     await expect(coolers.row(name)).toContainText("3 ×");
+  });
+
+  test("register a fan that stops at 0 % duty with a measured sound table; the list shows both", async ({ page }) => {
+    await signInPage(page, ACCOUNTS.engineer);
+    const list = await new ComponentsList(page).goto();
+    const name = `Table fan ${Date.now()}`;
+    const fan = { name, kind: "fan" as const, minDutyPct: 20, rpmAtMinDuty: 500, maxRpm: 1800, refSoundDbA: 30, refRpm: 1800, stopsAtZeroDuty: true };
+    // Speeds out of order: the shared request schema names the problem beside the table.
+    await list.fillComponent({ ...fan, soundTable: "at 1 m\n1200 24\n500 14\n1800 30" });
+    await list.button("Add component").click();
+    await expect(list.addForm.getByText("List the measurements by rising RPM, one per speed.")).toBeVisible();
+    await list.fillComponent({ ...fan, soundTable: "at 1 m\n500 14\n1200 24\n1800 30" });
+    await list.button("Add component").click();
+    await expect(page.getByText("Component added.")).toBeVisible();
+    await list.goto({ q: name });
+    await expect(list.row(name)).toContainText("measured table, 3 points at 1 m");
+    await expect(list.row(name)).toContainText("stops");
+    const saved = (await (await page.request.get(`/api/v1/components?q=${encodeURIComponent(name)}`)).json()) as { items: { stopsAtZeroDuty: boolean; soundTable: unknown }[] };
+    expect(saved.items[0]).toMatchObject({ stopsAtZeroDuty: true, soundTable: { distanceM: 1, points: [{ rpm: 500, soundDbA: 14 }, { rpm: 1200, soundDbA: 24 }, { rpm: 1800, soundDbA: 30 }] } });
+  });
+
+  test("the editor refuses a listener distance inside the cooler's near field and gives the level farther away", async ({ page }) => {
+    await signInPage(page, ACCOUNTS.engineer);
+    await new ProfilesList(page).goto().then((profiles) => profiles.start({ cooler: "Tarn 240", name: `Distance ${Date.now()}` }));
+    const editor = new ProfileEditor(page);
+    await expect(editor.operatingReadout).toContainText("dB(A) at 1 m");
+    await editor.listenerDistance.fill("0.1");
+    await expect(page.getByText("0.1 m is inside the cooler's near field (closer than about the radiator's largest dimension, 240 mm), where the estimate does not hold: use at least 0.24 m.")).toBeVisible();
+    await expect(editor.operatingReadout).not.toContainText("at 0.1 m");
+    await editor.listenerDistance.fill("2");
+    await expect(editor.operatingReadout).toContainText(/dB\(A\) at 1 m, [\d.]+ dB\(A\) at 2 m/);
   });
 });

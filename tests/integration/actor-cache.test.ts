@@ -3,8 +3,9 @@ import { afterAll, describe, expect, it } from "vitest";
 import { closeDb, demoActor, getDb } from "./support/db";
 import { callRoute, tokenFor } from "./support/http";
 import { withRequestStats } from "@/db/request-stats";
-import { listTokens, revokeToken } from "@/db/tokens";
-import { createUser, updateUser } from "@/db/users";
+import { listTokens } from "@/db/tokens";
+import { revokeToken } from "@/lib/use-cases/account/tokens";
+import { createUser, updateUser } from "@/lib/use-cases/admin/users";
 import { actorCaches } from "@/lib/platform/auth/actor-cache";
 import { GET as getMe } from "@/app/api/v1/me/route";
 

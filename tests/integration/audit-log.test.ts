@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { closeDb, demoActor, getDb } from "./support/db";
 import { callRoute, tokenFor } from "./support/http";
-import { createUser, updateUser } from "@/db/users";
+import { createUser, updateUser } from "@/lib/use-cases/admin/users";
 import { GET as listAudit } from "@/app/api/v1/audit/route";
 
 afterAll(closeDb);

@@ -6,7 +6,8 @@ import { afterAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "./support/db";
 import { freshDraftBuild } from "./support/builds";
-import { transitionBuild } from "@/db/build-stages";
+import { lockBuild } from "@/db/build-stages";
+import { enterStage } from "@/lib/use-cases/builds/stages";
 import { listBankSigningKeys } from "@/db/bank-signatures";
 import { builds } from "@/db/schema";
 import { writeIntelHex, type DumpReport } from "@/lib/engine";
@@ -26,7 +27,7 @@ describe("bank signatures", () => {
     const actor = await demoActor("release@tarnwell.example");
     // Straight to the pilot move: the stage gates are judged elsewhere; here only the signing hook is under test.
     await db.update(builds).set({ stage: "validation" }).where(eq(builds.id, build.id));
-    await transitionBuild(db, actor, { id: build.id, from: "validation", to: "pilot", gate: async () => [], mails: async () => [] });
+    await db.transaction(async (tx) => enterStage(tx, actor, (await lockBuild(tx, { id: build.id }))!, { to: "pilot" }));
     const [row] = await db.select().from(builds).where(eq(builds.id, build.id));
     expect(row!.stage).toBe("pilot");
     expect(row!.bankSignature?.length).toBe(64);
@@ -66,7 +67,7 @@ describe("bank signatures", () => {
     const draft = await freshDraftBuild();
     const actor = await demoActor("release@tarnwell.example");
     await db.update(builds).set({ stage: "validation" }).where(eq(builds.id, build.id));
-    await transitionBuild(db, actor, { id: build.id, from: "validation", to: "pilot", gate: async () => [], mails: async () => [] });
+    await db.transaction(async (tx) => enterStage(tx, actor, (await lockBuild(tx, { id: build.id }))!, { to: "pilot" }));
     const [row] = await db.select().from(builds).where(eq(builds.id, build.id));
     const [draftRow] = await db.select().from(builds).where(eq(builds.id, draft.id));
     const keyId = row!.bankSignatureKeyId!;

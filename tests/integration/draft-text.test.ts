@@ -3,7 +3,9 @@ import { eq } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "./support/db";
 import { callRoute, tokenFor } from "./support/http";
 import { coolerModels } from "@/db/schema";
-import { createProfile, getProfileDetail, saveDraft } from "@/db/profiles";
+import { getProfileDetail } from "@/db/profiles";
+import { createProfile } from "@/lib/use-cases/profiles/create";
+import { saveDraft } from "@/lib/use-cases/profiles/save-draft";
 import { GET as getProfile } from "@/app/api/v1/profiles/[id]/route";
 import { PUT as putDraft } from "@/app/api/v1/profiles/[id]/draft/route";
 

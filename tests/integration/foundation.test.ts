@@ -1,8 +1,9 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { sql } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "./support/db";
-import { createToken, findActiveToken, revokeToken } from "@/db/tokens";
-import { updateUser } from "@/db/users";
+import { findActiveToken } from "@/db/tokens";
+import { createToken, revokeToken } from "@/lib/use-cases/account/tokens";
+import { updateUser } from "@/lib/use-cases/admin/users";
 import { auditEvents, users } from "@/db/schema";
 import { eq } from "drizzle-orm";
 

@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import { closeDb, getDb } from "./support/db";
 import { chunksOf, demoMovers, freshDraftBuild } from "./support/builds";
 import { builds } from "@/db/schema";
-import { attachEvidence } from "@/db/build-stages";
+import { attachEvidence } from "@/lib/use-cases/builds/evidence";
 import { tinyPdf } from "@/db/seed/builds";
 import { AppError } from "@/lib/api/errors";
 import { MEASUREMENT_HEADER_WITH_BACKGROUND } from "@/lib/release/measurements";

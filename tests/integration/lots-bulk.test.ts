@@ -1,9 +1,8 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { like, sql } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "./support/db";
-import { ImportCancelled, type ImportProgress } from "@/db/lots";
 import { productionLots } from "@/db/schema";
-import { importLotsCsv } from "@/lib/use-cases/lots/import";
+import { ImportCancelled, importLotsCsv, type ImportProgress } from "@/lib/use-cases/lots/import";
 
 afterAll(closeDb);
 

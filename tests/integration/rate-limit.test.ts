@@ -2,7 +2,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { closeDb, demoActor, getDb } from "./support/db";
 import { callRoute, tokenFor } from "./support/http";
 import { addRateLimitCounts } from "@/db/rate-limit";
-import { createUser } from "@/db/users";
+import { createUser } from "@/lib/use-cases/admin/users";
 
 // A small budget for this file only (env is parsed once per module graph). Below 100 a
 // minute every request is counted in PostgreSQL at once, so the limit is exact here.

@@ -2,10 +2,13 @@ import { afterAll, describe, expect, it } from "vitest";
 import { and, eq, sql } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "./support/db";
 import { auditEvents, boardModels, coolerModels, profileVersions } from "@/db/schema";
-import { createProfile, getProfileDetail, saveDraft } from "@/db/profiles";
+import { getProfileDetail } from "@/db/profiles";
+import { createProfile } from "@/lib/use-cases/profiles/create";
+import { saveDraft } from "@/lib/use-cases/profiles/save-draft";
 import { listVersionsForBoardModel } from "@/db/profile-versions";
 import { publishProfileVersion as publishVersion } from "@/lib/use-cases/profiles/publish";
-import { createComponent, listComponents } from "@/db/components";
+import { listComponents } from "@/db/components";
+import { createComponent } from "@/lib/use-cases/registry/save-component";
 import { AppError } from "@/lib/api/errors";
 import { bankBytes, crc32, decodeBank, encodeBank, type CoolingProfile } from "@/lib/engine";
 import { compatibilityCells } from "@/lib/registry/version-image";
@@ -129,5 +132,19 @@ describe("components", () => {
     const rpms = pumps.items.map((i) => i.maxRpm);
     expect(rpms).toEqual([...rpms].sort((a, b) => b - a));
     await expect(createComponent(db, admin, { ...c, name })).rejects.toThrow();
+  });
+
+  it("stores a fan's zero-duty behaviour and measured sound table; the database refuses a malformed table; old rows keep their minimum speed", async () => {
+    const db = getDb();
+    const admin = await demoActor("admin@tarnwell.example");
+    const base = { kind: "fan" as const, minDutyPct: 20, rpmAtMinDuty: 500, maxRpm: 1800, tachPulsesPerRev: 2, refSoundDbA: 30, refRpm: 1800, soundExponent: 50, flowAtMaxRpmLpm: null };
+    const soundTable = { distanceM: 1, points: [{ rpm: 500, soundDbA: 14 }, { rpm: 1800, soundDbA: 30 }] };
+    const c = await createComponent(db, admin, { ...base, name: `Table fan ${Date.now()}`, soundTable, stopsAtZeroDuty: true });
+    expect(c.soundTable).toEqual(soundTable);
+    expect(c.stopsAtZeroDuty).toBe(true);
+    const plain = await createComponent(db, admin, { ...base, name: `Plain fan ${Date.now()}` });
+    expect(plain.stopsAtZeroDuty).toBe(false);
+    expect(plain.soundTable).toBeNull();
+    await expect(createComponent(db, admin, { ...base, name: `Bad table ${Date.now()}`, soundTable: { distanceM: 1, points: [{ rpm: 500, soundDbA: 14 }] } })).rejects.toThrow();
   });
 });

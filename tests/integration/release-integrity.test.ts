@@ -7,8 +7,9 @@ import { closeDb, demoActor, getDb } from "./support/db";
 import { callRoute, tokenFor } from "./support/http";
 import { freshDraftBuild, mover } from "./support/builds";
 import { auditEvents, buildReviews, builds, coolerModels, uploads } from "@/db/schema";
-import { createUser, updateUser } from "@/db/users";
-import { createProfile, getProfileDetail } from "@/db/profiles";
+import { createUser, updateUser } from "@/lib/use-cases/admin/users";
+import { getProfileDetail } from "@/db/profiles";
+import { createProfile } from "@/lib/use-cases/profiles/create";
 import { moveBuild } from "@/lib/use-cases/builds/stages";
 import { buildDetail } from "@/lib/use-cases/builds/detail";
 import { POST as postReview } from "@/app/api/v1/builds/[id]/reviews/route";
@@ -151,16 +152,21 @@ describe("publish checks every board revision the range admits", () => {
     return { ...doc, pump: { ...doc.pump, points: pts(60) }, fans: { ...doc.fans, points: pts(40) } };
   }
 
-  it("refuses a 7-point curve for >=1.0.0, naming revision 1.0.0 (6 points) and the narrowest range that fits", async () => {
-    const { profile, doc } = await ownProfile();
-    const res = await callRoute(postVersion, {
-      url: `/api/v1/profiles/${profile.id}/versions`,
+  /** Publishes version 1.0.0 of the engineer's own profile through the route. */
+  function publishOwn(profileId: string, body: { changelog: string; boardRange: string; text: string }) {
+    return callRoute(postVersion, {
+      url: `/api/v1/profiles/${profileId}/versions`,
       method: "POST",
       token: engineerToken,
-      params: { id: profile.id },
+      params: { id: profileId },
       headers,
-      body: json({ version: "1.0.0", changelog: "Seven points.", boardRange: ">=1.0.0", text: documentText(withPoints(doc, 7)) }),
+      body: json({ version: "1.0.0", ...body }),
     });
+  }
+
+  it("refuses a 7-point curve for >=1.0.0, naming revision 1.0.0 (6 points) and the narrowest range that fits", async () => {
+    const { profile, doc } = await ownProfile();
+    const res = await publishOwn(profile.id, { changelog: "Seven points.", boardRange: ">=1.0.0", text: documentText(withPoints(doc, 7)) });
     expect(res.status).toBe(422);
     const body = (await res.json()) as ErrorJson;
     // TC-1 revision 1.0.0 stores 6 points per curve (the demo board's seeded limits).
@@ -173,14 +179,7 @@ describe("publish checks every board revision the range admits", () => {
 
   it("refuses a 16-point curve whose range reaches the 96-byte sample revision, naming each revision that cannot hold it", async () => {
     const { profile, doc } = await ownProfile();
-    const res = await callRoute(postVersion, {
-      url: `/api/v1/profiles/${profile.id}/versions`,
-      method: "POST",
-      token: engineerToken,
-      params: { id: profile.id },
-      headers,
-      body: json({ version: "1.0.0", changelog: "Sixteen points.", boardRange: ">=0.9.0", text: documentText(withPoints(doc, 16)) }),
-    });
+    const res = await publishOwn(profile.id, { changelog: "Sixteen points.", boardRange: ">=0.9.0", text: documentText(withPoints(doc, 16)) });
     expect(res.status).toBe(422);
     const message = ((await res.json()) as ErrorJson).error.message;
     // 8 + (15 + 8 + 2·32) + 4 = 99 bytes by docs/bank-format.md, against the sample's 96-byte EEPROM.

@@ -1,8 +1,10 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { randomBytes } from "node:crypto";
 import { closeDb, demoActor, getDb } from "./support/db";
-import { createBoardModel, createBoardRevision, listBoardModels, listRevisionsOfModel } from "@/db/boards";
-import { lotOptions } from "@/db/lots";
+import { listBoardModels, listRevisionsOfModel } from "@/db/boards";
+import { createBoardModel } from "@/lib/use-cases/registry/save-board-model";
+import { createBoardRevision } from "@/lib/use-cases/registry/save-board-revision";
+import { lotFormOptions } from "@/lib/use-cases/lots/read";
 
 afterAll(async () => {
   await closeDb();
@@ -22,6 +24,6 @@ describe("board revisions are listed in semantic-version order everywhere", () =
 
     expect((await listRevisionsOfModel(db, { boardModelId: model.id })).map((r) => r.revision)).toEqual(["2.0.0", "9.1.0", "10.0.0"]);
     expect((await listBoardModels(db)).find((m) => m.id === model.id)?.revisions.map((r) => r.revision)).toEqual(["2.0.0", "9.1.0", "10.0.0"]);
-    expect((await lotOptions(db)).find((m) => m.id === model.id)?.revisions).toEqual(["2.0.0", "9.1.0", "10.0.0"]);
+    expect((await lotFormOptions(db)).boardModels.find((m) => m.id === model.id)?.revisions).toEqual(["2.0.0", "9.1.0", "10.0.0"]);
   });
 });

@@ -3,7 +3,7 @@ import { eq, like } from "drizzle-orm";
 import { closeDb, getDb } from "./support/db";
 import { chunksOf, demoMovers, freshDraftBuild } from "./support/builds";
 import { builds, mailOutbox } from "@/db/schema";
-import { attachEvidence } from "@/db/build-stages";
+import { attachEvidence } from "@/lib/use-cases/builds/evidence";
 import { tinyPdf } from "@/db/seed/builds";
 import { moveBuild, reviewBuild } from "@/lib/use-cases/builds/stages";
 import { acceptUpload } from "@/lib/use-cases/builds/uploads";
@@ -55,7 +55,7 @@ describe("stage mail", () => {
     // No measurements yet: the pilot gate needs a waiver to stand in for the sound comparison's CSV.
     const csv = Buffer.from("liquid_temp_c,pump_rpm,fan_rpm,sound_dba\n40,1800,1000,30\n");
     await acceptUpload(who, { kind: "measurements", name: "m.csv", body: chunksOf(csv), attach: (tx, u) => attachEvidence(tx, who, { buildId: b.id, kind: "measurements", uploadId: u.id }) });
-    const { recordWaiver } = await import("@/db/build-stages");
+    const { recordWaiver } = await import("@/lib/use-cases/builds/waiver");
     await recordWaiver(getDb(), m.release, { buildId: b.id, reason: "Mail test: the sound comparison is not what is under test." });
     await moveBuild(m.release, { id: b.id, from: "validation", to: "pilot" });
     await moveBuild(m.release, { id: b.id, from: "pilot", to: "production", releaseNotes: "First factory run." });

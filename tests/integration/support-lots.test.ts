@@ -1,7 +1,8 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { and, eq, sql } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "./support/db";
-import { createLot, importLots } from "@/db/lots";
+import { createLot } from "@/lib/use-cases/lots/create";
+import { importLots } from "@/lib/use-cases/lots/import";
 import { findLookupBySerial } from "@/db/lookup";
 import { boardModels, builds, productionLots } from "@/db/schema";
 import { parseLotsCsv } from "@/lib/lots/csv";
@@ -56,7 +57,7 @@ describe("production lots", () => {
     const db = getDb();
     const release = await demoActor("release@tarnwell.example");
     const from = 92_000_000 + stamp * 10;
-    const lot = await createLot(db, release, { lotCode: `G-${stamp}`, boardRevision: "1.1.0", buildVersion: "3.1.0", serialFrom: `TC1-${from}`, serialTo: `TC1-${from + 9}`, producedOn: "2025-04-01", line: "Line C" });
+    const { lot } = await createLot(db, release, { lotCode: `G-${stamp}`, boardRevision: "1.1.0", buildVersion: "3.1.0", serialFrom: `TC1-${from}`, serialTo: `TC1-${from + 9}`, producedOn: "2025-04-01", line: "Line C" });
     const audit = await db.execute(sql`select action from audit_events where entity_id = ${lot.id}`);
     expect(audit.rows).toEqual([{ action: "lot.create" }]);
   });

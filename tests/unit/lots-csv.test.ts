@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { parseLotsCsv, splitCsv } from "@/lib/lots/csv";
+import { splitCsv } from "@/lib/csv/read";
+import { parseLotsCsv } from "@/lib/lots/csv";
 
 // CSV quoting rules: RFC 4180 §2 (fields with commas, quotes and line breaks are
 // double-quoted; a quote inside is doubled).

@@ -2,7 +2,7 @@
 
 import dynamic from "next/dynamic";
 import { useMemo } from "react";
-import { operatingPoint, type CoolingProfile, type HardwareContext } from "@/lib/engine";
+import { listenerDistanceProblem, operatingPoint, type CoolingProfile, type HardwareContext } from "@/lib/engine";
 import { safeLoadSweep } from "@/lib/registry/editor-evaluation";
 import { Field, Input } from "@/components/ui/field";
 
@@ -10,45 +10,56 @@ const SweepChart = dynamic(() => import("../charts/sweep-chart"), { ssr: false, 
 
 const fmt = (n: number, digits = 1) => n.toFixed(digits);
 
-/** The heat load and ambient the operating point is taken at, as typed. */
+/** The heat load, ambient and listener distance the operating point is taken at, as typed. */
 export interface OperatingInputs {
   heatLoadW: string;
   ambientC: string;
+  distanceM: string;
 }
 
-/** The typed inputs as numbers, or the error to show beside each. */
-export function parseOperatingInputs({ heatLoadW, ambientC }: OperatingInputs) {
+/**
+ * The typed inputs as numbers, or the error to show beside each. The listener distance is
+ * judged by the engine's own rule (listenerDistanceProblem: refused inside the cooler's
+ * near field), so the input and the computation cannot disagree.
+ */
+export function parseOperatingInputs({ heatLoadW, ambientC, distanceM }: OperatingInputs, hw: Pick<HardwareContext, "radiator"> | null) {
   const load = Number(heatLoadW);
   const ambient = Number(ambientC);
+  const distance = distanceM.trim() === "" ? Number.NaN : Number(distanceM);
   const loadError = heatLoadW.trim() === "" || !Number.isFinite(load) || load < 0 || load > 2000 ? "Enter a heat load from 0 to 2,000 W." : undefined;
   const ambientError = ambientC.trim() === "" || !Number.isFinite(ambient) || ambient < -20 || ambient > 60 ? "Enter an ambient from −20 to 60 °C." : undefined;
-  return { load, ambient, loadError, ambientError };
+  const distanceError = hw ? (listenerDistanceProblem(hw, distance) ?? undefined) : undefined;
+  return { load, ambient, distance, loadError, ambientError, distanceError };
 }
 
 /** Heat load and ambient in; settled liquid temperature, speeds and noise out (operatingPoint), and a load sweep. */
 export function OperatingPanel({ profile, hw, inputs, onInputs }: { profile: CoolingProfile; hw: HardwareContext; inputs: OperatingInputs; onInputs: (next: OperatingInputs) => void }) {
-  const { heatLoadW, ambientC } = inputs;
-  const { load, ambient, loadError, ambientError } = parseOperatingInputs(inputs);
+  const { heatLoadW, ambientC, distanceM } = inputs;
+  const { load, ambient, distance, loadError, ambientError, distanceError } = parseOperatingInputs(inputs, hw);
   const point = useMemo(() => {
     if (loadError || ambientError) return null;
     try {
-      return operatingPoint(profile, hw, { heatLoadW: load, ambientC: ambient });
+      // A refused distance leaves the rest of the operating point standing; only the level at that distance is not shown.
+      return operatingPoint(profile, hw, { heatLoadW: load, ambientC: ambient, ...(distanceError ? {} : { distanceM: distance }) });
     } catch {
       return null;
     }
-  }, [profile, hw, load, ambient, loadError, ambientError]);
+  }, [profile, hw, load, ambient, distance, loadError, ambientError, distanceError]);
   const sweep = useMemo(
     () => (ambientError ? [] : safeLoadSweep(profile, hw, ambient).map((p) => ({ heatLoadW: p.heatLoadW, liquidTempC: Math.round(p.liquidTempC * 10) / 10, soundDbA: Math.round(p.noise.totalDbA1m * 10) / 10 }))),
     [profile, hw, ambient, ambientError],
   );
   return (
     <div className="space-y-3">
-      <div className="grid grid-cols-2 gap-3">
+      <div className="grid grid-cols-3 gap-3">
         <Field id="op-load" label="Heat load (W)" error={loadError}>
           <Input id="op-load" type="number" inputMode="decimal" value={heatLoadW} onChange={(e) => onInputs({ ...inputs, heatLoadW: e.target.value })} aria-invalid={loadError ? true : undefined} />
         </Field>
         <Field id="op-ambient" label="Ambient (°C)" error={ambientError}>
           <Input id="op-ambient" type="number" inputMode="decimal" value={ambientC} onChange={(e) => onInputs({ ...inputs, ambientC: e.target.value })} aria-invalid={ambientError ? true : undefined} />
+        </Field>
+        <Field id="op-distance" label="Listener distance (m)" error={distanceError}>
+          <Input id="op-distance" type="number" inputMode="decimal" step="any" value={distanceM} onChange={(e) => onInputs({ ...inputs, distanceM: e.target.value })} aria-invalid={distanceError ? true : undefined} aria-describedby={distanceError ? "op-distance-error" : undefined} />
         </Field>
       </div>
       {point && (
@@ -57,6 +68,9 @@ export function OperatingPanel({ profile, hw, inputs, onInputs }: { profile: Coo
           <div><dt className="text-ink-600">Pump</dt><dd className="tabular-nums">{Math.round(point.pump.rpm)} RPM · {fmt(point.pump.dutyPct)} %</dd></div>
           <div><dt className="text-ink-600">Fans</dt><dd className="tabular-nums">{point.fans.stopped ? "stopped" : `${Math.round(point.fans.rpm)} RPM · ${fmt(point.fans.dutyPct)} %`}</dd></div>
           <div><dt className="text-ink-600">Sound at 1 m</dt><dd className="tabular-nums">{fmt(point.noise.totalDbA1m)} dB(A)</dd></div>
+          {!distanceError && point.noise.distanceM !== 1 && (
+            <div><dt className="text-ink-600">Sound at {point.noise.distanceM} m</dt><dd className="tabular-nums">{fmt(point.noise.totalDbAAtDistance)} dB(A)</dd></div>
+          )}
           <div><dt className="text-ink-600">Coolant rise</dt><dd className="tabular-nums">{fmt(point.coolantRiseK, 2)} K</dd></div>
           <div><dt className="text-ink-600">Below critical?</dt><dd>{point.holdsBelowCritical ? "yes" : "no — the curve cannot hold this load"}</dd></div>
         </dl>

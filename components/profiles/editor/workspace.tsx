@@ -95,15 +95,16 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
   }, [text]);
   const getText = useCallback(() => editor.current?.getText() ?? latestText.current, []);
   const editing = useCurveEditing(editor, evaluation?.profile, hw, canWrite);
-  const [operatingInputs, setOperatingInputs] = useState<OperatingInputs>({ heatLoadW: "200", ambientC: "25" });
+  const [operatingInputs, setOperatingInputs] = useState<OperatingInputs>({ heatLoadW: "200", ambientC: "25", distanceM: "1" });
   // The operating point follows every drag step (one bisection, well under a millisecond).
   const operating = useMemo(() => {
     const profileNow = evaluation?.profile;
-    const { load, ambient, loadError, ambientError } = parseOperatingInputs(operatingInputs);
+    const { load, ambient, distance, loadError, ambientError, distanceError } = parseOperatingInputs(operatingInputs, hw);
     if (!profileNow || !hw || loadError || ambientError) return null;
     try {
-      const p = operatingPoint(profileNow, hw, { heatLoadW: load, ambientC: ambient });
-      return { liquidTempC: p.liquidTempC, fanRpm: p.fans.rpm, soundDbA: p.noise.totalDbA1m, heatLoadW: load, ambientC: ambient };
+      const p = operatingPoint(profileNow, hw, { heatLoadW: load, ambientC: ambient, ...(distanceError ? {} : { distanceM: distance }) });
+      const atListener = distanceError || p.noise.distanceM === 1 ? null : { distanceM: p.noise.distanceM, soundDbA: p.noise.totalDbAAtDistance };
+      return { liquidTempC: p.liquidTempC, fanRpm: p.fans.rpm, soundDbA: p.noise.totalDbA1m, atListener, heatLoadW: load, ambientC: ambient };
     } catch {
       return null;
     }
@@ -233,7 +234,7 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
               {editing && " Drag a point or use the arrow keys (Shift: 5 steps); Delete removes it; double-click the plot to add one. Every change is written into the JSON and undone with Ctrl+Z in the editor."}
             </p>
             <p role="status" className="mt-1 text-sm" data-testid="operating-readout">
-              {operating && `At ${operating.heatLoadW} W and ${operating.ambientC} °C ambient the liquid settles at ${operating.liquidTempC.toFixed(1)} °C; about ${operating.soundDbA.toFixed(1)} dB(A) at 1 m (estimate).`}
+              {operating && `At ${operating.heatLoadW} W and ${operating.ambientC} °C ambient the liquid settles at ${operating.liquidTempC.toFixed(1)} °C; about ${operating.soundDbA.toFixed(1)} dB(A) at 1 m${operating.atListener ? `, ${operating.atListener.soundDbA.toFixed(1)} dB(A) at ${operating.atListener.distanceM} m` : ""} (estimate).`}
             </p>
             <p role="status" className="mt-1 text-sm font-medium text-signal-fault" data-testid="edit-notice">
               {editing?.notice?.text}

@@ -102,7 +102,7 @@ export const profileDetailView = z.object({
     /** Send it back as baseRevision when saving the draft. */
     draftRevision: z.number(),
   }),
-  cooler: z.object({ id: z.string(), name: z.string(), fanCount: z.number(), radiatorKPerWAtMinFan: z.number(), radiatorKPerWAtMaxFan: z.number(), boardModelName: z.string() }),
+  cooler: z.object({ id: z.string(), name: z.string(), radiatorMm: z.number(), fanCount: z.number(), radiatorKPerWAtMinFan: z.number(), radiatorKPerWAtMaxFan: z.number(), boardModelName: z.string() }),
   fan: componentFields,
   pump: componentFields,
   revisions: z.array(revisionFieldsView.extend({ id: z.string() })),

@@ -8,6 +8,26 @@ import type { ComponentFields, CoolerFields, RevisionFields } from "@/lib/regist
 const num = (label: string) => z.number(`Enter ${label} as a number.`);
 const name = z.string().trim().min(1, "Enter a name.").max(120, "Use at most 120 characters.");
 
+/**
+ * A measured sound table: levels of one unit at rising speeds, at one distance
+ * (the same limits as schemas/hardware-context.schema.json).
+ */
+export const soundTableBody = z
+  .strictObject({
+    distanceM: num("the measurement distance").min(0.1, "At least 0.1 m.").max(10, "At most 10 m."),
+    points: z
+      .array(
+        z.strictObject({
+          rpm: num("the RPM").gt(0, "Above 0 RPM.").max(20000, "At most 20,000 RPM."),
+          soundDbA: num("the level").min(0, "At least 0 dB(A).").max(120, "At most 120 dB(A)."),
+        }),
+        "Enter the measured points.",
+      )
+      .min(2, "Give at least 2 measured points (RPM and dB(A)).")
+      .max(64, "Give at most 64 measured points."),
+  })
+  .refine((t) => t.points.every((p, i) => i === 0 || p.rpm > t.points[i - 1]!.rpm), { path: ["points"], message: "List the measurements by rising RPM, one per speed." });
+
 export const componentBody = z
   .strictObject({
     kind: z.enum(["fan", "pump"], "Pick fan or pump."),
@@ -19,6 +39,10 @@ export const componentBody = z
     refSoundDbA: num("the reference sound level").min(0, "At least 0 dB(A).").max(90, "At most 90 dB(A)."),
     refRpm: num("the reference RPM").int("Whole RPM.").min(1, "At least 1 RPM.").max(20000, "At most 20,000 RPM."),
     soundExponent: num("the sound exponent").min(10, "At least 10.").max(100, "At most 100."),
+    /** Measured levels over speed; preferred over the reference level and exponent. Left out or null: none. */
+    soundTable: soundTableBody.nullable().optional(),
+    /** True: the motor stops at 0 % duty; false or left out: it keeps its minimum speed below the minimum duty. */
+    stopsAtZeroDuty: z.boolean("Say whether the motor stops at 0 % duty.").optional(),
     flowAtMaxRpmLpm: num("the flow").gt(0, "Above 0 L/min.").max(50, "At most 50 L/min.").nullable(),
   })
   .refine((c) => c.maxRpm > c.rpmAtMinDuty, { path: ["maxRpm"], message: "The maximum RPM must be above the RPM at minimum duty." })
@@ -36,6 +60,8 @@ export const componentFieldsView = z.object({
   refSoundDbA: z.number(),
   refRpm: z.number(),
   soundExponent: z.number(),
+  soundTable: z.object({ distanceM: z.number(), points: z.array(z.object({ rpm: z.number(), soundDbA: z.number() })) }).nullable(),
+  stopsAtZeroDuty: z.boolean(),
   flowAtMaxRpmLpm: z.number().nullable(),
 }) satisfies z.ZodType<ComponentFields>;
 
@@ -138,5 +164,5 @@ export const listQuery = <S extends readonly [string, ...string[]]>(sorts: S) =>
 export const pageOf = <T extends z.ZodType>(item: T) => z.object({ items: z.array(item), total: z.number(), page: z.number(), pageSize: z.number() });
 
 
-export const coolerFieldsView = z.object({ name: z.string(), fanCount: z.number(), radiatorKPerWAtMinFan: z.number(), radiatorKPerWAtMaxFan: z.number() }) satisfies z.ZodType<CoolerFields>;
+export const coolerFieldsView = z.object({ name: z.string(), radiatorMm: z.number(), fanCount: z.number(), radiatorKPerWAtMinFan: z.number(), radiatorKPerWAtMaxFan: z.number() }) satisfies z.ZodType<CoolerFields>;
 

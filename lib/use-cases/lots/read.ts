@@ -1,8 +1,10 @@
 import "server-only";
 import type { z } from "zod";
 import type { Executor } from "@/db/client";
-import { listLots, lotOptions } from "@/db/lots";
+import { listBoardModels } from "@/db/boards";
+import { listBuildsAtStages, listLots } from "@/db/lots";
 import type { lotsQuery } from "@/lib/api/operations/support";
+import { LOT_STAGES } from "@/lib/release/stages";
 import { toLotView } from "./lot-view";
 
 /** One page of production lots; one row more is read to know whether another page follows. Read by the API and the lots page. */
@@ -19,7 +21,19 @@ export async function lotsPage(db: Executor, query: z.output<typeof lotsQuery>) 
   return { items: rows.slice(0, query.pageSize).map(toLotView), page: query.page, pageSize: query.pageSize, hasMore: rows.length > query.pageSize };
 }
 
-/** What the lot forms offer: board models with their revisions and their pilot or production builds. */
+/**
+ * What the lot forms offer: every board model (the one board-model list, revisions in semver
+ * order) with the builds a lot may name, and withdrawn ones so filters still find their lots.
+ */
 export async function lotFormOptions(db: Executor) {
-  return { boardModels: await lotOptions(db) };
+  const [models, builds] = await Promise.all([listBoardModels(db), listBuildsAtStages(db, { stages: [...LOT_STAGES, "withdrawn"] })]);
+  return {
+    boardModels: models.map((m) => ({
+      id: m.id,
+      name: m.name,
+      serialPrefix: m.serialPrefix,
+      revisions: m.revisions.map((r) => r.revision),
+      builds: builds.filter((b) => b.boardModelId === m.id).map(({ boardModelId: _m, ...b }) => b),
+    })),
+  };
 }

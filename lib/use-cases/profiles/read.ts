@@ -1,7 +1,7 @@
 import "server-only";
 import type { z } from "zod";
 import type { Executor } from "@/db/client";
-import { getProfileDetail, listProfiles } from "@/db/profiles";
+import { getProfileDetail, getProfileRow, listProfiles, listVersionsOfProfile } from "@/db/profiles";
 import { AppError } from "@/lib/api/errors";
 import type { profilesQuery } from "@/lib/api/operations/profiles";
 
@@ -16,4 +16,10 @@ export async function profileDetail(db: Executor, { id }: { id: string }) {
   const detail = await getProfileDetail(db, { id });
   if (!detail) throw new AppError("not_found", "No such profile.");
   return detail;
+}
+
+/** A profile's published versions, newest first; 404 when there is no such profile. */
+export async function profileVersions(db: Executor, { profileId }: { profileId: string }) {
+  if (!(await getProfileRow(db, { id: profileId }))) throw new AppError("not_found", "No such profile.");
+  return { items: await listVersionsOfProfile(db, { profileId }) };
 }

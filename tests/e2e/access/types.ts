@@ -1,5 +1,7 @@
-export const ROLES = ["admin", "engineer", "release_manager", "support", "viewer"] as const;
-export type RoleName = (typeof ROLES)[number];
+import type { Role } from "@/lib/auth/roles";
+
+export { ROLES } from "@/lib/auth/roles";
+export type RoleName = Role;
 
 /**
  * One row of the role matrix: a page or an API operation, a concrete URL to call and the

@@ -1,18 +1,17 @@
 import { expect, type Locator } from "@playwright/test";
+import { STAGE_ORDER, type Stage } from "@/lib/release/stages";
 import { Screen } from "./screen";
-
-const STAGES = ["draft", "review", "validation", "pilot", "production", "withdrawn"] as const;
 
 /** /builds: the pipeline, one column per stage. */
 export class BuildsPipeline extends Screen {
-  static readonly stages = STAGES;
+  static readonly stages = STAGE_ORDER;
 
   async goto(): Promise<this> {
     await this.page.goto("/builds");
     return this;
   }
 
-  column(stage: (typeof STAGES)[number]): Locator {
+  column(stage: Stage): Locator {
     return this.page.getByTestId(`pipeline-${stage}`);
   }
 
@@ -38,6 +37,11 @@ export class NewBuildForm extends Screen {
     await this.page.getByLabel("Board revisions").fill(revisions);
   }
 
+  /** The option of slot `n` whose text contains `text`, once the list is filled for the chosen board. */
+  slotOption(n: number, text: string): Locator {
+    return this.slot(n).locator("option", { hasText: text }).first();
+  }
+
   slot(n: number): Locator {
     return this.page.getByLabel(`Slot ${n}`, { exact: true });
   }
@@ -45,7 +49,7 @@ export class NewBuildForm extends Screen {
   /** Picks the first profile version whose option text contains `text` (the list is filled once the board is chosen). */
   async pickSlot(n: number, text: string): Promise<void> {
     const select = this.slot(n);
-    const option = select.locator("option", { hasText: text }).first();
+    const option = this.slotOption(n, text);
     await expect(option).toBeAttached();
     const value = await option.getAttribute("value");
     expect(value, `a profile version for slot ${n} containing "${text}"`).toBeTruthy();
@@ -81,6 +85,50 @@ export class BuildDetail extends Screen {
 
   get reviews(): Locator {
     return this.page.getByRole("list", { name: "Reviews" });
+  }
+
+  /** Reviews listed as counting toward the approvals. */
+  get countingReviews(): Locator {
+    return this.reviews.getByText("Counts toward the approvals.");
+  }
+
+  /** Why this person may not review the build, shown instead of the review form. */
+  get reviewRefusal(): Locator {
+    return this.page.getByTestId("review-refusal");
+  }
+
+  /** The caution shown beside the estimated figures. */
+  get estimateCaution(): Locator {
+    return this.page.getByText("Estimates, not measurements");
+  }
+
+  /** The next stage's checklist ("lab validation", "pilot run", …). */
+  checklist(stage: string): Locator {
+    return this.page.getByRole("list", { name: `Checklist for ${stage}` });
+  }
+
+  /** One requirement of a checklist; its data-state says "met" or "unmet". */
+  requirement(stage: string, text: string): Locator {
+    return this.checklist(stage).getByRole("listitem").filter({ hasText: text });
+  }
+
+  /** The alert a withdrawn build shows with its reason. */
+  get withdrawnNotice(): Locator {
+    return this.alert("This build was withdrawn");
+  }
+
+  /** The factory release confirmation for the build called `title`. */
+  releaseDialog(title: string): Locator {
+    return this.dialog(`Release build ${title} to the factory?`);
+  }
+
+  /** The withdraw confirmation for the build called `title`. */
+  withdrawDialog(title: string): Locator {
+    return this.dialog(`Withdraw build ${title}?`);
+  }
+
+  get withdrawReason(): Locator {
+    return this.page.getByLabel("Reason for withdrawing");
   }
 
   async expectStage(label: string): Promise<void> {

@@ -53,6 +53,15 @@ export class ProfileEditor extends Screen {
     return this.page.getByTestId("save-state");
   }
 
+  /** The operating point's listener distance input. */
+  get listenerDistance(): Locator {
+    return this.page.getByLabel("Listener distance (m)");
+  }
+
+  get operatingReadout(): Locator {
+    return this.page.getByTestId("operating-readout");
+  }
+
   get coolerPicker(): Locator {
     return this.page.getByLabel("Evaluate on cooler");
   }

@@ -37,6 +37,29 @@ export class ComponentsList extends Screen {
   get table(): Locator {
     return this.page.getByRole("table", { name: "Components" });
   }
+
+  row(name: string): Locator {
+    return this.table.getByRole("row", { name: new RegExp(name) });
+  }
+
+  /** The "Add a fan or pump" form. */
+  get addForm(): Locator {
+    return this.page.locator("form").filter({ has: this.page.getByRole("button", { name: "Add component" }) });
+  }
+
+  /** Fills the add form; `soundTable` is the text typed into the measured sound table, one "RPM dB(A)" per line. */
+  async fillComponent(c: { name: string; kind: "fan" | "pump"; minDutyPct: number; rpmAtMinDuty: number; maxRpm: number; refSoundDbA: number; refRpm: number; soundTable?: string; stopsAtZeroDuty?: boolean }): Promise<void> {
+    const f = this.addForm;
+    await f.getByLabel("Name").fill(c.name);
+    await f.getByLabel("Kind").selectOption(c.kind);
+    await f.getByLabel("Minimum duty (%)").fill(String(c.minDutyPct));
+    await f.getByLabel("RPM at minimum duty").fill(String(c.rpmAtMinDuty));
+    await f.getByLabel("Maximum RPM").fill(String(c.maxRpm));
+    await f.getByLabel("Reference sound level, dB(A) at 1 m").fill(String(c.refSoundDbA));
+    await f.getByLabel("Reference RPM").fill(String(c.refRpm));
+    await f.getByLabel("Measured sound table (optional)").fill(c.soundTable ?? "");
+    await f.getByLabel(/Stops at 0 % duty/).setChecked(c.stopsAtZeroDuty ?? false);
+  }
 }
 
 /** /boards: board models with their revisions. */

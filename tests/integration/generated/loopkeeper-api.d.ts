@@ -1830,6 +1830,14 @@ export interface operations {
                             refSoundDbA: number;
                             refRpm: number;
                             soundExponent: number;
+                            soundTable: {
+                                distanceM: number;
+                                points: {
+                                    rpm: number;
+                                    soundDbA: number;
+                                }[];
+                            } | null;
+                            stopsAtZeroDuty: boolean;
                             flowAtMaxRpmLpm: number | null;
                             id: string;
                             /** Format: date-time */
@@ -1883,6 +1891,14 @@ export interface operations {
                     refSoundDbA: number;
                     refRpm: number;
                     soundExponent: number;
+                    soundTable?: {
+                        distanceM: number;
+                        points: {
+                            rpm: number;
+                            soundDbA: number;
+                        }[];
+                    } | null;
+                    stopsAtZeroDuty?: boolean;
                     flowAtMaxRpmLpm: number | null;
                 };
             };
@@ -1906,6 +1922,14 @@ export interface operations {
                             refSoundDbA: number;
                             refRpm: number;
                             soundExponent: number;
+                            soundTable: {
+                                distanceM: number;
+                                points: {
+                                    rpm: number;
+                                    soundDbA: number;
+                                }[];
+                            } | null;
+                            stopsAtZeroDuty: boolean;
                             flowAtMaxRpmLpm: number | null;
                             id: string;
                             /** Format: date-time */
@@ -1958,6 +1982,14 @@ export interface operations {
                     refSoundDbA: number;
                     refRpm: number;
                     soundExponent: number;
+                    soundTable?: {
+                        distanceM: number;
+                        points: {
+                            rpm: number;
+                            soundDbA: number;
+                        }[];
+                    } | null;
+                    stopsAtZeroDuty?: boolean;
                     flowAtMaxRpmLpm: number | null;
                 };
             };
@@ -1981,6 +2013,14 @@ export interface operations {
                             refSoundDbA: number;
                             refRpm: number;
                             soundExponent: number;
+                            soundTable: {
+                                distanceM: number;
+                                points: {
+                                    rpm: number;
+                                    soundDbA: number;
+                                }[];
+                            } | null;
+                            stopsAtZeroDuty: boolean;
                             flowAtMaxRpmLpm: number | null;
                             id: string;
                             /** Format: date-time */
@@ -2804,6 +2844,7 @@ export interface operations {
                         cooler: {
                             id: string;
                             name: string;
+                            radiatorMm: number;
                             fanCount: number;
                             radiatorKPerWAtMinFan: number;
                             radiatorKPerWAtMaxFan: number;
@@ -2820,6 +2861,14 @@ export interface operations {
                             refSoundDbA: number;
                             refRpm: number;
                             soundExponent: number;
+                            soundTable: {
+                                distanceM: number;
+                                points: {
+                                    rpm: number;
+                                    soundDbA: number;
+                                }[];
+                            } | null;
+                            stopsAtZeroDuty: boolean;
                             flowAtMaxRpmLpm: number | null;
                         };
                         pump: {
@@ -2833,6 +2882,14 @@ export interface operations {
                             refSoundDbA: number;
                             refRpm: number;
                             soundExponent: number;
+                            soundTable: {
+                                distanceM: number;
+                                points: {
+                                    rpm: number;
+                                    soundDbA: number;
+                                }[];
+                            } | null;
+                            stopsAtZeroDuty: boolean;
                             flowAtMaxRpmLpm: number | null;
                         };
                         revisions: {
@@ -4535,6 +4592,7 @@ export interface operations {
                             document: Record<string, never>;
                             cooler: {
                                 name: string;
+                                radiatorMm: number;
                                 fanCount: number;
                                 radiatorKPerWAtMinFan: number;
                                 radiatorKPerWAtMaxFan: number;
@@ -4550,6 +4608,14 @@ export interface operations {
                                 refSoundDbA: number;
                                 refRpm: number;
                                 soundExponent: number;
+                                soundTable: {
+                                    distanceM: number;
+                                    points: {
+                                        rpm: number;
+                                        soundDbA: number;
+                                    }[];
+                                } | null;
+                                stopsAtZeroDuty: boolean;
                                 flowAtMaxRpmLpm: number | null;
                             };
                             pump: {
@@ -4563,6 +4629,14 @@ export interface operations {
                                 refSoundDbA: number;
                                 refRpm: number;
                                 soundExponent: number;
+                                soundTable: {
+                                    distanceM: number;
+                                    points: {
+                                        rpm: number;
+                                        soundDbA: number;
+                                    }[];
+                                } | null;
+                                stopsAtZeroDuty: boolean;
                                 flowAtMaxRpmLpm: number | null;
                             };
                         }[];

@@ -11,7 +11,7 @@ import { and, eq, sql } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "../support/db";
 import { callRoute, tokenFor } from "../support/http";
 import { builds, productionLots, users } from "@/db/schema";
-import { updateUser } from "@/db/users";
+import { updateUser } from "@/lib/use-cases/admin/users";
 import * as meRoute from "@/app/api/v1/me/route";
 import * as tokensRoute from "@/app/api/v1/tokens/route";
 import * as tokenRoute from "@/app/api/v1/tokens/[id]/route";
@@ -19,7 +19,7 @@ import * as adminTokensRoute from "@/app/api/v1/admin/tokens/route";
 import * as adminTokenRoute from "@/app/api/v1/admin/tokens/[id]/route";
 import * as shippedRoute from "@/app/api/v1/support/withdrawn/[id]/shipped.csv/route";
 import { MAX_LIVE_TOKENS, MAX_TOKEN_DAYS } from "@/lib/api/operations/account";
-import { splitCsv } from "@/lib/lots/csv";
+import { splitCsv } from "@/lib/csv/read";
 
 process.env.LOOPKEEPER_LOG = "silent";
 process.env.API_RATE_LIMIT_PER_MIN = "100000";

@@ -2,9 +2,8 @@ import { randomUUID } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { boardModels, components, coolerModels, profiles, uploads } from "@/db/schema";
-import { createBuild } from "@/db/builds";
 import { demoProfileDocument, insertProfileVersion } from "@/db/seed/builds";
-import { checkSlots } from "@/lib/use-cases/builds/check";
+import { createBuild } from "@/lib/use-cases/builds/create";
 import { demoActor } from "./db";
 
 /** A build version no other test run is likely to have used; parts stay within the bank's 0–255. */
@@ -40,17 +39,8 @@ export async function freshDraftBuild(opts: { authorEmail?: string; revisionRang
   const versions = await freshProfileVersions(opts.profileAuthorEmail);
   const boardModelId = await demoBoardId();
   const revisionRange = opts.revisionRange ?? ">=1.0.0 <3.0.0";
-  const { check } = await checkSlots(db, { boardModelId, revisionRange, profileVersionIds: versions.map((v) => v.id) });
-  if (!check.ok) throw new Error(check.issues.join("; "));
   const [fw] = await db.insert(uploads).values({ kind: "firmware", storageKey: randomUUID(), originalName: "fw.bin", contentType: "application/octet-stream", sizeBytes: 1, sha256: "0".repeat(64), uploadedByUserId: author.userId }).returning();
-  const build = await createBuild(db, author, {
-    boardModelId,
-    version: uniqueVersion(),
-    revisionRange,
-    firmwareUploadId: fw!.id,
-    profileVersionIds: versions.map((v) => v.id),
-    bank: { image: check.image, bankBytes: check.bankBytes, sha256: check.sha256, crc32: check.crc32 },
-  });
+  const { build } = await createBuild(db, author, { boardModelId, version: uniqueVersion(), revisionRange, firmwareUploadId: fw!.id, slots: versions.map((v) => v.id) });
   return { ...build, authorUserId: author.userId, profileVersions: versions };
 }
 

@@ -1,7 +1,7 @@
 import { randomBytes } from "node:crypto";
 import { NextRequest } from "next/server";
 import { getDb } from "@/db/client";
-import { createToken } from "@/db/tokens";
+import { createToken } from "@/lib/use-cases/account/tokens";
 import { hashToken } from "@/lib/platform/auth/actor";
 import { demoActor, tokensToRevoke } from "./db";
 

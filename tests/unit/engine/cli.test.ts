@@ -135,6 +135,14 @@ describe("cli evaluate", { timeout: 60_000 }, () => {
     expect(j.operatingPoint.heatLoadW).toBe(200);
   });
 
+  it("a listener distance inside the cooler's near field is refused with the reason and the shortest distance", () => {
+    const r = cli("evaluate", perf, "--hardware", hw, "--distance", "0.2");
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain("--distance: 0.2 m is inside the cooler's near field (closer than about the radiator's largest dimension, 397 mm), where the estimate does not hold: use at least 0.397 m.");
+    noStack(r.stderr);
+    expect(cli("evaluate", perf, "--hardware", hw, "--distance", "0.4").code).toBe(0);
+  });
+
   it("a negative ambient is a value, not an option", () => {
     const r = cli("evaluate", perf, "--hardware", hw, "--ambient", "-10");
     expect(r.code).toBe(0);

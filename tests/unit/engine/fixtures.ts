@@ -32,7 +32,7 @@ const curvePoints = (minDutyPct: number): fc.Arbitrary<CurvePoint[]> =>
       return points;
     });
 
-/** Valid profiles on the stored 0.5 grid (pump duty ≥ 40 %, above the example pump's 30 % minimum). */
+/** Valid profiles on the stored 0.5 grid (pump duty ≥ 40 %, above the example pump's 30 % minimum; 0 % fan points only below the fan stop, as the example fan stops at 0 % duty). */
 export const validProfileArb: fc.Arbitrary<CoolingProfile> = fc
   .record({
     pump: curvePoints(40),
@@ -53,6 +53,9 @@ export const validProfileArb: fc.Arbitrary<CoolingProfile> = fc
       fans: { points: fans, hysteresisC: hyst, rampUpPctPerSec: up, rampDownPctPerSec: down },
     };
     if (fanStop !== undefined && fanStop < profile.criticalTempC) profile.fans.stopBelowTempC = fanStop;
+    // The example fan stops at 0 % duty: a 0 % point is valid only below the fan stop temperature.
+    const stopC = profile.fans.stopBelowTempC;
+    for (const p of profile.fans.points) if (p.dutyPct === 0 && (stopC === undefined || p.tempC >= stopC)) p.dutyPct = 0.5;
     return profile;
   });
 

@@ -24,15 +24,17 @@ describe("curve interpolation", () => {
 describe("duty → RPM", () => {
   const hw = exampleHardware();
   it("is linear from (min duty, RPM at min) to (100 %, max RPM)", () => {
-    // Intel 4-Wire PWM fan spec rev 1.3: 100 % duty is full speed (its PWM control input; from memory, section not checked); below minimum duty a fan of the "holds minimum speed" kind keeps its minimum speed (§3.4).
-    const { minDutyPct, rpmAtMinDuty, maxRpm } = hw.fan;
-    expect(dutyToRpm(100, hw.fan)).toBe(maxRpm);
-    expect(dutyToRpm(minDutyPct, hw.fan)).toBe(rpmAtMinDuty);
-    const mid = (minDutyPct + 100) / 2;
-    expect(dutyToRpm(mid, hw.fan)).toBeCloseTo((rpmAtMinDuty + maxRpm) / 2, 9);
-    expect(dutyToRpm(minDutyPct / 2, hw.fan)).toBe(rpmAtMinDuty);
-    expect(dutyToRpm(0, hw.fan)).toBe(rpmAtMinDuty);
-    expect(dutyToRpm(150, hw.fan)).toBe(maxRpm);
+    // Intel 4-Wire PWM fan spec rev 1.3: 100 % duty is full speed (its PWM control input; from memory, section not checked);
+    // below minimum duty the fan keeps its minimum speed, or — for a fan that stops at 0 % duty — stops at 0 % (§3.4).
+    // Example fan: 20 % → 500 RPM, 100 % → 2000 RPM. By hand: 60 % is halfway → 1250 RPM; 90 % → 500 + 1500 × 70/80 = 1812.5 RPM.
+    expect(dutyToRpm(100, hw.fan)).toBe(2000);
+    expect(dutyToRpm(20, hw.fan)).toBe(500);
+    expect(dutyToRpm(60, hw.fan)).toBeCloseTo(1250, 9);
+    expect(dutyToRpm(90, hw.fan)).toBeCloseTo(1812.5, 9);
+    expect(dutyToRpm(10, hw.fan)).toBe(500);
+    expect(dutyToRpm(0, hw.fan)).toBe(0); // the example fan stops at 0 % duty
+    expect(dutyToRpm(0, { ...hw.fan, stopsAtZeroDuty: false })).toBe(500);
+    expect(dutyToRpm(150, hw.fan)).toBe(2000);
     expect(dutyToRpm(Number.NaN, hw.fan)).toBeNaN();
   });
 

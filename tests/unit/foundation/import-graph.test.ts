@@ -79,6 +79,13 @@ describe("import graph", () => {
     expect(cycles).toEqual([]);
   });
 
+  it("db/ answers in storage terms: it never imports the API's error type (use cases decide what a refusal means to a person)", () => {
+    const apiErrors = path.join("lib", "api", "errors.ts");
+    const offenders = files.filter(isDb).filter((f) => (graph.get(f) ?? []).some((i) => i.file === apiErrors || /AppError/.test(i.spec)));
+    expect(files.filter(isDb).length).toBeGreaterThan(20);
+    expect(offenders).toEqual([]);
+  });
+
   it("lib/<domain> imports no React, Next or database code (lib/platform and lib/use-cases are the server side)", () => {
     const forbidden = /^(react|react-dom|next|next-auth|pg|drizzle-orm|@tanstack\/react-query)(\/|$)|^@\/(db|components|app)\/|^@\/lib\/(platform|use-cases)\//;
     const offenders: string[] = [];

@@ -9,9 +9,9 @@ const revisions = [
   { revision: "1.1.0", memoryBytes: 512, slotCount: 3, maxPointsPerCurve: 8, baseAddress: 0x0800f000, pwmFrequencyHz: 25000, tachPulsesPerRev: 2 },
   { revision: "2.0.0", memoryBytes: 2048, slotCount: 4, maxPointsPerCurve: 16, baseAddress: 0x0801f800, pwmFrequencyHz: 25000, tachPulsesPerRev: 2 },
 ];
-const cooler = { name: "Test 240", fanCount: 2, radiatorKPerWAtMinFan: 0.11, radiatorKPerWAtMaxFan: 0.045 };
-const fan = { kind: "fan" as const, name: "Test fan", minDutyPct: 20, rpmAtMinDuty: 450, maxRpm: 2000, tachPulsesPerRev: 2, refSoundDbA: 33, refRpm: 2000, soundExponent: 50, flowAtMaxRpmLpm: null };
-const pump = { kind: "pump" as const, name: "Test pump", minDutyPct: 40, rpmAtMinDuty: 1400, maxRpm: 2900, tachPulsesPerRev: 4, refSoundDbA: 24, refRpm: 2900, soundExponent: 50, flowAtMaxRpmLpm: 1.4 };
+const cooler = { name: "Test 240", radiatorMm: 240, fanCount: 2, radiatorKPerWAtMinFan: 0.11, radiatorKPerWAtMaxFan: 0.045 };
+const fan = { kind: "fan" as const, name: "Test fan", minDutyPct: 20, rpmAtMinDuty: 450, maxRpm: 2000, tachPulsesPerRev: 2, refSoundDbA: 33, refRpm: 2000, soundExponent: 50, soundTable: null, stopsAtZeroDuty: true, flowAtMaxRpmLpm: null };
+const pump = { kind: "pump" as const, name: "Test pump", minDutyPct: 40, rpmAtMinDuty: 1400, maxRpm: 2900, tachPulsesPerRev: 4, refSoundDbA: 24, refRpm: 2900, soundExponent: 50, soundTable: null, stopsAtZeroDuty: false, flowAtMaxRpmLpm: 1.4 };
 
 /** A valid profile whose fan curve has 7 points: more than revision 1.0.0 stores. */
 const sevenPoints: CoolingProfile = {

@@ -1,20 +1,9 @@
-import { randomBytes } from "node:crypto";
 import { apiRoute } from "@/lib/platform/http/api-route";
-import { createToken, listTokens, MAX_LIVE_TOKENS } from "@/lib/api/operations/account";
+import { createToken, listTokens } from "@/lib/api/operations/account";
 import { getDb } from "@/db/client";
-import * as tokens from "@/db/tokens";
-import { auditActor, hashToken } from "@/lib/platform/auth/actor";
+import { auditActor } from "@/lib/platform/auth/actor";
+import { issueToken, tokensOf } from "@/lib/use-cases/account/tokens";
 
-export const GET = apiRoute(listTokens, async ({ actor }) => ({ items: await tokens.listTokens(getDb(), { userId: actor.userId }) }));
+export const GET = apiRoute(listTokens, async ({ actor }) => tokensOf(getDb(), { userId: actor.userId }));
 
-export const POST = apiRoute(createToken, async ({ actor, body, requestId }) => {
-  const secret = `lk_${randomBytes(32).toString("base64url")}`;
-  const token = await tokens.createToken(getDb(), auditActor(actor, requestId), {
-    userId: actor.userId,
-    name: body.name,
-    tokenHash: hashToken(secret),
-    tokenPrefix: secret.slice(0, 10),
-    expiresAt: new Date(Date.now() + body.expiresInDays * 86_400_000),
-  }, { maxLive: MAX_LIVE_TOKENS });
-  return { token, secret };
-});
+export const POST = apiRoute(createToken, async ({ actor, body, requestId }) => issueToken(getDb(), { ...auditActor(actor, requestId), userId: actor.userId }, body));

@@ -1,9 +1,7 @@
 import { apiRoute } from "@/lib/platform/http/api-route";
-import { updateComponent } from "@/lib/api/operations/registry";
+import { updateComponent as updateComponentOp } from "@/lib/api/operations/registry";
 import { getDb } from "@/db/client";
-import * as components from "@/db/components";
 import { auditActor } from "@/lib/platform/auth/actor";
+import { updateComponent } from "@/lib/use-cases/registry/save-component";
 
-export const PUT = apiRoute(updateComponent, async ({ actor, params, body, requestId }) => ({
-  component: await components.updateComponent(getDb(), auditActor(actor, requestId), { id: params.id, ...body }),
-}));
+export const PUT = apiRoute(updateComponentOp, async ({ actor, params, body, requestId }) => ({ component: await updateComponent(getDb(), auditActor(actor, requestId), { id: params.id, ...body }) }));

@@ -1,9 +1,7 @@
 import { apiRoute } from "@/lib/platform/http/api-route";
-import { updateCoolerModel } from "@/lib/api/operations/registry";
+import { updateCoolerModel as updateCoolerModelOp } from "@/lib/api/operations/registry";
 import { getDb } from "@/db/client";
-import * as coolers from "@/db/cooler-models";
 import { auditActor } from "@/lib/platform/auth/actor";
+import { updateCoolerModel } from "@/lib/use-cases/registry/save-cooler-model";
 
-export const PUT = apiRoute(updateCoolerModel, async ({ actor, params, body, requestId }) => ({
-  coolerModel: await coolers.updateCoolerModel(getDb(), auditActor(actor, requestId), { id: params.id, ...body }),
-}));
+export const PUT = apiRoute(updateCoolerModelOp, async ({ actor, params, body, requestId }) => ({ coolerModel: await updateCoolerModel(getDb(), auditActor(actor, requestId), { id: params.id, ...body }) }));

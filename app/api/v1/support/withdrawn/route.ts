@@ -1,6 +1,6 @@
 import { apiRoute } from "@/lib/platform/http/api-route";
-import { listWithdrawnBuilds as withdrawnOp } from "@/lib/api/operations/support";
+import { listWithdrawnBuilds } from "@/lib/api/operations/support";
 import { getDb } from "@/db/client";
-import { listWithdrawnBuilds } from "@/db/lots";
+import { withdrawnBuilds } from "@/lib/use-cases/support/withdrawn";
 
-export const GET = apiRoute(withdrawnOp, async () => ({ items: await listWithdrawnBuilds(getDb()) }));
+export const GET = apiRoute(listWithdrawnBuilds, async () => withdrawnBuilds(getDb()));

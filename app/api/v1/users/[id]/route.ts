@@ -1,9 +1,7 @@
 import { apiRoute } from "@/lib/platform/http/api-route";
-import { updateUser } from "@/lib/api/operations/admin";
+import { updateUser as updateUserOp } from "@/lib/api/operations/admin";
 import { getDb } from "@/db/client";
-import * as users from "@/db/users";
 import { auditActor } from "@/lib/platform/auth/actor";
+import { updateUser } from "@/lib/use-cases/admin/users";
 
-export const PATCH = apiRoute(updateUser, async ({ actor, params, body, requestId }) => ({
-  user: await users.updateUser(getDb(), auditActor(actor, requestId), { id: params.id, ...body }),
-}));
+export const PATCH = apiRoute(updateUserOp, async ({ actor, params, body, requestId }) => ({ user: await updateUser(getDb(), auditActor(actor, requestId), { id: params.id, ...body }) }));

@@ -1,10 +1,8 @@
 import { apiRoute } from "@/lib/platform/http/api-route";
 import { revokeAnyToken } from "@/lib/api/operations/admin";
 import { getDb } from "@/db/client";
-import { revokeToken } from "@/db/tokens";
 import { auditActor } from "@/lib/platform/auth/actor";
+import { revokeToken } from "@/lib/use-cases/account/tokens";
 
 /** An admin revokes anyone's token: `userId: null` lifts the ownership filter, the revocation is audited. */
-export const DELETE = apiRoute(revokeAnyToken, async ({ actor, params, requestId }) => ({
-  token: await revokeToken(getDb(), auditActor(actor, requestId), { id: params.id, userId: null }),
-}));
+export const DELETE = apiRoute(revokeAnyToken, async ({ actor, params, requestId }) => ({ token: await revokeToken(getDb(), auditActor(actor, requestId), { id: params.id, userId: null }) }));

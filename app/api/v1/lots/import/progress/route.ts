@@ -1,10 +1,9 @@
 import { apiRoute, errorResponse } from "@/lib/platform/http/api-route";
 import { importLotsWithProgress, MAX_LOTS_CSV_BYTES } from "@/lib/api/operations/support";
 import { getDb } from "@/db/client";
-import { ImportCancelled } from "@/db/lots";
 import { auditActor } from "@/lib/platform/auth/actor";
 import { readRawBody } from "@/lib/platform/http/raw-body";
-import { importLotsCsv } from "@/lib/use-cases/lots/import";
+import { ImportCancelled, importLotsCsv } from "@/lib/use-cases/lots/import";
 import { IMPORT_PROGRESS_TYPE, type ImportEvent } from "@/lib/lots/import-events";
 import type { ErrorBody } from "@/lib/api/errors";
 

@@ -1,9 +1,9 @@
 import { apiRoute } from "@/lib/platform/http/api-route";
-import { saveDraft } from "@/lib/api/operations/profiles";
+import { saveDraft as saveDraftOp } from "@/lib/api/operations/profiles";
 import { getDb } from "@/db/client";
-import * as profiles from "@/db/profiles";
 import { auditActor } from "@/lib/platform/auth/actor";
+import { saveDraft } from "@/lib/use-cases/profiles/save-draft";
 
-export const PUT = apiRoute(saveDraft, async ({ actor, params, body, requestId }) =>
-  profiles.saveDraft(getDb(), { ...auditActor(actor, requestId), userId: actor.userId }, { id: params.id, text: body.text, baseRevision: body.baseRevision }),
+export const PUT = apiRoute(saveDraftOp, async ({ actor, params, body, requestId }) =>
+  saveDraft(getDb(), { ...auditActor(actor, requestId), userId: actor.userId }, { id: params.id, text: body.text, baseRevision: body.baseRevision }),
 );

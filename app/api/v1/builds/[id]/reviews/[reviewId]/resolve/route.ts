@@ -1,9 +1,9 @@
 import { apiRoute } from "@/lib/platform/http/api-route";
 import { resolveReview } from "@/lib/api/operations/builds";
 import { getDb } from "@/db/client";
-import * as stages from "@/db/build-stages";
 import { auditActor } from "@/lib/platform/auth/actor";
+import { resolveChangeRequest } from "@/lib/use-cases/builds/resolve-review";
 
 export const POST = apiRoute(resolveReview, async ({ actor, params, requestId }) => ({
-  review: await stages.resolveReview(getDb(), { ...auditActor(actor, requestId), userId: actor.userId }, { buildId: params.id, reviewId: params.reviewId }),
+  review: await resolveChangeRequest(getDb(), { ...auditActor(actor, requestId), userId: actor.userId }, { buildId: params.id, reviewId: params.reviewId }),
 }));

@@ -1,0 +1,3 @@
+ALTER TABLE "components" ADD COLUMN "sound_table" jsonb;--> statement-breakpoint
+ALTER TABLE "components" ADD COLUMN "stops_at_zero_duty" boolean DEFAULT false NOT NULL;--> statement-breakpoint
+ALTER TABLE "components" ADD CONSTRAINT "components_sound_table_shape" CHECK ("components"."sound_table" is null or (jsonb_typeof("components"."sound_table"->'distanceM') = 'number' and jsonb_typeof("components"."sound_table"->'points') = 'array' and jsonb_array_length("components"."sound_table"->'points') between 2 and 64));

@@ -1,0 +1,43 @@
+import type { SoundTable } from "../hardware/types";
+
+/**
+ * A measured sound table, prepared once: RPM → A-weighted level of one unit at the
+ * table's own distance.
+ *
+ * Interpolation: linear in dB over log10(RPM) between neighbouring points. Between
+ * two measured speeds this is a power law L = L1 + k12·log10(N/N1) with the slope k12
+ * the two measurements give, the same shape as the fan-law fallback
+ * (levels.ts, `levelAtSpeedDb`), so a table with two points reproduces a power law
+ * exactly. Outside the measured range the level is **clamped** to the nearest end
+ * point (not extrapolated): below the lowest measured speed that overstates the level
+ * (the safe side for a noise estimate), above the highest it would understate it, so
+ * validation warns when a table does not cover the motor's speed range
+ * (`component.sound_table_range`). A stopped motor (RPM ≤ 0) is silent (-Infinity).
+ *
+ * Expects at least one point and strictly increasing RPM (what validation enforces);
+ * points out of order are sorted here so that the result is still defined.
+ */
+export function prepareSoundTable(table: SoundTable): (rpm: number) => number {
+  const points = [...table.points].filter((p) => p.rpm > 0).sort((a, b) => a.rpm - b.rpm);
+  const logs = points.map((p) => Math.log10(p.rpm));
+  const levels = points.map((p) => p.soundDbA);
+  const n = points.length;
+  return (rpm) => {
+    if (!(rpm > 0) || n === 0) return -Infinity;
+    if (rpm <= points[0]!.rpm) return levels[0]!;
+    if (rpm >= points[n - 1]!.rpm) return levels[n - 1]!;
+    const x = Math.log10(rpm);
+    let i = 1;
+    while (i < n - 1 && logs[i]! < x) i++;
+    const x0 = logs[i - 1]!;
+    const x1 = logs[i]!;
+    const l0 = levels[i - 1]!;
+    const l1 = levels[i]!;
+    return x1 > x0 ? l0 + ((l1 - l0) * (x - x0)) / (x1 - x0) : l1;
+  };
+}
+
+/** Level of one unit at `rpm` at the table's distance, dB(A) (see prepareSoundTable). */
+export function soundTableDbA(table: SoundTable, rpm: number): number {
+  return prepareSoundTable(table)(rpm);
+}
