@@ -1,14 +1,13 @@
 /**
  * Editor benchmark: `npm run bench:editor`. In Debian's chromium, times a programmatic
  * edit of a 16-point profile until the engine's markers and the plots are committed
- * (performance.mark/measure in the page), then reads first-load JS per route from the
- * build's route-bundle-stats.json and gzips it. Writes its section of docs/benchmarks.md.
+ * (performance.mark/measure in the page). Writes its section of docs/benchmarks.md; first-load
+ * JS per route is `npm run bench:bundle`'s section.
  */
 import { spawn, type ChildProcess } from "node:child_process";
 import { existsSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
-import { gzipSync } from "node:zlib";
 import { chromium } from "@playwright/test";
 import { summariseProfile, type CpuProfile, type ProfileRow } from "./cpu-profile";
 
@@ -20,7 +19,6 @@ const PROFILED_EDITS = 30;
 const PROFILE_SAMPLING_US = 100;
 /** How far each drag move goes on the plot, px: several 0.5 % duty steps of fan point 9. */
 const DRAG_PX = 4;
-const PLOT_FREE_BUDGET_KIB = 180;
 
 interface Doc {
   name: string;
@@ -59,18 +57,6 @@ async function waitForHealth(url: string, ms = 60_000) {
     await new Promise((r) => setTimeout(r, 500));
   }
   throw new Error(`server at ${url} did not come up`);
-}
-
-function bundleRows(distDir: string) {
-  const file = path.join(root, distDir, "diagnostics", "route-bundle-stats.json");
-  const stats = JSON.parse(readFileSync(file, "utf8")) as { route: string; firstLoadUncompressedJsBytes: number; firstLoadChunkPaths: string[] }[];
-  return stats
-    .filter((s) => !s.route.startsWith("/api") && !s.route.startsWith("/_"))
-    .map((s) => {
-      const gzip = s.firstLoadChunkPaths.reduce((sum, p) => sum + gzipSync(readFileSync(path.join(root, p)), { level: 9 }).length, 0);
-      return { route: s.route, rawKiB: s.firstLoadUncompressedJsBytes / 1024, gzipKiB: gzip / 1024 };
-    })
-    .sort((a, b) => a.route.localeCompare(b.route));
 }
 
 async function main() {
@@ -247,12 +233,6 @@ async function main() {
     console.log(`load average (1 min) ${loadBefore.toFixed(2)} at the start, ${loadAfter.toFixed(2)} at the end; ${os.loadavg().map((l) => l.toFixed(2)).join(" / ")} (1 / 5 / 15 min) now, ${os.cpus().length} cores`);
     const loaded = Math.max(loadBefore, loadAfter) > os.cpus().length * 0.75;
 
-    const bundles = bundleRows(distDir);
-    const heavy = new Set(["/profiles/[id]", "/profiles/[id]/compare"]);
-    const rows = bundles.map((b) => {
-      const budget = heavy.has(b.route) ? "editor/plots loaded on demand" : b.gzipKiB <= PLOT_FREE_BUDGET_KIB ? "within 180" : "over 180";
-      return `| ${b.route} | ${b.rawKiB.toFixed(0)} | ${b.gzipKiB.toFixed(1)} | ${budget} |`;
-    });
     const section = [
       "<!-- bench:editor:start -->",
       "## Profile editor",
@@ -287,14 +267,6 @@ async function main() {
       ...profileTable("Self time by function (top 15)", "function — source", cpu.selfTop),
       ...profileTable("Our own functions, self + callees (top 15; a React component's figure is its render function, not its children)", "function — source", cpu.ownTotalTop),
       "The live editor plot is a small SVG component of our own (components/profiles/charts/live-curve-plot.tsx): React updates only the `d` attributes of the series that changed. recharts stays for the compare, sweep, lookup and lab plots. The previous run with recharts on the editor plot measured a median 25.6 ms, p95 48.4 ms for typing (an earlier run on a differently loaded machine; kept for history only).",
-      "",
-      "### First-load JS per page route",
-      "",
-      `From \`${distDir}/diagnostics/route-bundle-stats.json\`; gzip is each first-load chunk gzipped at level 9, summed. Monaco and recharts load through next/dynamic, so they are not in any route's first load.`,
-      "",
-      "| route | raw KiB | gzip KiB | budget (180 KiB gzip for routes without plots or editor) |",
-      "|---|---:|---:|---|",
-      ...rows,
       "<!-- bench:editor:end -->",
     ].join("\n");
     const docFile = path.join(root, "docs/benchmarks.md");

@@ -1,10 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePageActor } from "@/lib/platform/auth/page-guard";
-import { can } from "@/lib/auth/roles";
 import { getDb } from "@/db/client";
-import { countBuildsByStage, recentActivity, reviewsWaitingFor } from "@/db/dashboard";
-import { describeAuditEvents } from "@/db/audit-subjects";
+import { dashboard } from "@/lib/use-cases/dashboard/read";
 import { PageHeader, Panel } from "@/components/ui/panel";
 import { Table, Td, Th, EmptyRow } from "@/components/ui/table";
 import { STAGE_ORDER, STAGE_LABELS } from "@/lib/release/stages";
@@ -14,12 +12,7 @@ export const metadata: Metadata = { title: "Dashboard" };
 
 export default async function DashboardPage() {
   const actor = await requirePageActor("read");
-  const db = getDb();
-  const [byStage, waiting, activity] = await Promise.all([
-    countBuildsByStage(db),
-    can(actor.role, "build:review") ? reviewsWaitingFor(db, { userId: actor.userId }) : Promise.resolve([]),
-    recentActivity(db, { limit: 12 }).then((events) => describeAuditEvents(db, events)),
-  ]);
+  const { byStage, waiting, activity } = await dashboard(getDb(), actor);
   return (
     <>
       <PageHeader title="Dashboard" subtitle={`Signed in as ${actor.name}`} />

@@ -1,18 +1,22 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm, useWatch } from "react-hook-form";
 import { useMemo, useState } from "react";
 import type { z } from "zod";
 import { apiCall } from "@/lib/api/client";
-import { changePassword, changePasswordBody } from "@/lib/api/operations/account";
-import { MAX_PASSWORD_BYTES, MIN_PASSWORD_CHARS } from "@/lib/auth/password-policy";
+import { changePassword } from "@/lib/api/endpoints";
+import type { changePasswordBody } from "@/lib/api/operations/account";
+import { MAX_PASSWORD_BYTES, MIN_PASSWORD_CHARS } from "@/lib/auth/password-limits";
 import { Button } from "@/components/ui/button";
+import { lazyZodResolver } from "@/components/ui/lazy-resolver";
 import { Field, Input, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 import { PasswordStrength } from "./password-strength";
+
+/** Client-side checks with the API body's own schema, loaded when the form first validates. */
+const resolver = lazyZodResolver(() => import("@/lib/api/operations/account").then((m) => m.changePasswordBody));
 
 type Result = { otherSessionsEnded: number; tokensRevoked: number };
 
@@ -20,7 +24,7 @@ export function ChangePasswordForm({ email, name }: { email: string; name: strin
   const [done, setDone] = useState<Result | null>(null);
   const [serverError, setServerError] = useState<unknown>(null);
   const form = useForm<z.input<typeof changePasswordBody>, unknown, z.output<typeof changePasswordBody>>({
-    resolver: zodResolver(changePasswordBody),
+    resolver,
     defaultValues: { currentPassword: "", newPassword: "", revokeTokens: false },
   });
   const { register, handleSubmit, reset, formState, control } = form;

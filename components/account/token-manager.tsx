@@ -1,13 +1,15 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
 import { useState } from "react";
 import type { z } from "zod";
 import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
-import { createToken, createTokenBody, listTokens, revokeToken, MAX_TOKEN_DAYS, MAX_LIVE_TOKENS, type TokenView } from "@/lib/api/operations/account";
+import { createToken, listTokens, revokeToken } from "@/lib/api/endpoints";
+import { MAX_TOKEN_DAYS, MAX_LIVE_TOKENS } from "@/lib/api/limits";
+import type { createTokenBody, TokenView } from "@/lib/api/operations/account";
 import { Button } from "@/components/ui/button";
+import { lazyZodResolver } from "@/components/ui/lazy-resolver";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Field, Input, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -34,12 +36,15 @@ function tokenState(t: TokenView): { label: string; tone: "ok" | "neutral" | "fa
   return { label: "active", tone: "ok" };
 }
 
+/** Client-side checks with the API body's own schema, loaded when the form first validates. */
+const resolver = lazyZodResolver(() => import("@/lib/api/operations/account").then((m) => m.createTokenBody));
+
 export function TokenManager() {
   const qc = useQueryClient();
   const [secret, setSecret] = useState<string | null>(null);
   const tokens = useQuery(apiQuery(listTokens, {}));
   const form = useForm<z.input<typeof createTokenBody>, unknown, z.output<typeof createTokenBody>>({
-    resolver: zodResolver(createTokenBody),
+    resolver,
     defaultValues: { name: "", expiresInDays: 90 },
   });
   const create = useMutation({

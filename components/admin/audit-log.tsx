@@ -3,10 +3,11 @@
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useUrlParams } from "@/components/ui/use-url-params";
-import { apiQuery, queryFromUrl } from "@/lib/api/client";
+import { apiQuery } from "@/lib/api/client";
 import { AUDIT_FILTERS, pagedQueryFromUrl } from "@/lib/api/screen-queries";
 import { formText } from "@/components/ui/form-data";
-import { auditQuery, listAudit } from "@/lib/api/operations/admin";
+import { listAudit } from "@/lib/api/endpoints";
+import type { AuditQuery } from "@/lib/api/operations/admin";
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
@@ -25,12 +26,11 @@ const FILTERS = [
 /** Actions worth picking by name; the filter still takes any part of an action. */
 const KNOWN_ACTIONS = ["profile_version.publish", "build.create", "build.promote", "build.withdraw", "lot.import", "user.create", "user.role_change", "user.disable", "user.enable", "token.create", "token.revoke"];
 
-export function AuditLog() {
+/** `query`: the API query the page read from the URL on the server (values the API refuses dropped), so both name the same answer. */
+export function AuditLog({ query }: { query: AuditQuery }) {
   const { sp, set: setParams } = useUrlParams();
-  // The same reading of the URL the page made on the server for the first page it rendered.
-  const raw = pagedQueryFromUrl(AUDIT_FILTERS, sp);
-  const page = Number(raw.page);
-  const q = useQuery(apiQuery(listAudit, { query: queryFromUrl(auditQuery, raw) }));
+  const page = Number(pagedQueryFromUrl(AUDIT_FILTERS, sp).page);
+  const q = useQuery(apiQuery(listAudit, { query }));
 
 
   return (

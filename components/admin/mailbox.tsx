@@ -3,7 +3,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { useSearchParams } from "next/navigation";
 import { apiQuery } from "@/lib/api/client";
-import { listMailbox } from "@/lib/api/operations/builds";
+import { listMailbox } from "@/lib/api/endpoints";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { Pager } from "@/components/ui/pager";

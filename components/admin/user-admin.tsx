@@ -1,13 +1,14 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
 import { useState } from "react";
 import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
-import { createUser, createUserBody, listUsers, updateUser, type CreateUserBody, type UpdateUserBody } from "@/lib/api/operations/admin";
+import { createUser, listUsers, updateUser } from "@/lib/api/endpoints";
+import type { CreateUserBody, UpdateUserBody } from "@/lib/api/operations/admin";
 import { ROLES, ROLE_LABELS, type Role } from "@/lib/auth/roles";
 import { Button } from "@/components/ui/button";
+import { lazyZodResolver } from "@/components/ui/lazy-resolver";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -17,10 +18,13 @@ import { ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 
+/** Client-side checks with the API body's own schema, loaded when the form first validates. */
+const createUserBodyResolver = lazyZodResolver(() => import("@/lib/api/operations/admin").then((m) => m.createUserBody));
+
 export function UserAdmin({ currentUserId }: { currentUserId: string }) {
   const qc = useQueryClient();
   const users = useQuery(apiQuery(listUsers, {}));
-  const form = useForm<CreateUserBody>({ resolver: zodResolver(createUserBody), defaultValues: { role: "viewer" } });
+  const form = useForm<CreateUserBody>({ resolver: createUserBodyResolver, defaultValues: { role: "viewer" } });
   const create = useMutation({
     mutationFn: (v: CreateUserBody) => apiCall(createUser, { body: v }),
     onError: (err) => showServerIssues(form, err),

@@ -1,6 +1,5 @@
 "use client";
 
-import { signIn } from "next-auth/react";
 import { useState } from "react";
 import { formText } from "@/components/ui/form-data";
 import { Button } from "@/components/ui/button";
@@ -22,9 +21,19 @@ export function SignInForm({ callbackUrl, csrfToken, initialError }: { callbackU
 
   async function onSubmit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
-    const form = new FormData(e.currentTarget);
+    const element = e.currentTarget;
+    const form = new FormData(element);
     setBusy(true);
     setError(null);
+    // next-auth's client loads with the first submit, not with the page; if it cannot be
+    // loaded, the form posts the way it does without scripts.
+    let signIn: typeof import("next-auth/react").signIn;
+    try {
+      ({ signIn } = await import("next-auth/react"));
+    } catch {
+      element.submit();
+      return;
+    }
     const res = await signIn("credentials", {
       email: formText(form, "email"),
       password: formText(form, "password"),

@@ -2,7 +2,8 @@
 
 import { useState } from "react";
 import { apiCall } from "@/lib/api/client";
-import { transitionBuild, type BuildDetail, type BuildGateView, type TransitionBody } from "@/lib/api/operations/builds";
+import { transitionBuild } from "@/lib/api/endpoints";
+import type { BuildDetail, BuildGateView, TransitionBody } from "@/lib/api/operations/builds";
 import { can, type Role } from "@/lib/auth/roles";
 import { STAGE_LABELS } from "@/lib/release/stages";
 import { capabilityFor } from "@/lib/release/transitions";

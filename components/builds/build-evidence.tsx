@@ -1,8 +1,10 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useState } from "react";
 import { apiCall } from "@/lib/api/client";
-import { recordWaiver, type BuildDetail, type UploadView, type WaiverBody } from "@/lib/api/operations/builds";
+import { recordWaiver } from "@/lib/api/endpoints";
+import type { BuildDetail, UploadView, WaiverBody } from "@/lib/api/operations/builds";
 import { can, type Role } from "@/lib/auth/roles";
 import { takesEvidence } from "@/lib/release/stages";
 import { Button } from "@/components/ui/button";
@@ -11,9 +13,14 @@ import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, Table, Td, Th } from "@/components/ui/table";
 import { ErrorNotice } from "@/components/ui/error-notice";
-import { SoundPlot } from "./sound-plot";
 import { EvidenceUpload } from "./evidence-upload";
 import { useBuildMutation } from "./use-build";
+
+// recharts is large: the sound plot loads only when a build with measurements is on screen.
+const SoundPlot = dynamic(() => import("./sound-plot"), {
+  ssr: false,
+  loading: () => <div className="h-64 animate-pulse rounded bg-ink-100" aria-label="Loading the sound plot" />,
+});
 
 function UploadRow({ label, upload }: { label: string; upload: UploadView | null }) {
   return (

@@ -2,7 +2,8 @@
 
 import { useState } from "react";
 import { apiCall } from "@/lib/api/client";
-import { changeReview, resolveReview, reviewBuild, type BuildDetail, type BuildGateView, type ReviewBody } from "@/lib/api/operations/builds";
+import { changeReview, resolveReview, reviewBuild } from "@/lib/api/endpoints";
+import type { BuildDetail, BuildGateView, ReviewBody } from "@/lib/api/operations/builds";
 import { can, type Role } from "@/lib/auth/roles";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";

@@ -1,8 +1,8 @@
 "use client";
 
 import { apiUploadJson } from "@/lib/api/client";
-import { uploadEvidence } from "@/lib/api/operations/builds";
-import { UPLOAD_LABELS } from "@/lib/release/upload-check";
+import { uploadEvidence } from "@/lib/api/endpoints";
+import { UPLOAD_LABELS } from "@/lib/release/upload-limits";
 import { Field } from "@/components/ui/field";
 import { FilePicker } from "@/components/ui/file-picker";
 import { UploadProgressBar } from "@/components/ui/upload-progress";

@@ -2,14 +2,15 @@
 
 import { useState } from "react";
 import { useRouter } from "next/navigation";
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery } from "@tanstack/react-query";
 import { useForm, useWatch } from "react-hook-form";
 import { apiCall, apiQuery, apiUploadJson } from "@/lib/api/client";
 import { AppError } from "@/lib/api/errors";
-import { createBuild, createBuildBody, getBuildOptions, uploadFirmware, type CreateBuildBody } from "@/lib/api/operations/builds";
-import { UPLOAD_MAX_BYTES } from "@/lib/release/upload-check";
+import { createBuild, getBuildOptions, uploadFirmware } from "@/lib/api/endpoints";
+import type { CreateBuildBody } from "@/lib/api/operations/builds";
+import { UPLOAD_MAX_BYTES } from "@/lib/release/upload-limits";
 import { Button } from "@/components/ui/button";
+import { lazyZodResolver } from "@/components/ui/lazy-resolver";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
@@ -20,8 +21,8 @@ import { useUpload } from "@/components/ui/use-upload";
 import { BankFit } from "./bank-fit";
 import { bankBytesFromVersionImages } from "@/lib/release/bank-fit";
 
-/** The API body without the firmware id: the file is uploaded first, on submit. */
-const formSchema = createBuildBody.omit({ firmwareUploadId: true });
+/** The API body without the firmware id: the file is uploaded first, on submit. Its schema loads when the form first validates. */
+const resolver = lazyZodResolver(() => import("@/lib/api/operations/builds").then((m) => m.createBuildBody.omit({ firmwareUploadId: true })));
 type FormValues = Omit<CreateBuildBody, "firmwareUploadId">;
 
 export function NewBuildForm() {
@@ -30,7 +31,7 @@ export function NewBuildForm() {
   const [file, setFile] = useState<File | null>(null);
   const [fileError, setFileError] = useState<string>();
   const progress = useUpload();
-  const form = useForm<FormValues>({ resolver: zodResolver(formSchema), defaultValues: { version: "", revisionRange: "", slots: [] } });
+  const form = useForm<FormValues>({ resolver, defaultValues: { version: "", revisionRange: "", slots: [] } });
   const boardModelId = useWatch({ control: form.control, name: "boardModelId" });
   const chosenSlots = useWatch({ control: form.control, name: "slots" });
   const revisionRange = useWatch({ control: form.control, name: "revisionRange" });

@@ -3,7 +3,7 @@
 import Link from "next/link";
 import { useQuery } from "@tanstack/react-query";
 import { apiQuery } from "@/lib/api/client";
-import { listBuilds } from "@/lib/api/operations/builds";
+import { listBuilds } from "@/lib/api/endpoints";
 import { STAGE_LABELS, STAGE_ORDER, type Stage } from "@/lib/release/stages";
 import { ErrorNotice } from "@/components/ui/error-notice";
 

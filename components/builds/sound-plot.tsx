@@ -4,7 +4,7 @@ import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, X
 import type { MeasurementComparison } from "@/lib/release/measurements";
 
 /** Measured and estimated sound at the lab's operating points, against liquid temperature. */
-export function SoundPlot({ rows }: { rows: MeasurementComparison[] }) {
+export default function SoundPlot({ rows }: { rows: MeasurementComparison[] }) {
   const data = [...rows]
     .sort((a, b) => a.liquidTempC - b.liquidTempC)
     .map((r) => ({ tempC: r.liquidTempC, measured: r.soundDbA, corrected: r.correctedDbA === null ? null : Number(r.correctedDbA.toFixed(1)), estimated: Number.isFinite(r.estimatedDbA) ? Number(r.estimatedDbA.toFixed(1)) : null }));

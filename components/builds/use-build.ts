@@ -2,7 +2,7 @@
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { apiQuery, operationKey } from "@/lib/api/client";
-import { getBuild, getBuildGate } from "@/lib/api/operations/builds";
+import { getBuild, getBuildGate } from "@/lib/api/endpoints";
 
 export const buildKey = (id: string) => operationKey(getBuild, { params: { id } });
 export const buildGateKey = (id: string) => operationKey(getBuildGate, { params: { id } });

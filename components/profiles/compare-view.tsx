@@ -5,8 +5,10 @@ import dynamic from "next/dynamic";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo } from "react";
 import { apiQuery } from "@/lib/api/client";
-import { getProfile, getVersion } from "@/lib/api/operations/profiles";
-import { evaluateCurves, type CoolingProfile } from "@/lib/engine";
+import { getProfile, getVersion } from "@/lib/api/endpoints";
+import type { CoolingProfile } from "@/lib/engine";
+// From its own module, not the engine's index: the index would bring the validators and the encoder into the page.
+import { evaluateCurves } from "@/lib/evaluation/curve-table";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { coolingBranchRpm } from "@/lib/registry/editor-evaluation";
 import { documentText } from "@/lib/registry/starter-profile";

@@ -1,18 +1,19 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
-import { apiCall, apiQuery, queryFromUrl } from "@/lib/api/client";
+import { apiCall, apiQuery } from "@/lib/api/client";
 import { PROFILE_FILTERS } from "@/lib/api/screen-queries";
-import { createProfileBody, type CreateProfileBody, type ProfileSummaryView } from "@/lib/api/operations/profile-schemas";
-import { createProfile, listProfiles, profilesQuery } from "@/lib/api/operations/profiles";
-import { ALL_COOLERS, listCoolerModels } from "@/lib/api/operations/registry";
+import { createProfile, listProfiles, listCoolerModels } from "@/lib/api/endpoints";
+import { ALL_COOLERS } from "@/lib/api/limits";
+import type { CreateProfileBody, ProfileSummaryView } from "@/lib/api/operations/profile-schemas";
 import type { CoolerModelView } from "@/lib/api/operations/registry-schemas";
+import type { ProfilesQuery } from "@/lib/api/operations/profiles";
 import { Button } from "@/components/ui/button";
+import { lazyZodResolver } from "@/components/ui/lazy-resolver";
 import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import { Badge } from "@/components/ui/badge";
@@ -41,10 +42,14 @@ const columns: ColumnDef<ProfileSummaryView>[] = [
   { id: "updatedAt", accessorKey: "updatedAt", header: "Updated", cell: (c) => <span className="tabular-nums">{formatUtc(c.row.original.updatedAt)}</span> },
 ];
 
-export function ProfilesList({ canWrite }: { canWrite: boolean }) {
+/** Client-side checks with the API body's own schema, loaded when the form first validates. */
+const createProfileBodyResolver = lazyZodResolver(() => import("@/lib/api/operations/profile-schemas").then((m) => m.createProfileBody));
+
+/** `query`: the API query the page read from the URL on the server (values the API refuses dropped), so both name the same answer. */
+export function ProfilesList({ canWrite, query }: { canWrite: boolean; query: ProfilesQuery }) {
   const list = useListParams(PROFILE_FILTERS);
   const coolers = useQuery(apiQuery(listCoolerModels, { query: ALL_COOLERS }));
-  const q = useQuery(apiQuery(listProfiles, { query: queryFromUrl(profilesQuery, list.query) }));
+  const q = useQuery(apiQuery(listProfiles, { query }));
   return (
     <div className="space-y-5">
       <Panel title="Profiles">
@@ -74,7 +79,7 @@ export function ProfilesList({ canWrite }: { canWrite: boolean }) {
 
 function CreateProfileForm({ coolers }: { coolers: CoolerModelView[] }) {
   const router = useRouter();
-  const form = useForm<CreateProfileBody>({ resolver: zodResolver(createProfileBody), defaultValues: { description: "" } });
+  const form = useForm<CreateProfileBody>({ resolver: createProfileBodyResolver, defaultValues: { description: "" } });
   const create = useMutation({
     mutationFn: (v: CreateProfileBody) => apiCall(createProfile, { body: v }),
     onSuccess: (res) => router.push(`/profiles/${res.profile.id}`),

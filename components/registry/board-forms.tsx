@@ -1,24 +1,29 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { apiCall, operationKey } from "@/lib/api/client";
-import { createBoardModel, createBoardRevision, getBoardRevision, listBoardModels, updateBoardModel, updateBoardRevision } from "@/lib/api/operations/registry";
-import { boardModelBody, boardRevisionBody, type BoardModelBody, type BoardModelView, type BoardRevisionBody, type BoardRevisionView } from "@/lib/api/operations/registry-schemas";
+import { createBoardModel, createBoardRevision, getBoardRevision, listBoardModels, updateBoardModel, updateBoardRevision } from "@/lib/api/endpoints";
+import type { BoardModelBody, BoardModelView, BoardRevisionBody, BoardRevisionView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
+import { lazyZodResolver } from "@/components/ui/lazy-resolver";
 import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import { NumberField } from "./number-field";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 
+/** Client-side checks with the API body's own schema, loaded when the form first validates. */
+const boardModelBodyResolver = lazyZodResolver(() => import("@/lib/api/operations/registry-schemas").then((m) => m.boardModelBody));
+/** Client-side checks with the API body's own schema, loaded when the form first validates. */
+const boardRevisionBodyResolver = lazyZodResolver(() => import("@/lib/api/operations/registry-schemas").then((m) => m.boardRevisionBody));
+
 /** Adds a board model, or edits `editing` (same schema as the API body). */
 export function BoardModelForm({ editing, onDone }: { editing?: BoardModelView; onDone?: () => void }) {
   const qc = useQueryClient();
   const form = useForm<BoardModelBody>({
-    resolver: zodResolver(boardModelBody),
+    resolver: boardModelBodyResolver,
     defaultValues: editing ? { name: editing.name, serialPrefix: editing.serialPrefix, description: editing.description } : { description: "" },
   });
   const create = useMutation({
@@ -62,7 +67,7 @@ const REVISION_DEFAULTS: Partial<BoardRevisionBody> = { pwmFrequencyHz: 25000, t
 export function BoardRevisionForm({ boardModels }: { boardModels: BoardModelView[] }) {
   const qc = useQueryClient();
   const [boardModelId, setBoardModelId] = useState(boardModels[0]?.id ?? "");
-  const form = useForm<BoardRevisionBody>({ resolver: zodResolver(boardRevisionBody), defaultValues: REVISION_DEFAULTS });
+  const form = useForm<BoardRevisionBody>({ resolver: boardRevisionBodyResolver, defaultValues: REVISION_DEFAULTS });
   const create = useMutation({
     mutationFn: (v: BoardRevisionBody) => apiCall(createBoardRevision, { params: { id: boardModelId }, body: v }),
     onSuccess: () => {
@@ -123,7 +128,7 @@ const revisionBodyOf = (r: BoardRevisionView): BoardRevisionBody => ({
 /** Corrects a revision's limits; once boards of it shipped the server only accepts note changes. */
 export function BoardRevisionEditForm({ revision, onDone }: { revision: BoardRevisionView; onDone: () => void }) {
   const qc = useQueryClient();
-  const form = useForm<BoardRevisionBody>({ resolver: zodResolver(boardRevisionBody), defaultValues: revisionBodyOf(revision) });
+  const form = useForm<BoardRevisionBody>({ resolver: boardRevisionBodyResolver, defaultValues: revisionBodyOf(revision) });
   const save = useMutation({
     mutationFn: (v: BoardRevisionBody) => apiCall(updateBoardRevision, { params: { id: revision.id }, body: v }),
     onSuccess: () => {

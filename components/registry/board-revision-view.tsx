@@ -4,7 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
 import { apiQuery } from "@/lib/api/client";
-import { getBoardRevision } from "@/lib/api/operations/registry";
+import { getBoardRevision } from "@/lib/api/endpoints";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";

@@ -2,7 +2,7 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { apiQuery } from "@/lib/api/client";
-import { listBoardSigningKeys } from "@/lib/api/operations/registry";
+import { listBoardSigningKeys } from "@/lib/api/endpoints";
 
 /** The board model's bank-signing public keys, so the factory and support can verify images offline. */
 export function BoardSigningKeys({ boardModelId, boardName }: { boardModelId: string; boardName: string }) {

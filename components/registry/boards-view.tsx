@@ -5,7 +5,7 @@ import { hex32 } from "@/lib/hex/address";
 import Link from "next/link";
 import { useState } from "react";
 import { apiQuery } from "@/lib/api/client";
-import { listBoardModels } from "@/lib/api/operations/registry";
+import { listBoardModels } from "@/lib/api/endpoints";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";

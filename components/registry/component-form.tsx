@@ -1,12 +1,12 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
 import { apiCall, operationKey } from "@/lib/api/client";
-import { createComponent, listComponents } from "@/lib/api/operations/registry";
-import { componentBody, type ComponentBody } from "@/lib/api/operations/registry-schemas";
+import { createComponent, listComponents } from "@/lib/api/endpoints";
+import type { ComponentBody } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
+import { lazyZodResolver } from "@/components/ui/lazy-resolver";
 import { Field, Input, Select, Textarea, describedBy } from "@/components/ui/field";
 import { parseSoundTableText } from "@/lib/registry/sound-table-text";
 import { Notice } from "@/components/ui/notice";
@@ -30,9 +30,12 @@ function soundTableError(e: unknown): string | undefined {
   return undefined;
 }
 
+/** Client-side checks with the API body's own schema, loaded when the form first validates. */
+const componentBodyResolver = lazyZodResolver(() => import("@/lib/api/operations/registry-schemas").then((m) => m.componentBody));
+
 export function ComponentForm() {
   const qc = useQueryClient();
-  const form = useForm<ComponentBody>({ resolver: zodResolver(componentBody), defaultValues: DEFAULTS });
+  const form = useForm<ComponentBody>({ resolver: componentBodyResolver, defaultValues: DEFAULTS });
   const create = useMutation({
     mutationFn: (v: ComponentBody) => apiCall(createComponent, { body: v }),
     onSuccess: () => {

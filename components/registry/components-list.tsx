@@ -2,10 +2,11 @@
 
 import { useQuery } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
-import { apiQuery, queryFromUrl } from "@/lib/api/client";
-import { componentsQuery, listComponents } from "@/lib/api/operations/registry";
-import { COMPONENT_FILTERS } from "@/lib/api/screen-queries";
+import { apiQuery } from "@/lib/api/client";
+import { listComponents } from "@/lib/api/endpoints";
 import type { ComponentView } from "@/lib/api/operations/registry-schemas";
+import type { ComponentsQuery } from "@/lib/api/operations/registry";
+import { COMPONENT_FILTERS } from "@/lib/api/screen-queries";
 import { Badge } from "@/components/ui/badge";
 import { Input, Select } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
@@ -34,11 +35,10 @@ const columns: ColumnDef<ComponentView>[] = [
   { id: "flow", header: "Flow at max (L/min)", enableSorting: false, cell: (c) => <span className="tabular-nums">{c.row.original.flowAtMaxRpmLpm ?? "—"}</span> },
 ];
 
-export function ComponentsList({ canWrite }: { canWrite: boolean }) {
+/** `query`: the API query the page read from the URL on the server (values the API refuses dropped), so both name the same answer. */
+export function ComponentsList({ canWrite, query }: { canWrite: boolean; query: ComponentsQuery }) {
   const list = useListParams(COMPONENT_FILTERS);
-  const q = useQuery({
-    ...apiQuery(listComponents, { query: queryFromUrl(componentsQuery, list.query) }),
-  });
+  const q = useQuery(apiQuery(listComponents, { query }));
   return (
     <div className="space-y-5">
       <Panel title="Fans and pumps">

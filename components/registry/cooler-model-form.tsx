@@ -1,12 +1,13 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
 import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
-import { ALL_COMPONENTS, createCoolerModel, listBoardModels, listComponents, listCoolerModels, updateCoolerModel } from "@/lib/api/operations/registry";
-import { coolerModelBody, type CoolerModelBody, type CoolerModelView } from "@/lib/api/operations/registry-schemas";
+import { createCoolerModel, listBoardModels, listComponents, listCoolerModels, updateCoolerModel } from "@/lib/api/endpoints";
+import { ALL_COMPONENTS } from "@/lib/api/limits";
+import type { CoolerModelBody, CoolerModelView } from "@/lib/api/operations/registry-schemas";
 import { Button } from "@/components/ui/button";
+import { lazyZodResolver } from "@/components/ui/lazy-resolver";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
@@ -25,12 +26,15 @@ const bodyOf = (c: CoolerModelView): CoolerModelBody => ({
   radiatorKPerWAtMaxFan: c.radiatorKPerWAtMaxFan,
 });
 
+/** Client-side checks with the API body's own schema, loaded when the form first validates. */
+const coolerModelBodyResolver = lazyZodResolver(() => import("@/lib/api/operations/registry-schemas").then((m) => m.coolerModelBody));
+
 /** Adds a cooler model, or edits `editing` in place (same schema as the API body). */
 export function CoolerModelForm({ editing, onDone }: { editing?: CoolerModelView; onDone?: () => void }) {
   const qc = useQueryClient();
   const parts = useQuery(apiQuery(listComponents, { query: ALL_COMPONENTS }));
   const boards = useQuery(apiQuery(listBoardModels, {}));
-  const form = useForm<CoolerModelBody>({ resolver: zodResolver(coolerModelBody), defaultValues: editing ? bodyOf(editing) : undefined });
+  const form = useForm<CoolerModelBody>({ resolver: coolerModelBodyResolver, defaultValues: editing ? bodyOf(editing) : undefined });
   const create = useMutation({
     mutationFn: (v: CoolerModelBody) =>
       editing ? apiCall(updateCoolerModel, { params: { id: editing.id }, body: v }) : apiCall(createCoolerModel, { body: v }),

@@ -3,10 +3,11 @@
 import { useQuery } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
-import { apiQuery, queryFromUrl } from "@/lib/api/client";
-import { coolerModelsQuery, listCoolerModels } from "@/lib/api/operations/registry";
-import { COOLER_FILTERS } from "@/lib/api/screen-queries";
+import { apiQuery } from "@/lib/api/client";
+import { listCoolerModels } from "@/lib/api/endpoints";
 import type { CoolerModelView } from "@/lib/api/operations/registry-schemas";
+import type { CoolerModelsQuery } from "@/lib/api/operations/registry";
+import { COOLER_FILTERS } from "@/lib/api/screen-queries";
 import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/field";
@@ -53,13 +54,12 @@ function editColumn(onEdit: (c: CoolerModelView) => void): ColumnDef<CoolerModel
   };
 }
 
-export function CoolerModelsList({ canWrite }: { canWrite: boolean }) {
+/** `query`: the API query the page read from the URL on the server (values the API refuses dropped), so both name the same answer. */
+export function CoolerModelsList({ canWrite, query }: { canWrite: boolean; query: CoolerModelsQuery }) {
   const list = useListParams(COOLER_FILTERS);
   const [editing, setEditing] = useState<CoolerModelView | null>(null);
   const shown = useMemo(() => (canWrite ? [...columns, editColumn(setEditing)] : columns), [canWrite]);
-  const q = useQuery({
-    ...apiQuery(listCoolerModels, { query: queryFromUrl(coolerModelsQuery, list.query) }),
-  });
+  const q = useQuery(apiQuery(listCoolerModels, { query }));
   return (
     <div className="space-y-5">
       <Panel title="Cooler models">

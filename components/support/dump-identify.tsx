@@ -3,7 +3,7 @@
 import { useMutation } from "@tanstack/react-query";
 import { useId, useState } from "react";
 import { apiUploadJson } from "@/lib/api/client";
-import { identifyDump } from "@/lib/api/operations/support";
+import { identifyDump } from "@/lib/api/endpoints";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";

@@ -4,7 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useState } from "react";
 import { apiQuery } from "@/lib/api/client";
-import { lookupSerial } from "@/lib/api/operations/support";
+import { lookupSerial } from "@/lib/api/endpoints";
 import { parseSerial } from "@/lib/serials/serial";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";

@@ -1,22 +1,25 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
 import { apiCall, operationKey } from "@/lib/api/client";
-import { createLot, listLots } from "@/lib/api/operations/support";
-import { lotBody, type LotOptions } from "@/lib/api/operations/support";
+import { createLot, listLots } from "@/lib/api/endpoints";
+import type { LotOptions } from "@/lib/api/operations/support";
 import type { LotInput } from "@/lib/lots/input";
 import { Button } from "@/components/ui/button";
+import { lazyZodResolver } from "@/components/ui/lazy-resolver";
 import { Field, Input, Select, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 import { Panel } from "@/components/ui/panel";
 
+/** Client-side checks with the API body's own schema, loaded when the form first validates. */
+const lotBodyResolver = lazyZodResolver(() => import("@/lib/api/operations/support").then((m) => m.lotBody));
+
 export function LotForm({ options }: { options: LotOptions | undefined }) {
   const qc = useQueryClient();
-  const form = useForm<LotInput>({ resolver: zodResolver(lotBody), defaultValues: { producedOn: new Date().toISOString().slice(0, 10) } });
+  const form = useForm<LotInput>({ resolver: lotBodyResolver, defaultValues: { producedOn: new Date().toISOString().slice(0, 10) } });
   const create = useMutation({
     mutationFn: (v: LotInput) => apiCall(createLot, { body: v }),
     onSuccess: () => {

@@ -3,9 +3,9 @@
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useUrlParams } from "@/components/ui/use-url-params";
-import { apiQuery, queryFromUrl } from "@/lib/api/client";
-import { listLots, lotsQuery } from "@/lib/api/operations/support";
-import type { LotOptions } from "@/lib/api/operations/support";
+import { apiQuery } from "@/lib/api/client";
+import { listLots } from "@/lib/api/endpoints";
+import type { LotOptions, LotsQuery } from "@/lib/api/operations/support";
 import { LOT_FILTERS, pagedQueryFromUrl } from "@/lib/api/screen-queries";
 import { formText } from "@/components/ui/form-data";
 import { Button } from "@/components/ui/button";
@@ -21,12 +21,11 @@ const SORTS = [
   { value: "code", label: "Lot code" },
 ] as const;
 
-export function LotsList({ options }: { options: LotOptions | undefined }) {
+/** `query`: the API query the page read from the URL on the server (values the API refuses dropped), so both name the same answer. */
+export function LotsList({ options, query }: { options: LotOptions | undefined; query: LotsQuery }) {
   const { sp, set: setParams } = useUrlParams();
-  // The same reading of the URL the page made on the server for the first page it rendered.
-  const raw = pagedQueryFromUrl(LOT_FILTERS, sp);
-  const page = Number(raw.page);
-  const q = useQuery(apiQuery(listLots, { query: queryFromUrl(lotsQuery, raw) }));
+  const page = Number(pagedQueryFromUrl(LOT_FILTERS, sp).page);
+  const q = useQuery(apiQuery(listLots, { query }));
   const builds = (options?.boardModels ?? []).flatMap((m) => m.builds.map((b) => ({ ...b, model: m.name })));
 
 

@@ -3,7 +3,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { useEffect } from "react";
 import { apiQuery } from "@/lib/api/client";
-import { listRecentLookups } from "@/lib/api/operations/support";
+import { listRecentLookups } from "@/lib/api/endpoints";
 
 
 export function RecentLookups({ onPick, refreshKey }: { onPick: (serial: string) => void; refreshKey: string }) {

@@ -1,7 +1,7 @@
 "use client";
 
 import { Area, CartesianGrid, ComposedChart, Legend, Line, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { evaluateCurves } from "@/lib/engine";
+import { evaluateCurves } from "@/lib/evaluation/curve-table";
 import { coolingBranchRpm } from "@/lib/registry/editor-evaluation";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import type { LookupResult, LookupSlot } from "@/lib/api/operations/support";

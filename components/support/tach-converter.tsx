@@ -1,7 +1,8 @@
 "use client";
 
 import { useId, useState } from "react";
-import { realRpmFromReading } from "@/lib/engine";
+// From its own module, not the engine's index: the index would bring the whole engine into the lookup page.
+import { realRpmFromReading } from "@/lib/tach/tach";
 import { DEFAULT_PUMP_PULSES_PER_REV } from "@/lib/support/pump-pulses";
 import { checkPumpSpeed } from "@/lib/support/tach-check";
 import { Field, Input } from "@/components/ui/field";

@@ -4,7 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { apiQuery } from "@/lib/api/client";
-import { getShippedWithBuild, listWithdrawnBuilds } from "@/lib/api/operations/support";
+import { getShippedWithBuild, listWithdrawnBuilds } from "@/lib/api/endpoints";
 import { buttonClass } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, ErrorRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";

@@ -1,7 +1,7 @@
 import { DEFAULT_SOUND_EXPONENT, type HardwareContext, type MotorComponent } from "../hardware/types";
 import { addLevelsDb, identicalSourcesDb, levelAtDistanceDb, levelAtSpeedDb } from "./levels";
 import { requireListenerDistance } from "./near-field";
-import { prepareSoundTable } from "./sound-table";
+import { prepareSoundTable, prepareSoundTablePower } from "./sound-table";
 
 /** Estimated A-weighted sound pressure level of a cooler. */
 export interface NoiseEstimate {
@@ -64,18 +64,17 @@ export function coolerTotalDbA1m(hw: HardwareContext, fanRpm: number, pumpRpm: n
 }
 
 /**
- * coolerTotalDbA1m with per-component constants computed once. Without a sound table a
- * source costs one power per call (Lref and k folded into one scale); with a table, its
- * interpolation and one power.
+ * coolerTotalDbA1m with per-component constants computed once. A source costs one power
+ * per call: without a sound table Lref and k are folded into one scale; with a table each
+ * segment is the power law its two points imply (prepareSoundTablePower).
  */
 export function prepareCoolerTotal(hw: HardwareContext): (fanRpm: number, pumpRpm: number) => number {
   const source = (c: MotorComponent, count: number): ((rpm: number) => number) => {
     if (c.soundTable) {
-      const level = prepareComponentLevel(c);
-      return (rpm) => {
-        const l = level(rpm);
-        return l === -Infinity ? 0 : count * 10 ** (l / 10);
-      };
+      const power = prepareSoundTablePower(c.soundTable);
+      // Table levels are at the table's distance; to 1 m by the inverse-square law (×d² in power).
+      const factor = count * c.soundTable.distanceM ** 2;
+      return (rpm) => factor * power(rpm);
     }
     const exponent = (c.soundExponent ?? DEFAULT_SOUND_EXPONENT) / 10;
     if (!(c.soundRefRpm > 0)) return () => 0;

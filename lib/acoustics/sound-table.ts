@@ -41,3 +41,34 @@ export function prepareSoundTable(table: SoundTable): (rpm: number) => number {
 export function soundTableDbA(table: SoundTable, rpm: number): number {
   return prepareSoundTable(table)(rpm);
 }
+
+/**
+ * The same table as relative sound power, 10^(L/10), at the table's distance, for power
+ * sums: on each segment L = L0 + s·log10(N/N0), so 10^(L/10) = 10^(L0/10)·(N/N0)^(s/10) —
+ * one power per call, like the fallback law (prepareCoolerTotal's hot loop). Clamped at
+ * the ends and 0 when stopped, exactly as prepareSoundTable.
+ */
+export function prepareSoundTablePower(table: SoundTable): (rpm: number) => number {
+  const points = [...table.points].filter((p) => p.rpm > 0).sort((a, b) => a.rpm - b.rpm);
+  const n = points.length;
+  if (n === 0) return () => 0;
+  const segments = points.slice(1).map((hi, i) => {
+    const lo = points[i]!;
+    const exponent = hi.rpm > lo.rpm ? (hi.soundDbA - lo.soundDbA) / 10 / Math.log10(hi.rpm / lo.rpm) : 0;
+    // Relative to the segment's lower point, so (N/N0)^e stays between 1 and the segment's own ratio (no overflow on steep segments).
+    return { fromRpm: lo.rpm, upToRpm: hi.rpm, exponent, power: 10 ** (lo.soundDbA / 10) };
+  });
+  const firstRpm = points[0]!.rpm;
+  const lastRpm = points[n - 1]!.rpm;
+  const firstPower = 10 ** (points[0]!.soundDbA / 10);
+  const lastPower = 10 ** (points[n - 1]!.soundDbA / 10);
+  return (rpm) => {
+    if (!(rpm > 0)) return 0;
+    if (rpm <= firstRpm) return firstPower;
+    if (rpm >= lastRpm) return lastPower;
+    let i = 0;
+    while (i < segments.length - 1 && segments[i]!.upToRpm < rpm) i++;
+    const seg = segments[i]!;
+    return seg.power * (rpm / seg.fromRpm) ** seg.exponent;
+  };
+}

@@ -1,6 +1,7 @@
 import type { z } from "zod";
 import { AppError, isErrorBody, type ErrorCode } from "./errors";
-import { isJsonResponse, type Operation, type ResponseBody, type ResponseSpec, type SendOf } from "./operation";
+import { kindOf, type Callable, type OperationOf } from "./endpoint";
+import type { Operation, ResponseBody, ResponseSpec, SendOf } from "./operation";
 
 /** Drops the keys whose type allows undefined from being required. */
 type Inputs<Q, B, P> = (P extends z.ZodType ? { params: SendOf<P> } : { params?: undefined }) &
@@ -10,12 +11,13 @@ type Inputs<Q, B, P> = (P extends z.ZodType ? { params: SendOf<P> } : { params?:
     raw?: { data: Blob | string | FormData | ArrayBuffer; contentType?: string };
   };
 
-/** What a call of an operation sends: its path parameters, query and JSON body, each typed by the operation. */
-export type CallInput<O> = O extends Operation<infer Q, infer B, infer P, ResponseSpec> ? Inputs<Q, B, P> : never;
-/** What a call of an operation answers with on success. */
-export type CallResult<O> = O extends Operation<infer _Q, infer _B, infer _P, infer R> ? ResponseBody<R> : never;
+/** What a call of an operation (or its endpoint) sends: its path parameters, query and JSON body, each typed by the operation. */
+export type CallInput<C> = OperationOf<C> extends Operation<infer Q, infer B, infer P, ResponseSpec> ? Inputs<Q, B, P> : never;
+/** What a call of an operation (or its endpoint) answers with on success. */
+export type CallResult<C> = OperationOf<C> extends Operation<infer _Q, infer _B, infer _P, infer R> ? ResponseBody<R> : never;
 
-type AnyOperation = Operation<z.ZodType | undefined, z.ZodType | undefined, z.ZodType | undefined, ResponseSpec>;
+/** What the client needs to reach an operation: its id, method and path. */
+type Target = Pick<Callable, "id" | "method" | "path">;
 
 function plainEntries(value: unknown): [string, unknown][] {
   return typeof value === "object" && value !== null ? Object.entries(value) : [];
@@ -27,7 +29,7 @@ function scalar(value: unknown): string {
 }
 
 /** The operation's URL: `{name}` segments filled from the path parameters, the query appended (empty values left out). */
-export function operationUrl<O extends AnyOperation>(op: O, input: { params?: unknown; query?: unknown } = {}): string {
+export function operationUrl(op: Target, input: { params?: unknown; query?: unknown } = {}): string {
   const params = new Map(plainEntries(input.params));
   const path = op.path.replace(/\{(\w+)\}/g, (_, name: string) => {
     const value = params.get(name);
@@ -48,7 +50,7 @@ export function operationUrl<O extends AnyOperation>(op: O, input: { params?: un
  * query. Invalidating `[op.id]` refreshes every answer of that operation;
  * `operationKey(op, { params })` those of one resource.
  */
-export function operationKey<O extends AnyOperation>(op: O, input: { params?: unknown; query?: unknown } = {}): readonly unknown[] {
+export function operationKey(op: Target, input: { params?: unknown; query?: unknown } = {}): readonly unknown[] {
   const key: unknown[] = [op.id];
   if (input.params !== undefined || input.query !== undefined) key.push(input.params ?? {});
   if (input.query !== undefined) key.push(input.query);
@@ -86,7 +88,7 @@ function errorFromText(status: number, text: string): AppError {
  * operation's path, and answers with the operation's response type. A failed response
  * becomes the same AppError the server threw, so forms can show its message and field issues.
  */
-export async function apiCall<O extends AnyOperation>(op: O, input: CallInput<O>, init: { signal?: AbortSignal } = {}): Promise<CallResult<O>> {
+export async function apiCall<O extends Callable>(op: O, input: CallInput<O>, init: { signal?: AbortSignal } = {}): Promise<CallResult<O>> {
   const { params, query, body, raw } = input as { params?: unknown; query?: unknown; body?: unknown; raw?: { data: BodyInit; contentType?: string } };
   const headers: Record<string, string> = { accept: "application/json" };
   let payload: BodyInit | undefined;
@@ -99,8 +101,9 @@ export async function apiCall<O extends AnyOperation>(op: O, input: CallInput<O>
   }
   const res = await send(operationUrl(op, { params, query }), { method: op.method, headers, body: payload, signal: init.signal });
   if (!res.ok) throw await failure(res);
-  if (!isJsonResponse(op.response)) {
-    return (op.response.kind === "file" ? await res.blob() : undefined) as CallResult<O>;
+  const kind = kindOf(op);
+  if (kind !== "json") {
+    return (kind === "file" ? await res.blob() : undefined) as CallResult<O>;
   }
   const text = await res.text();
   try {
@@ -112,7 +115,7 @@ export async function apiCall<O extends AnyOperation>(op: O, input: CallInput<O>
 }
 
 /** Query options for `useQuery`/`prefetchQuery`: the key derived from the operation, the typed call as the fetcher. */
-export function apiQuery<O extends AnyOperation>(op: O, input: CallInput<O>) {
+export function apiQuery<O extends Callable>(op: O, input: CallInput<O>) {
   const { params, query } = input as { params?: unknown; query?: unknown };
   return {
     queryKey: operationKey(op, { params, query }),
@@ -147,7 +150,7 @@ export interface UploadProgress {
  * answers streamed line by line), and aborting `signal` cancels the request. Errors are the
  * same AppError as `apiCall` throws; a cancel rejects with an AbortError DOMException.
  */
-export function apiUpload<O extends AnyOperation>(
+export function apiUpload<O extends Callable>(
   op: O,
   input: CallInput<O>,
   { onProgress, onText, signal, accept = "application/json" }: { onProgress?: (p: UploadProgress) => void; onText?: (textSoFar: string) => void; signal?: AbortSignal; accept?: string } = {},
@@ -176,7 +179,7 @@ export function apiUpload<O extends AnyOperation>(
 }
 
 /** `apiUpload` for a JSON answer, typed by the operation. */
-export async function apiUploadJson<O extends AnyOperation>(op: O, input: CallInput<O>, options: { onProgress?: (p: UploadProgress) => void; signal?: AbortSignal } = {}): Promise<CallResult<O>> {
+export async function apiUploadJson<O extends Callable>(op: O, input: CallInput<O>, options: { onProgress?: (p: UploadProgress) => void; signal?: AbortSignal } = {}): Promise<CallResult<O>> {
   const { text } = await apiUpload(op, input, options);
   try {
     // The server built this body from the operation's response schema (the handler's type says so).

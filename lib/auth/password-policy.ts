@@ -1,21 +1,13 @@
-import { z } from "zod";
-
 /**
  * Password rules (OWASP ASVS 4.0.3 V2.1): at least 12 characters, any characters allowed,
  * no composition rules; refused when bcrypt could not hold it whole, when it is one character
  * repeated, or when it is on a list of common and breached passwords shipped with the app
  * (the password list of the `@zxcvbn-ts/language-common` package, checked on the server).
  */
-export const MIN_PASSWORD_CHARS = 12;
-/**
- * bcrypt reads only the first 72 bytes of its input and silently ignores the rest; a longer
- * password would look accepted while only its start counts, so it is refused instead.
- */
-export const MAX_PASSWORD_BYTES = 72;
+import { z } from "zod";
+import { MAX_PASSWORD_BYTES, MIN_PASSWORD_CHARS, utf8Length } from "./password-limits";
 
-export function utf8Length(s: string): number {
-  return new TextEncoder().encode(s).byteLength;
-}
+export { MIN_PASSWORD_CHARS, MAX_PASSWORD_BYTES, utf8Length };
 
 /** The rules every new password meets, usable in forms and on the server. */
 export const newPasswordSchema = z

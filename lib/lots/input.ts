@@ -47,13 +47,4 @@ export const lotInput = z
   });
 export type LotInput = z.infer<typeof lotInput>;
 
-/** CSV header names in file order, and the field each fills. */
-export const LOT_CSV_COLUMNS = [
-  ["lot_code", "lotCode"],
-  ["board_revision", "boardRevision"],
-  ["build_version", "buildVersion"],
-  ["serial_from", "serialFrom"],
-  ["serial_to", "serialTo"],
-  ["produced_on", "producedOn"],
-  ["line", "line"],
-] as const satisfies readonly (readonly [string, keyof LotInput])[];
+export { LOT_CSV_COLUMNS } from "./csv-columns";

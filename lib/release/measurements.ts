@@ -152,7 +152,7 @@ export function soundGateIssues(comparison: readonly MeasurementComparison[], to
   const comparable = comparison.filter((c) => c.status !== "too_close_to_background");
   if (comparable.length === 0) {
     return [
-      `All ${comparison.length} measured points are within ${ISO_3744_MIN_DIFFERENCE_DB} dB of the room's background, so none can be compared with the estimate (ISO 3744 background criterion). Measure in a quieter room, or record a waiver with a reason.`,
+      `All ${comparison.length} measured points are within ${ISO_3744_MIN_DIFFERENCE_DB} dB of the room's background, so none can be compared with the estimate (ISO 3744:2010 §8.2.3 background criterion). Measure in a quieter room, or record a waiver with a reason.`,
     ];
   }
   const off = comparable.filter((c) => c.status === "above_tolerance");

@@ -1,29 +1,8 @@
 import { readIntelHex } from "../engine";
 import { hasMeasurementHeader, parseMeasurementsCsv } from "./measurements";
+import { UPLOAD_KINDS, UPLOAD_LABELS, UPLOAD_MAX_BYTES, PENDING_UPLOAD_HOURS, PENDING_UPLOAD_QUOTA_BYTES, type UploadKind } from "./upload-limits";
 
-export const UPLOAD_KINDS = ["firmware", "lab_report", "measurements"] as const;
-export type UploadKind = (typeof UPLOAD_KINDS)[number];
-
-/** Largest accepted file per kind, bytes. */
-export const UPLOAD_MAX_BYTES: Record<UploadKind, number> = {
-  firmware: 2 * 1024 * 1024,
-  lab_report: 10 * 1024 * 1024,
-  measurements: 512 * 1024,
-};
-
-/**
- * Upload housekeeping policy. An upload that no build refers to is "pending": each person may
- * hold at most `PENDING_UPLOAD_QUOTA_BYTES` of them, and they are removed (row and stored
- * bytes) `PENDING_UPLOAD_HOURS` after they arrived. Files a build refers to are kept.
- */
-export const PENDING_UPLOAD_QUOTA_BYTES = 64 * 1024 * 1024;
-export const PENDING_UPLOAD_HOURS = 24;
-
-export const UPLOAD_LABELS: Record<UploadKind, string> = {
-  firmware: "Firmware image (.bin or Intel HEX .hex)",
-  lab_report: "Lab report (PDF)",
-  measurements: "Measurements (CSV)",
-};
+export { UPLOAD_KINDS, UPLOAD_LABELS, UPLOAD_MAX_BYTES, PENDING_UPLOAD_HOURS, PENDING_UPLOAD_QUOTA_BYTES, type UploadKind };
 
 /**
  * A file name is kept only as a label, never as a path; names that try to be a path or

@@ -95,7 +95,7 @@ describe("the sound gate on realistic lab files", () => {
     expect(await soundLine(b.id)).toMatchObject({
       state: "unmet",
       detail:
-        "All 3 measured points are within 6 dB of the room's background, so none can be compared with the estimate (ISO 3744 background criterion). Measure in a quieter room, or record a waiver with a reason.",
+        "All 3 measured points are within 6 dB of the room's background, so none can be compared with the estimate (ISO 3744:2010 §8.2.3 background criterion). Measure in a quieter room, or record a waiver with a reason.",
     });
   });
 });

@@ -22,7 +22,7 @@ export default async function ComponentsPage({ searchParams }: { searchParams: P
     <>
       <PageHeader title="Components" subtitle="Fan and pump models with the datasheet figures the curve engine uses." />
       <HydrationBoundary state={state}>
-        <ComponentsList canWrite={can(actor.role, "registry:write")} />
+        <ComponentsList canWrite={can(actor.role, "registry:write")} query={query} />
       </HydrationBoundary>
     </>
   );

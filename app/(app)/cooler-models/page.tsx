@@ -30,7 +30,7 @@ export default async function CoolerModelsPage({ searchParams }: { searchParams:
     <>
       <PageHeader title="Cooler models" subtitle="Products: radiator, fans, pump and the controller board they ship with." />
       <HydrationBoundary state={state}>
-        <CoolerModelsList canWrite={canWrite} />
+        <CoolerModelsList canWrite={canWrite} query={query} />
       </HydrationBoundary>
     </>
   );

@@ -28,7 +28,7 @@ export default async function ProductionLotsPage({ searchParams }: { searchParam
       <PageHeader title="Production lots" subtitle="Boards produced with one build: serial ranges, board revision, date and line." />
       <Suspense>
         <HydrationBoundary state={state}>
-          <LotsPage canWrite={can(actor.role, "lot:write")} />
+          <LotsPage canWrite={can(actor.role, "lot:write")} query={query} />
         </HydrationBoundary>
       </Suspense>
     </>

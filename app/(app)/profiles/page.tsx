@@ -19,15 +19,16 @@ export const metadata: Metadata = { title: "Profiles" };
 export default async function ProfilesPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const actor = await requirePageActor("read");
   const db = getDb();
+  const query = queryFromUrl(profilesQuery, listQueryFromUrl(PROFILE_FILTERS, searchParamsOf(await searchParams)));
   const state = await prefetchScreen(actor, [
-    screenQuery(listProfiles, { query: queryFromUrl(profilesQuery, listQueryFromUrl(PROFILE_FILTERS, searchParamsOf(await searchParams))) }, ({ query }) => profilesPage(db, query)),
+    screenQuery(listProfiles, { query }, ({ query: parsed }) => profilesPage(db, parsed)),
     screenQuery(listCoolerModels, { query: ALL_COOLERS }, ({ query }) => coolerModelsPage(db, query)),
   ]);
   return (
     <>
       <PageHeader title="Profiles" subtitle="Pump and fan curve sets per cooler model, with their published versions." />
       <HydrationBoundary state={state}>
-        <ProfilesList canWrite={can(actor.role, "registry:write")} />
+        <ProfilesList canWrite={can(actor.role, "registry:write")} query={query} />
       </HydrationBoundary>
     </>
   );

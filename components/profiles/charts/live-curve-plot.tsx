@@ -3,7 +3,7 @@
 import { memo, useEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from "react";
 import type { CoolingProfile, CurveKind, HardwareContext } from "@/lib/engine";
 import type { PlotRow } from "@/lib/registry/editor-evaluation";
-import { TEMP_STEP_C } from "@/lib/engine";
+import { TEMP_STEP_C } from "@/lib/bank/layout";
 import { snapToStep } from "@/lib/curve-edit";
 import type { CurveEditing } from "../editor/use-curve-editing";
 import { bandPath, dutyToHandleRpm, evenTicks, handleRpmToDuty, linePath, linearScale, placeLimitLabels, type DutyAxis } from "./plot-geometry";

@@ -3,7 +3,8 @@
 import { useQuery } from "@tanstack/react-query";
 import { useMemo } from "react";
 import { apiQuery } from "@/lib/api/client";
-import { ALL_COMPONENTS, ALL_COOLERS, listComponents, listCoolerModels } from "@/lib/api/operations/registry";
+import { listComponents, listCoolerModels } from "@/lib/api/endpoints";
+import { ALL_COMPONENTS, ALL_COOLERS } from "@/lib/api/limits";
 import type { ProfileDetailView } from "@/lib/api/operations/profile-schemas";
 import type { ComponentFields, CoolerFields } from "@/lib/registry/hardware-context";
 import { Select } from "@/components/ui/field";

@@ -3,8 +3,8 @@
 import { useRef, useState } from "react";
 import { apiUploadJson } from "@/lib/api/client";
 import { AppError } from "@/lib/api/errors";
-import { importDraft } from "@/lib/api/operations/profiles";
-import { MAX_PROFILE_BYTES } from "@/lib/api/operations/profile-schemas";
+import { importDraft } from "@/lib/api/endpoints";
+import { MAX_PROFILE_BYTES } from "@/lib/api/limits";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { buttonClass } from "@/components/ui/button";
 import { UploadProgressBar } from "@/components/ui/upload-progress";

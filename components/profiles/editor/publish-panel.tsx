@@ -1,23 +1,23 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { hex32 } from "@/lib/hex/address";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
 import { useForm } from "react-hook-form";
-import type { z } from "zod";
 import { apiCall, operationKey } from "@/lib/api/client";
-import { publishBody } from "@/lib/api/operations/profile-schemas";
-import { getProfile, publishVersion } from "@/lib/api/operations/profiles";
+import { getProfile, publishVersion } from "@/lib/api/endpoints";
+import type { PublishBody } from "@/lib/api/operations/profile-schemas";
 import type { VersionSuggestion } from "@/lib/engine";
 import { Button } from "@/components/ui/button";
+import { lazyZodResolver } from "@/components/ui/lazy-resolver";
 import { Field, Input, Textarea, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 
-const formSchema = publishBody.omit({ text: true });
-type PublishForm = z.infer<typeof formSchema>;
+/** The publish body without the text (the editor's); its schema loads when the form first validates. */
+const resolver = lazyZodResolver(() => import("@/lib/api/operations/profile-schemas").then((m) => m.publishBody.omit({ text: true })));
+type PublishForm = Omit<PublishBody, "text">;
 
 /** Publish the editor's text as a new immutable version; the server encodes and checks it again. */
 export function PublishPanel({
@@ -39,7 +39,7 @@ export function PublishPanel({
 }) {
   const qc = useQueryClient();
   const suggested = suggestion?.version ?? "1.0.0";
-  const form = useForm<PublishForm>({ resolver: zodResolver(formSchema), defaultValues: { version: suggested, changelog: "", boardRange: defaultRange } });
+  const form = useForm<PublishForm>({ resolver, defaultValues: { version: suggested, changelog: "", boardRange: defaultRange } });
   // Follow the suggestion until the engineer types their own number.
   const [followSuggestion, setFollowSuggestion] = useState(true);
   useEffect(() => {

@@ -3,7 +3,7 @@
 import { useCallback, useEffect, useRef, useState } from "react";
 import { apiCall } from "@/lib/api/client";
 import { AppError } from "@/lib/api/errors";
-import { getProfile, saveDraft } from "@/lib/api/operations/profiles";
+import { getProfile, saveDraft } from "@/lib/api/endpoints";
 
 export type SaveState =
   | { kind: "idle" }

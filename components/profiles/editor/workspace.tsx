@@ -5,7 +5,7 @@ import dynamic from "next/dynamic";
 import Link from "next/link";
 import { memo, useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
 import { apiQuery } from "@/lib/api/client";
-import { getProfile, getVersion } from "@/lib/api/operations/profiles";
+import { getProfile, getVersion } from "@/lib/api/endpoints";
 import type { ProfileDetailView } from "@/lib/api/operations/profile-schemas";
 import { operatingPoint, suggestNextVersion, type CoolingProfile } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";

@@ -3,6 +3,7 @@ import { defineOperation } from "../operation";
 import { ROLES } from "@/lib/auth/roles";
 import { newPasswordSchema } from "@/lib/auth/password-policy";
 import { timestamp } from "./timestamp";
+import { MAX_TOKEN_DAYS, MAX_LIVE_TOKENS } from "../limits";
 
 export const idParams = z.strictObject({ id: z.uuid("Not a valid id.") });
 
@@ -64,10 +65,7 @@ export const listTokens = defineOperation({
   response: z.object({ items: z.array(tokenSchema) }),
 });
 
-/** Token policy: a token lives at most this many days, then a new one is made. */
-export const MAX_TOKEN_DAYS = 90;
-/** Token policy: at most this many live (not revoked, not expired) tokens per user. */
-export const MAX_LIVE_TOKENS = 10;
+export { MAX_TOKEN_DAYS, MAX_LIVE_TOKENS };
 
 export const createTokenBody = z.strictObject({
   name: z.string().trim().min(1, "Name the token, e.g. the station or pipeline that uses it.").max(80),

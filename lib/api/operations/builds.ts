@@ -96,7 +96,7 @@ const measurementComparisonView = z.object({
   estimatedDbA: z.number(),
   /** Measured minus background, dB; null without a background level. */
   backgroundDifferenceDb: z.number().nullable(),
-  /** K1 subtracted from the measured level (ISO 3744 background correction), dB; null when not comparable. */
+  /** K1 subtracted from the measured level (ISO 3744:2010 §8.2.3 background correction), dB; null when not comparable. */
   correctionDb: z.number().nullable(),
   /** The cooler's own level after background correction; null when too close to background. */
   correctedDbA: z.number().nullable(),

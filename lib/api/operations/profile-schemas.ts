@@ -5,9 +5,9 @@ import { MAX_DEPTH } from "@/lib/validation/hostile";
 import { jsonNestingDepth } from "@/lib/validation/text";
 import type { CoolingProfile } from "@/lib/engine";
 import type { ProfileChange } from "@/lib/support/curve-diff";
+import { MAX_PROFILE_BYTES } from "../limits";
 
-/** Largest profile document accepted anywhere (draft, import, publish), bytes. */
-export const MAX_PROFILE_BYTES = 256 * 1024;
+export { MAX_PROFILE_BYTES };
 
 export const createProfileBody = z.strictObject({
   coolerModelId: z.uuid("Pick a cooler model."),

@@ -14,6 +14,7 @@ import {
   pageOf,
 } from "./registry-schemas";
 import { compatibilityView } from "./profile-schemas";
+import { ALL_COMPONENTS, ALL_COOLERS } from "../limits";
 
 export const componentSorts = ["name", "kind", "maxRpm", "minDutyPct", "refSoundDbA"] as const;
 export const componentsQuery = listQuery(componentSorts).extend({ kind: z.enum(["fan", "pump"]).optional() });
@@ -54,15 +55,12 @@ export const updateComponent = defineOperation({
   response: z.object({ component: componentView }),
 });
 
-/** The first hundred fans and pumps: what pickers offer. */
-export const ALL_COMPONENTS = { pageSize: 100, sort: "name" } as const satisfies z.input<typeof componentsQuery>;
+export { ALL_COMPONENTS, ALL_COOLERS };
 
 export const coolerSorts = ["name", "radiatorMm", "fanCount"] as const;
 export const coolerModelsQuery = listQuery(coolerSorts);
 export type CoolerModelsQuery = z.infer<typeof coolerModelsQuery>;
 
-/** The first hundred cooler models by name: what pickers offer. */
-export const ALL_COOLERS = { pageSize: 100, sort: "name" } as const satisfies z.input<typeof coolerModelsQuery>;
 
 export const listCoolerModels = defineOperation({
   id: "listCoolerModels",

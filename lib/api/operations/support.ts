@@ -7,6 +7,7 @@ import { idParams } from "./account";
 import { timestamp } from "./timestamp";
 import { coolingProfileDocument, profileChangeView } from "./profile-schemas";
 import { componentFieldsView, coolerFieldsView, revisionFieldsView } from "./registry-schemas";
+import { MAX_LOTS_CSV_BYTES, MAX_DUMP_BYTES } from "../limits";
 
 export const lotBody = lotInput;
 
@@ -37,6 +38,7 @@ export const lotsQuery = z.strictObject({
   page: z.coerce.number().int().min(1).max(100000).default(1),
   pageSize: z.coerce.number().int().min(1).max(200).default(50),
 });
+export type LotsQuery = z.infer<typeof lotsQuery>;
 
 export const listLots = defineOperation({
   id: "listLots",
@@ -84,8 +86,7 @@ export const getLotOptions = defineOperation({
   response: lotOptionsView,
 });
 
-/** Largest lots CSV: 100,000 lots of about 80 bytes a row, with room for longer codes and lines. */
-export const MAX_LOTS_CSV_BYTES = 16 * 1024 * 1024;
+export { MAX_LOTS_CSV_BYTES };
 
 export const importQuery = z.strictObject({ dryRun: z.enum(["true", "false"]).default("true") });
 
@@ -174,7 +175,7 @@ export const listRecentLookups = defineOperation({
   response: recentLookupsView,
 });
 
-export const MAX_DUMP_BYTES = 256 * 1024;
+export { MAX_DUMP_BYTES };
 
 /** The dump report (lib/bank/dump-report.ts): the command line and this operation give the same one. */
 export type { DumpReport as DumpIdentifyResult, SlotReport as DumpSlotView } from "@/lib/engine";

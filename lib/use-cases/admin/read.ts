@@ -4,6 +4,8 @@ import { listAuditEvents } from "@/db/audit";
 import { describeAuditEvents } from "@/db/audit-subjects";
 import { auditRangeBound } from "@/lib/audit/range";
 import { listUsers } from "@/db/users";
+import { listMailbox } from "@/db/mail";
+import { messageBodyText } from "@/lib/mail/raw-message";
 import type { AuditQuery } from "@/lib/api/operations/admin";
 
 /** One page of audit events, newest first; one row more is read to know whether older ones follow. Read by the API and the audit page. */
@@ -26,4 +28,15 @@ export async function auditPage(db: Executor, query: AuditQuery) {
 /** Every account with its role and state (no password hashes). */
 export async function usersList(db: Executor) {
   return { items: await listUsers(db) };
+}
+
+const MAILBOX_PAGE = 50;
+
+/** One page of the local mailbox (what the app sent, as the stand-in for mail received it), newest first, each body read out of its raw message. */
+export async function mailboxPage(db: Executor, { page }: { page: number }) {
+  const rows = await listMailbox(db, { limit: MAILBOX_PAGE + 1, offset: (page - 1) * MAILBOX_PAGE });
+  return {
+    items: rows.slice(0, MAILBOX_PAGE).map((r) => ({ id: r.id, fromAddress: r.fromAddress, toAddresses: r.toAddresses, subject: r.subject, body: messageBodyText(r.raw), receivedAt: r.receivedAt })),
+    hasMore: rows.length > MAILBOX_PAGE,
+  };
 }

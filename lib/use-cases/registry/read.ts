@@ -5,6 +5,7 @@ import * as boards from "@/db/boards";
 import { listComponents } from "@/db/components";
 import { listCoolerModels } from "@/db/cooler-models";
 import { listVersionsForBoardModel } from "@/db/profile-versions";
+import { listBankSigningKeys } from "@/db/bank-signatures";
 import { AppError } from "@/lib/api/errors";
 import type { componentsQuery, coolerModelsQuery } from "@/lib/api/operations/registry";
 import { compatibilityCells } from "@/lib/registry/version-image";
@@ -36,4 +37,10 @@ export async function boardRevisionDetail(db: Executor, { id }: { id: string }) 
     ...found,
     compatibility: { revisions: siblings, rows: versions.map((v) => ({ ...v, cells: compatibilityCells(v, siblings) })) },
   };
+}
+
+/** The public keys a board model's banks are signed with, with their validity: what a factory verifies a signature against. */
+export async function boardSigningKeys(db: Executor, { boardModelId }: { boardModelId: string }) {
+  const keys = await listBankSigningKeys(db, { boardModelId });
+  return { keys: keys.map((k) => ({ keyId: k.keyId, publicKeyPem: k.publicKeyPem, validFrom: k.validFrom.toISOString(), validUntil: k.validUntil?.toISOString() ?? null })) };
 }

@@ -1,8 +1,9 @@
 import "server-only";
 import type { Database } from "@/db/client";
-import { findLookupBySerial, type LookupRow } from "@/db/lookup";
+import { findLookupBySerial, listRecentLookups, recordLookup, type LookupRow } from "@/db/lookup";
+import { AppError } from "@/lib/api/errors";
 import type { LookupResult, LookupSlot } from "@/lib/api/operations/support";
-import { formatSerial, type Serial } from "@/lib/serials/serial";
+import { formatSerial, parseSerial, type Serial } from "@/lib/serials/serial";
 import { compareVersions, satisfiesRange } from "@/lib/versioning/semver-helpers";
 import { diffBuildProfiles, type SlotProfile } from "@/lib/support/curve-diff";
 import { pumpPulsesPerRev } from "@/lib/support/pump-pulses";
@@ -76,4 +77,27 @@ export async function lookupSerial(db: Database, serial: Serial): Promise<Lookup
     pump: { name: pumpRow?.name ?? null, pulsesPerRev: pumpPulsesPerRev(pumpRow?.tachPulsesPerRev), source: pumpRow ? "registry" : "default" },
     newerBuilds,
   };
+}
+
+/**
+ * A serial as a person or a factory script typed it: parsed (400 when it is not PREFIX-NUMBER),
+ * looked up on `read` (lots and published versions never change and a stage change may show a
+ * moment late, so a replica may answer; docs/scale.md), and, for a person in the app, kept in
+ * their recent lookups on `write`. 404 when no production lot covers it.
+ */
+export async function lookupSerialText(dbs: { read: Database; write: Database }, actor: { userId: string; via: "session" | "token" }, text: string): Promise<LookupResult> {
+  const parsed = parseSerial(text);
+  if (!parsed.ok) throw new AppError("bad_request", parsed.message);
+  const result = await lookupSerial(dbs.read, parsed.serial);
+  const serial = formatSerial(parsed.serial.prefix, parsed.serial.number);
+  // The lookup page's history is a person's; factory and script calls with a token stay off it.
+  if (actor.via === "session") await recordLookup(dbs.write, { userId: actor.userId, serial, found: Boolean(result) });
+  if (!result) throw new AppError("not_found", `Serial ${serial} was not found: no production lot covers it. Check the number on the board's label.`);
+  return result;
+}
+
+/** A person's last ten lookups, newest first. */
+export async function recentLookups(db: Database, { userId }: { userId: string }) {
+  const rows = await listRecentLookups(db, { userId, limit: 10 });
+  return { items: rows.map((r) => ({ serial: r.serial, found: r.found, createdAt: r.createdAt.toISOString() })) };
 }

@@ -40,5 +40,5 @@ export async function shippedCsv(db: Executor, { buildId }: { buildId: string })
     ...lots.map((l) => [l.lotCode, l.revision, build.version, formatSerial(build.serialPrefix, l.serialFrom), formatSerial(build.serialPrefix, l.serialTo), String(l.serialTo - l.serialFrom + 1), l.producedOn, l.line]),
   ]);
   // A list of people's boards: not kept by caches on the way.
-  return { bytes: csv, contentType: "text/csv; charset=utf-8", fileName: `shipped-${build.boardModelName.replace(/[^A-Za-z0-9]+/g, "-")}-${build.version}.csv`, noStore: true };
+  return { bytes: csv, contentType: "text/csv; charset=utf-8", fileName: `shipped-${build.boardModelName.replace(/[^A-Za-z0-9]+/g, "-")}-${build.version}.csv`, cacheControl: "no-store" };
 }

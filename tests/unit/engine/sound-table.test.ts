@@ -1,7 +1,9 @@
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
   componentLevelDbA,
   coolerNoise,
+  coolerTotalDbA1m,
   EngineInputError,
   evaluateCurves,
   listenerDistanceProblem,
@@ -71,6 +73,29 @@ describe("measured sound table: linear in dB over log RPM, clamped at its ends",
     const rows = evaluateCurves(quietProfile(), hw, { fromC: 45, toC: 45, distanceM: 2 });
     expect(rows[0]!.soundDbA1m).toBeCloseTo(34.77, 2);
     expect(rows[0]!.soundDbAAtDistance).toBeCloseTo(28.75, 2);
+  });
+});
+
+describe("sound table in the power-domain sum", () => {
+  it("property: the plotted total (one power per segment) equals the dB-domain sum for tables of up to 64 points", () => {
+    const tableArb = fc
+      .array(fc.record({ dRpm: fc.integer({ min: 1, max: 400 }), soundDbA: fc.double({ min: 0, max: 90, noNaN: true }) }), { minLength: 2, maxLength: 64, size: "max" })
+      .map((steps) => {
+        let rpm = 100;
+        return { distanceM: 1.5, points: steps.map((s) => ({ rpm: (rpm += s.dRpm), soundDbA: s.soundDbA })) };
+      });
+    const lengths: number[] = [];
+    fc.assert(
+      fc.property(tableArb, tableArb, fc.double({ min: 0, max: 30_000, noNaN: true }), fc.double({ min: 1, max: 30_000, noNaN: true }), (fanTable, pumpTable, fanRpm, pumpRpm) => {
+        lengths.push(fanTable.points.length);
+        const base = exampleHardware();
+        const hw: HardwareContext = { ...base, fan: { ...base.fan, soundTable: fanTable }, pump: { ...base.pump, soundTable: pumpTable } };
+        expect(coolerTotalDbA1m(hw, fanRpm, pumpRpm)).toBeCloseTo(coolerNoise(hw, fanRpm, pumpRpm).totalDbA1m, 9);
+      }),
+      { numRuns: 200 },
+    );
+    // fast-check's default size keeps arrays near 10 elements; size "max" must reach long tables.
+    expect(Math.max(...lengths)).toBeGreaterThan(40);
   });
 });
 

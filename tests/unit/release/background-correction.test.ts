@@ -90,7 +90,7 @@ describe("the lab CSV scenarios of the sound gate", () => {
     const rows = read(csv(["25,1400,600,25.0,22", "30,1600,900,26.5,22", "35,1800,1100,27.5,22"]));
     expect(rows.every((r) => r.status === "too_close_to_background")).toBe(true);
     expect(soundGateIssues(rows, 3)).toEqual([
-      "All 3 measured points are within 6 dB of the room's background, so none can be compared with the estimate (ISO 3744 background criterion). Measure in a quieter room, or record a waiver with a reason.",
+      "All 3 measured points are within 6 dB of the room's background, so none can be compared with the estimate (ISO 3744:2010 §8.2.3 background criterion). Measure in a quieter room, or record a waiver with a reason.",
     ]);
   });
 

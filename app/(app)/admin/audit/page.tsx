@@ -23,7 +23,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
       <PageHeader title="Audit log" subtitle="Every change of state: who, what, when, before and after." />
       <Suspense>
         <HydrationBoundary state={state}>
-          <AuditLog />
+          <AuditLog query={query} />
         </HydrationBoundary>
       </Suspense>
     </>

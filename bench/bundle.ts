@@ -1,0 +1,184 @@
+/**
+ * First-load JS per page route: `npm run bench:bundle`. Builds the app with `next build --analyze`
+ * into .next-bundle (or reuses the build there; BENCH_REBUILD=1 builds again, NEXT_DIST_DIR=.next-test
+ * reads another build), reads the build's diagnostics/route-bundle-stats.json (the chunks every
+ * page route loads before anything on demand), gzips each chunk at level 9 and sums them per route,
+ * and judges each route against its budget. For routes over budget it lists what their first load
+ * is made of, from the analyzer's per-source sizes (`next analyze export`). Writes its section of
+ * docs/benchmarks.md.
+ */
+import { spawnSync } from "node:child_process";
+import { existsSync, readFileSync, writeFileSync } from "node:fs";
+import path from "node:path";
+import { gzipSync } from "node:zlib";
+
+const root = path.resolve(__dirname, "..");
+const distDir = process.env.NEXT_DIST_DIR ?? ".next-bundle";
+const KiB = 1024;
+
+/** Pages without the editor or plots. */
+const PLAIN_BUDGET_KIB = 180;
+/** Pages with plots or the editor, before the heavy parts load on demand. */
+const HEAVY_BUDGET_KIB = 200;
+/** Routes that show plots or the editor, and what those are. */
+const HEAVY_ROUTES: Record<string, string> = {
+  "/profiles/[id]": "curve editor (Monaco), live plot, sweep plot",
+  "/profiles/[id]/compare": "compare plot",
+  "/builds/[id]": "measured-against-estimated sound plot",
+  "/lookup": "slot curve plots of a looked-up board",
+};
+/** How many sources to list per over-budget route. */
+const TOP_SOURCES = 8;
+
+interface RouteStats {
+  route: string;
+  firstLoadUncompressedJsBytes: number;
+  firstLoadChunkPaths: string[];
+}
+
+interface Row {
+  route: string;
+  rawKiB: number;
+  gzipKiB: number;
+  budgetKiB: number;
+  heavy: string | undefined;
+  chunks: string[];
+}
+
+async function build() {
+  const prep = (await import(path.join(root, "scripts/prepare.mjs"))) as { appEnv: (o: { database: string; port: number }) => Promise<NodeJS.ProcessEnv> };
+  const env = await prep.appEnv({ database: "loopkeeper", port: 3000 });
+  console.log(`Building into ${distDir} with the analyzer…`);
+  const r = spawnSync("npx", ["next", "build", "--analyze"], { cwd: root, stdio: "inherit", env: { ...env, NEXT_DIST_DIR: distDir, NODE_ENV: "production", LOOPKEEPER_LOG: "silent" } });
+  if (r.status !== 0) throw new Error(`next build failed (exit ${r.status ?? r.signal})`);
+}
+
+const gzipCache = new Map<string, number>();
+function gzipBytes(file: string): number {
+  let n = gzipCache.get(file);
+  if (n === undefined) {
+    n = gzipSync(readFileSync(path.join(root, file)), { level: 9 }).length;
+    gzipCache.set(file, n);
+  }
+  return n;
+}
+
+function routeRows(): Row[] {
+  const file = path.join(root, distDir, "diagnostics", "route-bundle-stats.json");
+  const stats = JSON.parse(readFileSync(file, "utf8")) as RouteStats[];
+  return stats
+    .filter((s) => !s.route.startsWith("/api") && !s.route.startsWith("/_"))
+    .map((s) => {
+      const chunks = s.firstLoadChunkPaths.filter((p) => p.endsWith(".js"));
+      const heavy = HEAVY_ROUTES[s.route];
+      return {
+        route: s.route,
+        rawKiB: s.firstLoadUncompressedJsBytes / KiB,
+        gzipKiB: chunks.reduce((sum, p) => sum + gzipBytes(p), 0) / KiB,
+        budgetKiB: heavy ? HEAVY_BUDGET_KIB : PLAIN_BUDGET_KIB,
+        heavy,
+        chunks,
+      };
+    })
+    .sort((a, b) => a.route.localeCompare(b.route));
+}
+
+interface Part {
+  type: "part";
+  filename: string;
+  source_path: string;
+  size: number;
+  compressed_size: number;
+}
+
+/** Where a source comes from: its npm package, or the project folder (components/registry, lib/api/operations…). */
+function origin(sourcePath: string): string {
+  const p = sourcePath.replace(/^\[project\]\//, "").replace(/\\/g, "/");
+  const nm = p.lastIndexOf("node_modules/");
+  if (nm >= 0) {
+    const rest = p.slice(nm + "node_modules/".length).split("/");
+    return rest[0]!.startsWith("@") ? `${rest[0]}/${rest[1]}` : rest[0]!;
+  }
+  const dirs = p.split("/").slice(0, -1);
+  return dirs.length ? `${dirs.join("/")}/` : p;
+}
+
+/** The analyzer's parts of a route's first-load chunks, summed by origin; null when the build has no analyzer data. */
+function firstLoadOrigins(row: Row): { origin: string; rawKiB: number; compressedKiB: number }[] | null {
+  if (!existsSync(path.join(root, distDir, "diagnostics", "analyze", "history", "history.json"))) return null;
+  const r = spawnSync("npx", ["next", "analyze", "export", "--dist-dir", distDir, "--route", row.route], { cwd: root, encoding: "utf8", maxBuffer: 512 * 1024 * 1024 });
+  if (r.status !== 0) {
+    console.warn(`analyzer export for ${row.route} failed: ${r.stderr.slice(0, 500)}`);
+    return null;
+  }
+  const chunkNames = new Set(row.chunks.map((c) => path.basename(c)));
+  const sums = new Map<string, { raw: number; compressed: number }>();
+  for (const line of r.stdout.split("\n")) {
+    if (!line.startsWith('{"type":"part"')) continue;
+    const part = JSON.parse(line) as Part;
+    if (!chunkNames.has(path.basename(part.filename))) continue;
+    const key = origin(part.source_path);
+    const s = sums.get(key) ?? { raw: 0, compressed: 0 };
+    s.raw += part.size;
+    s.compressed += part.compressed_size;
+    sums.set(key, s);
+  }
+  return [...sums.entries()]
+    .map(([o, s]) => ({ origin: o, rawKiB: s.raw / KiB, compressedKiB: s.compressed / KiB }))
+    .sort((a, b) => b.compressedKiB - a.compressedKiB);
+}
+
+async function main() {
+  if (!existsSync(path.join(root, distDir, "BUILD_ID")) || process.env.BENCH_REBUILD === "1") await build();
+  const rows = routeRows();
+  const over = rows.filter((r) => r.gzipKiB > r.budgetKiB);
+  const breakdowns = over.map((r) => ({ row: r, origins: firstLoadOrigins(r) }));
+  const commit = spawnSync("git", ["rev-parse", "--short", "HEAD"], { cwd: root, encoding: "utf8" }).stdout.trim();
+  const buildId = readFileSync(path.join(root, distDir, "BUILD_ID"), "utf8").trim();
+
+  const table = rows.map((r) => {
+    const verdict = r.gzipKiB <= r.budgetKiB ? "met" : `over by ${(r.gzipKiB - r.budgetKiB).toFixed(1)}`;
+    const kind = r.heavy ? `${r.budgetKiB} (${r.heavy} load on demand)` : `${r.budgetKiB}`;
+    return `| ${r.route} | ${r.rawKiB.toFixed(0)} | ${r.gzipKiB.toFixed(1)} | ${kind} | ${verdict} |`;
+  });
+  const detail: string[] = [];
+  for (const { row, origins } of breakdowns) {
+    detail.push("", `#### ${row.route}: ${row.gzipKiB.toFixed(1)} KiB gzip, budget ${row.budgetKiB}`, "");
+    if (!origins) {
+      detail.push("No analyzer data in this build (build it with `BENCH_REBUILD=1 npm run bench:bundle`).");
+      continue;
+    }
+    detail.push("| from | raw KiB | compressed KiB (analyzer) |", "|---|---:|---:|");
+    for (const o of origins.slice(0, TOP_SOURCES)) detail.push(`| ${o.origin} | ${o.rawKiB.toFixed(1)} | ${o.compressedKiB.toFixed(1)} |`);
+  }
+  const met = rows.length - over.length;
+  const section = [
+    "<!-- bench:bundle:start -->",
+    "## First-load JS per page route",
+    "",
+    `Command: \`npm run bench:bundle\` (bench/bundle.ts). Production build \`${distDir}\` (build id ${buildId}, commit ${commit}), made by \`next build --analyze\` unless an existing build was reused. Run ${new Date().toISOString().slice(0, 16).replace("T", " ")} UTC.`,
+    "",
+    "First load is what a page route loads before anything on demand: the chunks the build lists for the route in `diagnostics/route-bundle-stats.json` (the route's page, layouts, loading and error screens, and the framework's shared chunks). raw is their bytes on disk; gzip is each chunk gzipped at level 9, summed. Code behind `next/dynamic` or `import()` (Monaco, recharts, the zxcvbn word lists, form schemas, next-auth's client) is not in it. Sizes do not depend on machine load.",
+    "",
+    `Budgets: ${PLAIN_BUDGET_KIB} KiB gzip for pages without the editor or plots; ${HEAVY_BUDGET_KIB} KiB for pages with plots or the editor, which load those parts on demand. ${met} of ${rows.length} routes met.`,
+    "",
+    "| route | raw KiB | gzip KiB | budget KiB gzip | result |",
+    "|---|---:|---:|---|---|",
+    ...table,
+    ...(over.length
+      ? ["", `### What the routes over budget load first`, "", "Sources in the route's first-load chunks, summed by npm package or project folder, largest first (the analyzer's sizes: raw is the source's share of the chunk, compressed the analyzer's own estimate of it)."]
+      : []),
+    ...detail,
+    "<!-- bench:bundle:end -->",
+  ].join("\n");
+  const docFile = path.join(root, "docs/benchmarks.md");
+  const existing = existsSync(docFile) ? readFileSync(docFile, "utf8") : "# Benchmarks\n";
+  const re = /<!-- bench:bundle:start -->[\s\S]*?<!-- bench:bundle:end -->/;
+  writeFileSync(docFile, re.test(existing) ? existing.replace(re, section) : `${existing.trimEnd()}\n\n${section}\n`);
+  console.log(section);
+}
+
+main().catch((err: unknown) => {
+  console.error(err);
+  process.exit(1);
+});
