@@ -1,12 +1,31 @@
 "use client";
 
 import dynamic from "next/dynamic";
-import { useMemo } from "react";
+import { memo, useEffect, useMemo, useState } from "react";
 import { listenerDistanceProblem, operatingPoint, type CoolingProfile, type HardwareContext } from "@/lib/engine";
 import { safeLoadSweep } from "@/lib/registry/editor-evaluation";
 import { Field, Input } from "@/components/ui/field";
 
-const SweepChart = dynamic(() => import("../charts/sweep-chart"), { ssr: false, loading: () => <div className="h-60 animate-pulse rounded bg-ink-100" /> });
+// memo: the chart (recharts, the heaviest thing on the page to redraw) redraws only for new rows.
+const SweepChart = memo(dynamic(() => import("../charts/sweep-chart"), { ssr: false, loading: () => <div className="h-60 animate-pulse rounded bg-ink-100" /> }));
+
+/** How long the curve must rest before the load sweep chart redraws, ms. */
+const SWEEP_SETTLE_MS = 250;
+
+/**
+ * `value` once it has stayed the same for `ms`: the load sweep chart catches up when a drag or
+ * typing pauses, while the settled point (the numbers above it, and the mark on the live plot)
+ * follows every step.
+ */
+function useSettled<T>(value: T, ms: number): T {
+  const [settled, setSettled] = useState(value);
+  useEffect(() => {
+    if (Object.is(settled, value)) return;
+    const timer = setTimeout(() => setSettled(value), ms);
+    return () => clearTimeout(timer);
+  }, [value, settled, ms]);
+  return settled;
+}
 
 const fmt = (n: number, digits = 1) => n.toFixed(digits);
 
@@ -49,6 +68,7 @@ export function OperatingPanel({ profile, hw, inputs, onInputs }: { profile: Coo
     () => (ambientError ? [] : safeLoadSweep(profile, hw, ambient).map((p) => ({ heatLoadW: p.heatLoadW, liquidTempC: Math.round(p.liquidTempC * 10) / 10, soundDbA: Math.round(p.noise.totalDbA1m * 10) / 10 }))),
     [profile, hw, ambient, ambientError],
   );
+  const shownSweep = useSettled(sweep, SWEEP_SETTLE_MS);
   return (
     <div className="space-y-3">
       <div className="grid grid-cols-3 gap-3">
@@ -75,7 +95,7 @@ export function OperatingPanel({ profile, hw, inputs, onInputs }: { profile: Coo
           <div><dt className="text-ink-600">Below critical?</dt><dd>{point.holdsBelowCritical ? "yes" : "no — the curve cannot hold this load"}</dd></div>
         </dl>
       )}
-      {sweep.length > 0 && <SweepChart rows={sweep} />}
+      {shownSweep.length > 0 && <SweepChart rows={shownSweep} />}
     </div>
   );
 }
