@@ -26,7 +26,7 @@ export class AccountPage extends Screen {
 
   /** What the copy button said it did. */
   get copyStatus(): Locator {
-    return this.page.getByRole("status").filter({ hasText: /clipboard|copying/ });
+    return this.page.getByRole("status").filter({ hasText: /^(Copied to the clipboard\.|The browser did not allow copying)/ });
   }
 
   get tokens(): Locator {
