@@ -24,10 +24,12 @@ function fmt(iso: string | null): string {
   return iso ? formatUtc(iso) : "—";
 }
 
-/** Whole days until an expiry, as people say it. */
+/** Days until an expiry, as people say it: a token made for 30 days expires "in 30 days", not 29 and some hours. */
 function daysLeft(iso: string): string {
-  const days = Math.floor((new Date(iso).getTime() - Date.now()) / 86_400_000);
-  return days >= 1 ? `in ${days} day${days === 1 ? "" : "s"}` : "within a day";
+  const left = (new Date(iso).getTime() - Date.now()) / 86_400_000;
+  if (left < 1) return "within a day";
+  const days = Math.round(left);
+  return `in ${days} day${days === 1 ? "" : "s"}`;
 }
 
 function tokenState(t: TokenView): { label: string; tone: "ok" | "neutral" | "fault" } {

@@ -112,7 +112,7 @@ export function LotImport() {
       </div>
       {error && <div className="mt-3"><ErrorNotice error={error} /></div>}
       {r && r.issues.length > 0 && (
-        <div className="mt-3 space-y-2">
+        <div className="mt-3 space-y-2" data-testid="import-outcome">
           <Notice tone="fault" role="alert" title={`${file?.name ?? "The file"}: ${r.issues.length.toLocaleString("en")} problem(s); nothing was imported`}>
             Fix these rows and preview again.{r.issues.length > SHOWN_ISSUES && ` The first ${SHOWN_ISSUES} are listed.`}
           </Notice>
@@ -128,8 +128,8 @@ export function LotImport() {
           </Table>
         </div>
       )}
-      {r && r.issues.length === 0 && r.dryRun && <div className="mt-3"><Notice tone="ok" role="status">All {r.checked.toLocaleString("en")} row(s) are valid. Nothing is recorded until you press Import.</Notice></div>}
-      {r && r.issues.length === 0 && !r.dryRun && <div className="mt-3"><Notice tone="ok" role="status">Imported {r.committed.toLocaleString("en")} lot(s).</Notice></div>}
+      {r && r.issues.length === 0 && r.dryRun && <div className="mt-3" data-testid="import-outcome"><Notice tone="ok" role="status">All {r.checked.toLocaleString("en")} row(s) are valid. Nothing is recorded until you press Import.</Notice></div>}
+      {r && r.issues.length === 0 && !r.dryRun && <div className="mt-3" data-testid="import-outcome"><Notice tone="ok" role="status">Imported {r.committed.toLocaleString("en")} lot(s).</Notice></div>}
     </Panel>
   );
 }

@@ -66,15 +66,26 @@ function field(obj: unknown, key: string): unknown {
 const word = (v: unknown): string => (typeof v === "string" ? v : "");
 
 /**
+ * A thing that is gone, named from the event's own copy of it where it keeps a name people
+ * use (a deleted lot's code), rather than an id prefix.
+ */
+function goneLabel(e: { entityType: string; before: unknown; after: unknown }): string | null {
+  const kept = (key: string) => word(field(e.after, key)) || word(field(e.before, key));
+  if (e.entityType === "production_lot" && kept("lotCode")) return `lot ${kept("lotCode")}`;
+  return null;
+}
+
+/**
  * One sentence for an event: "<who> <did what to> <thing>". `subject` names the thing; when
- * it is gone (deleted or unknown), the entity type and an id prefix stand in.
+ * it is gone (deleted or unknown), the name the event kept, or else the entity type and an id
+ * prefix, stand in.
  */
 export function auditSentence(
   who: string,
   e: { action: string; entityType: string; entityId: string; before: unknown; after: unknown },
   subject: AuditSubject | null,
 ): string {
-  const what = subject?.label ?? `${e.entityType.replace(/_/g, " ")} ${e.entityId.slice(0, 8)}`;
+  const what = subject?.label ?? goneLabel(e) ?? `${e.entityType.replace(/_/g, " ")} ${e.entityId.slice(0, 8)}`;
   const stageCode = word(field(e.after, "stage"));
   const stage = STAGE_ORDER.find((s) => s === stageCode);
   const verb = ((): string => {

@@ -1,5 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { ACCOUNTS, signInPage } from "./support/accounts";
+import { bulkLotsCsv, countLotsTagged } from "./support/lots-csv";
+import { LotsPage } from "./pages/support";
 
 test.describe("a draft that stopped being valid JSON", () => {
   test("reopens showing the syntax problem at its line and column, and the last plots greyed with a note", async ({ page }) => {
@@ -132,27 +134,10 @@ test.describe("links and lists", () => {
 });
 
 test.describe("uploads", () => {
-  const HEADER = "lot_code,board_revision,build_version,serial_from,serial_to,produced_on,line";
-  const serial = (n: number) => `TC1-${String(n).padStart(8, "0")}`;
-  /** One-board lots from `base` on, all valid unless `badRow` (a 1-based data row) gets a last serial below its first. */
-  function bulkCsv(tag: string, base: number, rows: number, badRow?: number): string {
-    const lines = [HEADER];
-    for (let i = 0; i < rows; i++) {
-      const n = base + i;
-      lines.push(`${tag}-${i},1.1.0,3.1.0,${serial(n)},${serial(i + 1 === badRow ? n - 1 : n)},2025-06-02,Line C`);
-    }
-    return `${lines.join("\n")}\n`;
-  }
-  async function lotsWithCode(page: import("@playwright/test").Page, code: string): Promise<number> {
-    const res = await page.request.get(`/api/v1/lots?code=${encodeURIComponent(code)}&pageSize=5`);
-    expect(res.status()).toBe(200);
-    return ((await res.json()) as { items: unknown[] }).items.length;
-  }
-
   test("an upload shows its progress and can be cancelled, and a cancelled import records nothing", async ({ page }) => {
     test.setTimeout(300_000);
     await signInPage(page, ACCOUNTS.release_manager);
-    await page.goto("/lots");
+    const lots = await new LotsPage(page).goto();
     const tag = `CANCEL${Date.now() % 1_000_000}`;
     // Held at the network until the test lets go, so Cancel is pressed while the upload is under way.
     let release: () => void = () => {};
@@ -161,16 +146,15 @@ test.describe("uploads", () => {
       await held;
       await route.continue().catch(() => undefined);
     });
-    await page.getByLabel("CSV file").setInputFiles({ name: "cancel-me.csv", mimeType: "text/csv", buffer: Buffer.from(bulkCsv(tag, 20_000_000, 5_000)) });
-    await page.getByRole("button", { name: "Preview" }).click();
-    const bar = page.getByRole("progressbar");
-    await expect(bar).toBeVisible();
-    await expect(page.getByTestId("upload-percent")).toHaveText(/^\d+ %$/);
-    await page.getByRole("button", { name: "Cancel upload" }).click();
-    await expect(page.getByTestId("upload-cancelled")).toHaveText("cancel-me.csv: Cancelled; nothing was saved.");
-    await expect(bar).toHaveCount(0);
+    await lots.chooseCsv("cancel-me.csv", bulkLotsCsv(tag, 20_000_000, 5_000));
+    await lots.previewButton.click();
+    await expect(lots.progressBar).toBeVisible();
+    await expect(lots.progressPercent).toHaveText(/^\d+ %$/);
+    await lots.cancelUpload.click();
+    await expect(lots.uploadCancelled).toHaveText("cancel-me.csv: Cancelled; nothing was saved.");
+    await expect(lots.progressBar).toHaveCount(0);
     release();
-    await expect(page.getByRole("button", { name: "Preview" })).toBeEnabled();
-    expect(await lotsWithCode(page, `${tag}-`)).toBe(0);
+    await expect(lots.previewButton).toBeEnabled();
+    expect(await countLotsTagged(tag)).toBe(0);
   });
 });

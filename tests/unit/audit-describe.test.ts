@@ -27,6 +27,12 @@ describe("audit events as people read them", () => {
     expect(auditSentence("Ilse Brandvold", event("build.create"), null)).toBe("Ilse Brandvold created build 0b6d4c1e");
   });
 
+  it("names a lot that is no longer recorded by the code the event kept, not by an id", () => {
+    const lot = { ...event("lot.import", null, { lotCode: "TW-2507", serialFrom: 40000 }), entityType: "production_lot" };
+    expect(auditSentence("Sunniva Kalt", lot, null)).toBe("Sunniva Kalt imported lot TW-2507");
+    expect(auditSentence("Sunniva Kalt", { ...lot, action: "lot.create", after: null, before: { lotCode: "TW-2508" } }, null)).toBe("Sunniva Kalt created lot TW-2508");
+  });
+
   it("gives each kind of account change its own action", () => {
     const t = new Date("2026-01-01T00:00:00Z");
     expect(userChangeActions({ role: "viewer", disabledAt: null }, { role: "support", disabledAt: null })).toEqual(["user.role_change"]);

@@ -21,7 +21,52 @@ export class UsersAdmin extends Screen {
   }
 
   async disable(email: string): Promise<void> {
-    await this.row(email).getByRole("button", { name: /Disable/ }).click();
+    await this.disableButton(email).click();
+  }
+
+  disableButton(email: string): Locator {
+    return this.row(email).getByRole("button", { name: /^Disable\b/ });
+  }
+
+  reenableButton(email: string): Locator {
+    return this.row(email).getByRole("button", { name: /^Re-enable\b/ });
+  }
+
+  roleOf(email: string, name: string): Locator {
+    return this.row(email).getByLabel(`Role of ${name}`);
+  }
+
+  /** Picks a new role in the person's row, which asks for confirmation first. */
+  async pickRole(email: string, name: string, role: string): Promise<void> {
+    await this.roleOf(email, name).selectOption(role);
+  }
+
+  /** The confirmation dialog's confirm button ("Change role", "Disable account"). */
+  async confirm(dialogTitle: string | RegExp, action: string): Promise<void> {
+    await this.dialog(dialogTitle).getByRole("button", { name: action, exact: true }).click();
+  }
+
+  /** What the last change to a person did, said once it succeeded. */
+  get changeDone(): Locator {
+    return this.panel("People").getByRole("status");
+  }
+
+  /** The add form's panel. */
+  get addForm(): Locator {
+    return this.panel("Add a user");
+  }
+
+  private panel(title: string): Locator {
+    return this.page.locator("section").filter({ has: this.page.getByRole("heading", { name: title, level: 2, exact: true }) });
+  }
+
+  /** The add form's refusal (the server's or the fields'). */
+  get addError(): Locator {
+    return this.addForm.getByRole("alert");
+  }
+
+  get addedNotice(): Locator {
+    return this.addForm.getByRole("status").filter({ hasText: "User created." });
   }
 }
 

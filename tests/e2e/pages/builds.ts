@@ -56,6 +56,33 @@ export class NewBuildForm extends Screen {
     await select.selectOption(value ?? "");
   }
 
+  /** The note under Slots that says why the lists are empty. */
+  get slotsHint(): Locator {
+    return this.page.getByText(/^(Pick a board model to see its profile versions\.|No profile version is published for this board model's coolers yet)/);
+  }
+
+  /** The slot lists shown now (Slot 1, Slot 2, …). */
+  get slots(): Locator {
+    return this.page.getByRole("group", { name: "Slots (published profile versions)" }).getByRole("combobox");
+  }
+
+  get addSlot(): Locator {
+    return this.button("Add a slot");
+  }
+
+  get removeSlot(): Locator {
+    return this.button("Remove the last slot");
+  }
+
+  /** The bank-size table: the chosen slots' bank against each board revision. */
+  get bankFit(): Locator {
+    return this.page.getByTestId("bank-fit");
+  }
+
+  bankFitRow(revision: string): Locator {
+    return this.bankFit.getByRole("row").filter({ has: this.page.getByRole("cell", { name: revision, exact: true }) });
+  }
+
   async attachFirmware(name: string, bytes: Buffer): Promise<void> {
     await this.page.getByLabel("Firmware image").setInputFiles({ name, mimeType: "application/octet-stream", buffer: bytes });
   }

@@ -36,6 +36,40 @@ export class Screen {
     return this.page.getByTestId("pager-status");
   }
 
+  /** The sidebar. */
+  get sidebar(): Locator {
+    return this.page.getByRole("navigation", { name: "Main" });
+  }
+
+  /** The sidebar entries marked as the current page (one, when the sidebar is right). */
+  get currentNavEntries(): Locator {
+    return this.sidebar.locator('a[aria-current="page"]');
+  }
+
+  /**
+   * How a control is drawn: its element, whether it has a fill or an outline (a background, a
+   * border or a ring), and its side padding. The app's buttons have all three; a bare text link
+   * has none.
+   */
+  async lookOf(control: Locator): Promise<{ tag: string; boxed: boolean; paddingXPx: number }> {
+    return control.evaluate((el) => {
+      const s = getComputedStyle(el);
+      const filled = s.backgroundColor !== "rgba(0, 0, 0, 0)" && s.backgroundColor !== "transparent";
+      const bordered = parseFloat(s.borderTopWidth) > 0 && s.borderTopStyle !== "none";
+      const ringed = s.boxShadow !== "none" && s.boxShadow !== "";
+      return { tag: el.tagName, boxed: filled || bordered || ringed, paddingXPx: Math.min(parseFloat(s.paddingLeft), parseFloat(s.paddingRight)) };
+    });
+  }
+
+  /** The control is a button drawn as one (see `lookOf`). */
+  async expectLooksLikeButton(control: Locator): Promise<void> {
+    await expect(control).toBeVisible();
+    const look = await this.lookOf(control);
+    expect(look.tag, "a real button element").toBe("BUTTON");
+    expect(look.boxed, "a fill, border or ring around the label").toBe(true);
+    expect(look.paddingXPx, "padding either side of the label").toBeGreaterThanOrEqual(6);
+  }
+
   async expectNoButton(name: string): Promise<void> {
     await expect(this.button(name)).toHaveCount(0);
   }

@@ -87,3 +87,24 @@ describe("editor evaluation", () => {
     rows.forEach((r) => expect(r.rpm).toBeCloseTo(r.dutyPct <= 30 ? 1200 : 1200 + ((2800 - 1200) * (r.dutyPct - 30)) / 70, 6));
   });
 });
+
+describe("editor plots with each kind of fan below its minimum duty (4-wire PWM fan spec rev. 1.3 §3.4)", () => {
+  // Hush fans stop below 30 °C (band 1.5 °C); the example fan: 20 % → 500 RPM, stops at 0 % duty.
+  const text = JSON.stringify(quietProfile());
+  const at = (rows: ReturnType<typeof evaluateEditorText>["rows"], tempC: number) => rows.find((r) => r.tempC === tempC)!;
+
+  it("a fan that stops at 0 % duty: authored, as-flashed and cooling branch show 0 RPM below the stop", () => {
+    const { rows } = evaluateEditorText(text, exampleHardware());
+    expect(at(rows, 25)).toMatchObject({ fanRpm: 0, fanRpmFlashed: 0, fanRpmFalling: 0 });
+  });
+
+  it("a fan that keeps its minimum speed: the same profile plots 500 RPM there, authored and as flashed, with the warning", () => {
+    const base = exampleHardware();
+    const hw = { ...base, fan: { ...base.fan, stopsAtZeroDuty: false } };
+    const { rows, issues } = evaluateEditorText(text, hw);
+    expect(at(rows, 25)).toMatchObject({ fanRpm: 500, fanRpmFlashed: 500, fanRpmFalling: 500 });
+    expect(issues.map((i) => i.code)).toContain("fans.stop_on_fan_that_holds_speed");
+    // Points table: the 30 °C point at 25 % runs at 500 + 1500·5/80 = 593.75 RPM (by hand) on both kinds.
+    expect(pointRows(quietProfile(), hw, "fans")[0]!.rpm).toBeCloseTo(593.75, 9);
+  });
+});

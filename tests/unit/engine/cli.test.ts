@@ -48,6 +48,15 @@ describe("cli help and usage", { timeout: 120_000 }, () => {
     expect(cli("bank", "-h").code).toBe(0);
   });
 
+  it("`npm run -s cli -- <command> --help` exits 0 for every command, as the developer notes write it", { timeout: 600_000 }, () => {
+    for (const command of COMMANDS) {
+      const r = spawnSync("npm", ["run", "-s", "cli", "--", command.name, "--help"], { cwd: root, encoding: "utf8", timeout: 120_000 });
+      expect(r.status, `npm run -s cli -- ${command.name} --help\n${r.stderr}`).toBe(0);
+      expect(r.stdout).toContain(`Usage: loopkeeper ${command.name}`);
+      expect(r.stderr).toBe("");
+    }
+  });
+
   it("--help wins over other mistakes on the same line", () => {
     const r = cli("tach", "--pulses", "2.5", "--bogus", "--help");
     expect(r.code).toBe(0);
