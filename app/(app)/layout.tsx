@@ -1,4 +1,3 @@
-import Image from "next/image";
 import Link from "next/link";
 import { requirePageActor } from "@/lib/platform/auth/page-guard";
 import { ROLE_LABELS } from "@/lib/auth/roles";
@@ -16,7 +15,9 @@ export default async function AppLayout({ children }: { children: React.ReactNod
       <div className="flex min-h-screen">
         <aside className="flex w-56 shrink-0 flex-col bg-ink-900 px-3 py-4 text-ink-100">
           <Link href="/" className="mb-6 flex items-center gap-2 px-2 text-white no-underline hover:no-underline">
-            <Image src="/logo.svg" alt="" width={26} height={26} priority />
+            {/* A fixed-size SVG needs no image optimization; next/image would add its browser code to every page. */}
+            {/* eslint-disable-next-line @next/next/no-img-element */}
+            <img src="/logo.svg" alt="" width={26} height={26} />
             <span className="text-lg font-semibold tracking-tight">Loopkeeper</span>
           </Link>
           <Sidebar role={actor.role} />

@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { useMutation, useQuery } from "@tanstack/react-query";
@@ -18,8 +19,10 @@ import { Panel } from "@/components/ui/panel";
 import { FilePicker } from "@/components/ui/file-picker";
 import { UploadProgressBar } from "@/components/ui/upload-progress";
 import { useUpload } from "@/components/ui/use-upload";
-import { BankFit } from "./bank-fit";
 import { bankBytesFromVersionImages } from "@/lib/release/bank-fit";
+
+// Shown once a board model's options are in; it brings the semver range checks with it.
+const BankFit = dynamic(() => import("./bank-fit").then((m) => m.BankFit), { ssr: false, loading: () => <div className="h-24 animate-pulse rounded bg-ink-100" aria-label="Loading the bank size check" /> });
 
 /** The API body without the firmware id: the file is uploaded first, on submit. Its schema loads when the form first validates. */
 const resolver = lazyZodResolver(() => import("@/lib/api/operations/builds").then((m) => m.createBuildBody.omit({ firmwareUploadId: true })));

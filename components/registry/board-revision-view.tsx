@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
@@ -8,10 +9,12 @@ import { getBoardRevision } from "@/lib/api/endpoints";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
-import { BoardRevisionEditForm } from "./board-forms";
 import { CompatibilityMatrix } from "./compatibility-matrix";
 import { hex32 } from "@/lib/hex/address";
 import { ErrorNotice } from "@/components/ui/error-notice";
+
+// The edit form (react-hook-form) loads when someone chooses to edit.
+const BoardRevisionEditForm = dynamic(() => import("./board-forms").then((m) => m.BoardRevisionEditForm));
 
 export function BoardRevisionView({ id, canWrite }: { id: string; canWrite: boolean }) {
   const q = useQuery(apiQuery(getBoardRevision, { params: { id } }));

@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useQuery } from "@tanstack/react-query";
 import { hex32 } from "@/lib/hex/address";
 import Link from "next/link";
@@ -9,10 +10,12 @@ import { listBoardModels } from "@/lib/api/endpoints";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { EmptyRow, SkeletonRows, Table, Td, Th } from "@/components/ui/table";
-import { BoardModelForm, BoardRevisionForm } from "./board-forms";
 import { BoardSigningKeys } from "./board-signing-keys";
 import { ErrorNotice } from "@/components/ui/error-notice";
 
+// The form (react-hook-form) is its own chunk, loaded only when the page shows it (people who may write).
+const BoardModelForm = dynamic(() => import("./board-forms").then((m) => m.BoardModelForm));
+const BoardRevisionForm = dynamic(() => import("./board-forms").then((m) => m.BoardRevisionForm));
 
 export function BoardsView({ canWrite }: { canWrite: boolean }) {
   const q = useQuery(apiQuery(listBoardModels, {}));

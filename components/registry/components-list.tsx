@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useQuery } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
 import { apiQuery } from "@/lib/api/client";
@@ -13,7 +14,9 @@ import { Panel } from "@/components/ui/panel";
 import { DataTable } from "./data-table";
 import { FilterBar } from "./filter-bar";
 import { useListParams, serverTableProps } from "./use-list-params";
-import { ComponentForm } from "./component-form";
+
+// The form (react-hook-form) is its own chunk, loaded only when the page shows it (people who may write).
+const ComponentForm = dynamic(() => import("./component-form").then((m) => m.ComponentForm));
 
 const columns: ColumnDef<ComponentView>[] = [
   { id: "name", accessorKey: "name", header: "Name", cell: (c) => <span className="font-medium">{c.row.original.name}</span> },

@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useQuery } from "@tanstack/react-query";
 import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
@@ -15,7 +16,9 @@ import { Panel } from "@/components/ui/panel";
 import { DataTable } from "./data-table";
 import { FilterBar } from "./filter-bar";
 import { useListParams, serverTableProps } from "./use-list-params";
-import { CoolerModelForm } from "./cooler-model-form";
+
+// The form (react-hook-form) is its own chunk, loaded only when the page shows it (people who may write).
+const CoolerModelForm = dynamic(() => import("./cooler-model-form").then((m) => m.CoolerModelForm));
 
 const columns: ColumnDef<CoolerModelView>[] = [
   { id: "name", accessorKey: "name", header: "Name", cell: (c) => <span className="font-medium">{c.row.original.name}</span> },

@@ -1,12 +1,15 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useQuery } from "@tanstack/react-query";
 import { apiQuery } from "@/lib/api/client";
 import { getLotOptions } from "@/lib/api/endpoints";
 import type { LotsQuery } from "@/lib/api/operations/support";
 import { LotsList } from "./lots-list";
-import { LotForm } from "./lot-form";
 import { LotImport } from "./lot-import";
+
+// The form (react-hook-form) is its own chunk, loaded only when the page shows it (people who may write).
+const LotForm = dynamic(() => import("./lot-form").then((m) => m.LotForm));
 
 export function LotsPage({ canWrite, query }: { canWrite: boolean; query: LotsQuery }) {
   const options = useQuery(apiQuery(getLotOptions, {}));

@@ -1,5 +1,7 @@
-import semver from "semver";
-import { satisfiesRange } from "@/lib/engine";
+// semver's own function modules, not its index: the editor screen loads this module.
+import compare from "semver/functions/compare";
+import valid from "semver/functions/valid";
+import { satisfiesRange } from "@/lib/versioning/semver-helpers";
 
 /** What a board revision offers a profile version: its points per curve, profile memory and slots. */
 export interface RevisionCapacity {
@@ -48,7 +50,7 @@ export function misfitReasons(rev: RevisionCapacity, needs: VersionNeeds): strin
  * slots, so a version is never published for a revision that cannot hold it.
  */
 export function fitRange(range: string, revisions: readonly RevisionCapacity[], needs: VersionNeeds): RangeFit {
-  const inRange = revisions.filter((r) => semver.valid(r.revision) && satisfiesRange(r.revision, range)).sort((a, b) => semver.compare(a.revision, b.revision));
+  const inRange = revisions.filter((r) => valid(r.revision) && satisfiesRange(r.revision, range)).sort((a, b) => compare(a.revision, b.revision));
   const checked = inRange.map((r) => ({ revision: r.revision, reasons: misfitReasons(r, needs) }));
   let best: string[] = [];
   let run: string[] = [];

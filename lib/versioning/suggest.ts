@@ -1,4 +1,4 @@
-import semver from "semver";
+import inc from "semver/functions/inc";
 import { canonicalJson } from "../profile/canonical";
 import type { CoolingProfile, CurveSettings } from "../profile/types";
 import { isValidVersion } from "./semver-helpers";
@@ -57,6 +57,6 @@ export function suggestNextVersion(prev: CoolingProfile, next: CoolingProfile, p
   const bump: VersionBump = major.length > 0 ? "major" : minor.length > 0 ? "minor" : "patch";
   const reasons = [...major, ...minor, ...patch];
   if (reasons.length === 0) reasons.push("no changes found; a new version still needs a new number");
-  const version = isValidVersion(prevVersion) ? semver.inc(prevVersion, bump) : null;
+  const version = isValidVersion(prevVersion) ? inc(prevVersion, bump) : null;
   return { version, bump, reasons };
 }

@@ -23,7 +23,6 @@ import PointsTable from "./points-table";
 import { useCurveEditing } from "./use-curve-editing";
 import LiveCurvePlot, { type OperatingMark } from "../charts/live-curve-plot";
 import { ProblemsList } from "./problems-list";
-import { PublishPanel } from "./publish-panel";
 import { useAutosave, type SaveState } from "./use-autosave";
 import { useLastPlotted } from "./use-last-plotted";
 import { DraftConflict } from "./draft-conflict";
@@ -32,6 +31,8 @@ import { VersionHistory } from "./version-history";
 // Monaco is heavy: it loads on this route only, in the browser only. The live plot is our own
 // small SVG (no chart library on the keystroke path), so it ships with the page.
 const JsonEditor = dynamic(() => import("./json-editor"), { ssr: false, loading: () => <div className="h-full animate-pulse rounded bg-ink-100" aria-label="Loading the editor" /> });
+// The publish form (react-hook-form) is its own chunk, loaded only for people who may publish.
+const PublishPanel = dynamic(() => import("./publish-panel").then((m) => m.PublishPanel));
 
 // Panels outside the keystroke path re-render only when their (deferred) inputs change.
 const MemoOperatingPanel = memo(OperatingPanel);
