@@ -94,6 +94,7 @@ interface Part {
 interface Group {
   type: "group";
   kind: string;
+  trigger_module_ident: string | null;
   outputs: string[];
 }
 
@@ -112,44 +113,100 @@ function origin(sourcePath: string): string {
   return dirs.length ? `${dirs.join("/")}/` : p;
 }
 
+interface Analysis {
+  /** The sources of the route's first load, summed by origin, largest first. */
+  origins: { origin: string; rawKiB: number; compressedKiB: number }[];
+  /** What the route can load later (next/dynamic, import()), by the module that asks for it, with what it adds. */
+  onDemand: { trigger: string; rawKiB: number; compressedKiB: number }[];
+}
+
+const byCompressed = <T extends { compressedKiB: number }>(a: T, b: T) => b.compressedKiB - a.compressedKiB;
+
+/** The module a chunk group is loaded for, as a project path or package name. */
+function triggerName(ident: string): string {
+  const p = ident.replace(/ \[.*$/, "").replace(/^\[project\]\//, "");
+  const nm = p.lastIndexOf("node_modules/");
+  return nm >= 0 ? origin(p) : p;
+}
+
 /**
- * The sources of a route's first load, summed by origin, from the analyzer's own graph of the
- * build (its chunk names differ from the emitted ones, so its groups say what loads first);
+ * A route's first load and its on-demand parts from the analyzer's own graph of the build (its
+ * chunk names differ from the emitted ones, so its chunk groups say what loads first: the
+ * framework's bootstrap and what rendering the route needs; "async" groups load on demand).
  * null when the build has no analyzer data.
  */
-function firstLoadOrigins(row: Row): { origin: string; rawKiB: number; compressedKiB: number }[] | null {
+function analyse(route: string): Analysis | null {
   if (!existsSync(path.join(root, distDir, "diagnostics", "analyze", "history", "history.json"))) return null;
-  const r = spawnSync("npx", ["next", "analyze", "export", "--dist-dir", distDir, "--route", row.route], { cwd: root, encoding: "utf8", maxBuffer: 512 * 1024 * 1024 });
+  const r = spawnSync("npx", ["next", "analyze", "export", "--dist-dir", distDir, "--route", route], { cwd: root, encoding: "utf8", maxBuffer: 512 * 1024 * 1024 });
   if (r.status !== 0) {
-    console.warn(`analyzer export for ${row.route} failed: ${r.stderr.slice(0, 500)}`);
+    console.warn(`analyzer export for ${route} failed: ${r.stderr.slice(0, 500)}`);
     return null;
   }
   const records = r.stdout
     .split("\n")
     .filter((line) => line.startsWith('{"type":"part"') || line.startsWith('{"type":"group"'))
     .map((line) => JSON.parse(line) as Part | Group);
-  const firstLoad = new Set(
-    records.flatMap((g) => (g.type === "group" && FIRST_LOAD_GROUPS.has(g.kind) ? g.outputs.filter((o) => o.startsWith("[client-fs]") && o.endsWith(".js")) : [])),
-  );
+  const clientJs = (g: Group) => g.outputs.filter((o) => o.startsWith("[client-fs]") && o.endsWith(".js"));
+  const groups = records.filter((g): g is Group => g.type === "group");
+  const parts = records.filter((p): p is Part => p.type === "part");
+  const firstLoad = new Set(groups.filter((g) => FIRST_LOAD_GROUPS.has(g.kind)).flatMap(clientJs));
   const sums = new Map<string, { raw: number; compressed: number }>();
-  for (const part of records) {
-    if (part.type !== "part" || !firstLoad.has(part.filename)) continue;
+  for (const part of parts) {
+    if (!firstLoad.has(part.filename)) continue;
     const key = origin(part.source_path);
     const s = sums.get(key) ?? { raw: 0, compressed: 0 };
     s.raw += part.size;
     s.compressed += part.compressed_size;
     sums.set(key, s);
   }
-  return [...sums.entries()]
-    .map(([o, s]) => ({ origin: o, rawKiB: s.raw / KiB, compressedKiB: s.compressed / KiB }))
-    .sort((a, b) => b.compressedKiB - a.compressedKiB);
+  const onDemand = groups
+    .filter((g) => g.kind === "async" && g.trigger_module_ident?.includes("[app-client]"))
+    .map((g) => {
+      const outputs = new Set(clientJs(g).filter((o) => !firstLoad.has(o)));
+      const mine = parts.filter((p) => outputs.has(p.filename));
+      return { trigger: triggerName(g.trigger_module_ident ?? ""), rawKiB: mine.reduce((n, p) => n + p.size, 0) / KiB, compressedKiB: mine.reduce((n, p) => n + p.compressed_size, 0) / KiB };
+    })
+    .filter((g) => g.rawKiB > 0);
+  // Monaco asks for its languages and workers one chunk each: one line per asking module.
+  const merged = new Map<string, { trigger: string; rawKiB: number; compressedKiB: number }>();
+  for (const g of onDemand) {
+    const m = merged.get(g.trigger) ?? { trigger: g.trigger, rawKiB: 0, compressedKiB: 0 };
+    m.rawKiB += g.rawKiB;
+    m.compressedKiB += g.compressedKiB;
+    merged.set(g.trigger, m);
+  }
+  return {
+    origins: [...sums.entries()].map(([o, v]) => ({ origin: o, rawKiB: v.raw / KiB, compressedKiB: v.compressed / KiB })).sort(byCompressed),
+    onDemand: [...merged.values()].sort(byCompressed),
+  };
+}
+
+/** Per route, what loads later and for what (forms for people who may write, plots, the editor, zod on a form's first check). */
+function onDemandSection(rows: Row[], analyses: Map<string, Analysis | null>): string[] {
+  const lines = rows.flatMap((r) => {
+    const a = analyses.get(r.route);
+    if (!a || a.onDemand.length === 0) return [];
+    const items = a.onDemand.map((g) => `${g.trigger} ${g.compressedKiB.toFixed(1)}`).join("; ");
+    return [`| ${r.route} | ${items} |`];
+  });
+  if (lines.length === 0) return [];
+  return [
+    "",
+    "### What loads later, on demand",
+    "",
+    "Chunks a route asks for after its first load (`next/dynamic`, `import()`), by the module that asks, with the analyzer's compressed estimate in KiB of what each adds. Plots, Monaco, the bank size check and the edit forms load when they are shown; the add forms are shown, and so loaded right after the page, only to people who may write; zod with the zod resolver loads on a form's first check (`@hookform/resolvers`) and with the schema module it imports; next-auth's client on sign-in and sign-out.",
+    "",
+    "| route | loaded on demand: trigger, compressed KiB (analyzer) |",
+    "|---|---|",
+    ...lines,
+  ];
 }
 
 async function main() {
   if (!existsSync(path.join(root, distDir, "BUILD_ID")) || process.env.BENCH_REBUILD === "1") await build();
   const rows = routeRows();
   const over = rows.filter((r) => r.gzipKiB > r.budgetKiB);
-  const breakdowns = over.map((r) => ({ row: r, origins: firstLoadOrigins(r) }));
+  const analyses = new Map(rows.map((r) => [r.route, analyse(r.route)]));
   const commit = spawnSync("git", ["rev-parse", "--short", "HEAD"], { cwd: root, encoding: "utf8" }).stdout.trim();
   const buildId = readFileSync(path.join(root, distDir, "BUILD_ID"), "utf8").trim();
 
@@ -159,7 +216,8 @@ async function main() {
     return `| ${r.route} | ${r.rawKiB.toFixed(0)} | ${r.gzipKiB.toFixed(1)} | ${kind} | ${verdict} |`;
   });
   const detail: string[] = [];
-  for (const { row, origins } of breakdowns) {
+  for (const row of over) {
+    const origins = analyses.get(row.route)?.origins;
     detail.push("", `#### ${row.route}: ${row.gzipKiB.toFixed(1)} KiB gzip, budget ${row.budgetKiB}`, "");
     if (!origins) {
       detail.push("No analyzer data in this build (build it with `BENCH_REBUILD=1 npm run bench:bundle`).");
@@ -188,6 +246,7 @@ async function main() {
       ? ["", `### What the routes over budget load first`, "", "Sources in the route's first-load chunks, summed by npm package or project folder, largest first (the analyzer's sizes: raw is the source's share of the chunks, compressed the analyzer's own estimate per source, which runs higher than gzip of whole chunks; `next` includes the React DOM build it ships)."]
       : []),
     ...detail,
+    ...onDemandSection(rows, analyses),
     "<!-- bench:bundle:end -->",
   ].join("\n");
   const docFile = path.join(root, "docs/benchmarks.md");
