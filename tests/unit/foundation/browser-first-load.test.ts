@@ -1,6 +1,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
+import { ROOT, resolveLocal as resolveIn, sourceFiles } from "./source-tree";
 
 /**
  * What the screens' browser code loads with the page, read from the source: every module a
@@ -9,8 +10,8 @@ import { describe, expect, it } from "vitest";
  * followed. The heavy or server-side parts below must only be reached on demand; `npm run
  * bench:bundle` measures the sizes, this keeps a static import from quietly bringing them back.
  */
-const ROOT = process.cwd();
 const EXTENSIONS = ["", ".ts", ".tsx", "/index.ts", "/index.tsx"];
+const resolveLocal = (from: string, spec: string) => resolveIn(from, spec, EXTENSIONS);
 
 /** Packages and project modules a screen may load on demand but never with the page. */
 const ON_DEMAND_ONLY: { what: string; matches: (spec: string, file: string | null) => boolean }[] = [
@@ -23,27 +24,7 @@ const ON_DEMAND_ONLY: { what: string; matches: (spec: string, file: string | nul
   { what: "next-auth's client", matches: (s) => s === "next-auth/react" },
 ];
 
-function sourceFiles(dir: string): string[] {
-  const abs = path.join(ROOT, dir);
-  if (!fs.existsSync(abs)) return [];
-  return fs.readdirSync(abs, { withFileTypes: true }).flatMap((e) => {
-    const rel = path.join(dir, e.name);
-    if (e.isDirectory()) return sourceFiles(rel);
-    return /\.tsx?$/.test(e.name) && !e.name.endsWith(".d.ts") ? [rel] : [];
-  });
-}
 
-function resolveLocal(from: string, spec: string): string | null {
-  let base: string;
-  if (spec.startsWith("@/")) base = spec.slice(2);
-  else if (spec.startsWith(".")) base = path.join(path.dirname(from), spec);
-  else return null;
-  for (const ext of EXTENSIONS) {
-    const candidate = path.normalize(base + ext);
-    if (fs.existsSync(path.join(ROOT, candidate)) && fs.statSync(path.join(ROOT, candidate)).isFile()) return candidate;
-  }
-  return null;
-}
 
 /** True when an import or export clause names types only (`type X`, `{ type A, type B }`): the compiler drops it. */
 function typeOnly(clause: string): boolean {

@@ -1,24 +1,15 @@
 import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
+import { ROOT, resolveLocal as resolveIn, sourceFiles } from "./source-tree";
 
 /**
  * The layering read from the source itself: db/ is storage that nothing it imports may reach
  * back into, and lib/<domain> stays pure (no React, Next or database) so it runs anywhere.
  */
-const ROOT = process.cwd();
 const SOURCE_DIRS = ["app", "components", "db", "lib", "cli"];
 const EXTENSIONS = [".ts", ".tsx", "/index.ts", "/index.tsx"];
 
-function sourceFiles(dir: string): string[] {
-  const abs = path.join(ROOT, dir);
-  if (!fs.existsSync(abs)) return [];
-  return fs.readdirSync(abs, { withFileTypes: true }).flatMap((e) => {
-    const rel = path.join(dir, e.name);
-    if (e.isDirectory()) return sourceFiles(rel);
-    return /\.tsx?$/.test(e.name) && !e.name.endsWith(".d.ts") ? [rel] : [];
-  });
-}
 
 function specifiers(file: string): string[] {
   const text = fs.readFileSync(path.join(ROOT, file), "utf8");
@@ -29,18 +20,8 @@ function specifiers(file: string): string[] {
   return out;
 }
 
-function resolveLocal(from: string, spec: string): string | null {
-  let base: string;
-  if (spec.startsWith("@/")) base = spec.slice(2);
-  else if (spec.startsWith(".")) base = path.join(path.dirname(from), spec);
-  else return null;
-  for (const ext of ["", ...EXTENSIONS]) {
-    const candidate = path.normalize(base + ext);
-    if (fs.existsSync(path.join(ROOT, candidate)) && fs.statSync(path.join(ROOT, candidate)).isFile()) return candidate;
-  }
-  return null;
-}
 
+const resolveLocal = (from: string, spec: string) => resolveIn(from, spec, ["", ...EXTENSIONS]);
 const files = SOURCE_DIRS.flatMap(sourceFiles);
 const graph = new Map(files.map((f) => [f, specifiers(f).map((s) => ({ spec: s, file: resolveLocal(f, s) }))]));
 const isDb = (f: string) => f.startsWith(`db${path.sep}`);
