@@ -99,9 +99,9 @@ test.describe("new build form", () => {
     await expect(pipeline.currentNavEntries).toHaveText("Builds");
     await form.goto();
 
-    // The lists fill at once (the demo's one board model); the hint asking to pick a board stays away.
-    await expect(form.slot(1).locator("option", { hasText: "Tarn 240 · Quiet office" }).first()).toBeAttached();
-    await expect(form.slotsHint).toHaveCount(0);
+    // Once the board is picked the lists fill, and the hint asking to pick a board goes away.
+    // (Before that the form offers the first board model's versions; in the test database other
+    // tests have added board models, so what it offers before a pick is not checked here.)
     const version = `${100 + Math.floor(Math.random() * 150)}.${Math.floor(Math.random() * 256)}.${Math.floor(Math.random() * 256)}`;
     await form.describe({ board: "TC-1 cooler controller", version, revisions: ">=1.0.0 <3.0.0" });
     await expect(form.slot(1).locator("option", { hasText: "Tarn 240 · Quiet office" }).first()).toBeAttached();

@@ -84,7 +84,7 @@ export class NewBuildForm extends Screen {
   }
 
   async attachFirmware(name: string, bytes: Buffer): Promise<void> {
-    await this.page.getByLabel("Firmware image").setInputFiles({ name, mimeType: "application/octet-stream", buffer: bytes });
+    await this.chooseFile("Firmware image", { name, mimeType: "application/octet-stream", buffer: bytes });
   }
 
   /** Submits and waits for the new build's page; answers its path. */

@@ -27,6 +27,21 @@ export class Screen {
     return this.page.getByRole("button", { name, exact: typeof name === "string" ? exact : undefined });
   }
 
+  /**
+   * Chooses a file in one of the app's file pickers that wait for a button press before sending
+   * (not the evidence pickers, which send at once) and waits until the picker shows it as chosen
+   * (its Remove button). A choice made before the page's scripts have attached is not
+   * seen by the screen, so the choice is made again until it is: on a busy machine the input
+   * can be there, from the server's HTML, a moment before it works.
+   */
+  async chooseFile(label: string, file: { name: string; mimeType: string; buffer: Buffer }): Promise<void> {
+    const input = this.page.getByLabel(label);
+    await expect(async () => {
+      await input.setInputFiles(file);
+      await expect(this.page.getByRole("button", { name: `Remove ${file.name}`, exact: true })).toBeVisible({ timeout: 2_000 });
+    }).toPass({ timeout: 60_000 });
+  }
+
   async expectAccessible(): Promise<void> {
     await expectAccessible(this.page);
   }

@@ -34,7 +34,7 @@ export class LookupPage extends Screen {
   }
 
   async identify(file: { name: string; mimeType: string; buffer: Buffer }): Promise<Locator> {
-    await this.page.getByLabel("Dump file (.bin or .hex)").setInputFiles(file);
+    await this.chooseFile("Dump file (.bin or .hex)", file);
     await this.button("Identify").click();
     return this.dumpResult;
   }
@@ -68,7 +68,7 @@ export class LotsPage extends Screen {
   }
 
   async previewCsv(name: string, csv: string): Promise<void> {
-    await this.page.getByLabel("CSV file").setInputFiles({ name, mimeType: "text/csv", buffer: Buffer.from(csv) });
+    await this.chooseFile("CSV file", { name, mimeType: "text/csv", buffer: Buffer.from(csv) });
     await this.button("Preview").click();
   }
 
@@ -78,7 +78,7 @@ export class LotsPage extends Screen {
 
   /** Picks a CSV file in the import form without sending it. */
   async chooseCsv(name: string, csv: string): Promise<void> {
-    await this.page.getByLabel("CSV file").setInputFiles({ name, mimeType: "text/csv", buffer: Buffer.from(csv) });
+    await this.chooseFile("CSV file", { name, mimeType: "text/csv", buffer: Buffer.from(csv) });
   }
 
   get previewButton(): Locator {
