@@ -8,9 +8,10 @@
  * docs/benchmarks.md.
  */
 import { spawnSync } from "node:child_process";
-import { existsSync, readFileSync, writeFileSync } from "node:fs";
+import { existsSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { gzipSync } from "node:zlib";
+import { writeBenchSection } from "./doc-section";
 
 const root = path.resolve(__dirname, "..");
 const distDir = process.env.NEXT_DIST_DIR ?? ".next-bundle";
@@ -249,10 +250,7 @@ async function main() {
     ...onDemandSection(rows, analyses),
     "<!-- bench:bundle:end -->",
   ].join("\n");
-  const docFile = path.join(root, "docs/benchmarks.md");
-  const existing = existsSync(docFile) ? readFileSync(docFile, "utf8") : "# Benchmarks\n";
-  const re = /<!-- bench:bundle:start -->[\s\S]*?<!-- bench:bundle:end -->/;
-  writeFileSync(docFile, re.test(existing) ? existing.replace(re, section) : `${existing.trimEnd()}\n\n${section}\n`);
+  writeBenchSection("bundle", section);
   console.log(section);
 }
 

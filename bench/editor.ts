@@ -5,11 +5,12 @@
  * JS per route is `npm run bench:bundle`'s section.
  */
 import { spawn, type ChildProcess } from "node:child_process";
-import { existsSync, readFileSync, writeFileSync } from "node:fs";
+import { existsSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { chromium } from "@playwright/test";
 import { summariseProfile, type CpuProfile, type ProfileRow } from "./cpu-profile";
+import { writeBenchSection } from "./doc-section";
 
 const root = path.resolve(__dirname, "..");
 const EDITS = 30;
@@ -269,10 +270,7 @@ async function main() {
       "The live editor plot is a small SVG component of our own (components/profiles/charts/live-curve-plot.tsx): React updates only the `d` attributes of the series that changed. recharts stays for the compare, sweep, lookup and lab plots. The previous run with recharts on the editor plot measured a median 25.6 ms, p95 48.4 ms for typing (an earlier run on a differently loaded machine; kept for history only).",
       "<!-- bench:editor:end -->",
     ].join("\n");
-    const docFile = path.join(root, "docs/benchmarks.md");
-    const existing = existsSync(docFile) ? readFileSync(docFile, "utf8") : "# Benchmarks\n";
-    const re = /<!-- bench:editor:start -->[\s\S]*?<!-- bench:editor:end -->/;
-    writeFileSync(docFile, re.test(existing) ? existing.replace(re, section) : `${existing.trimEnd()}\n\n${section}\n`);
+    writeBenchSection("editor", section);
     console.log(section);
   } finally {
     await browser.close();

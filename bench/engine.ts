@@ -3,10 +3,11 @@
  * operating-point load sweep and bank encoding over generated profiles, then
  * writes its section of docs/benchmarks.md (between its own markers only).
  */
-import { existsSync, readFileSync, writeFileSync } from "node:fs";
+import { readFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { encodeBank, evaluateCurves, loadSweep, validateProfile, type CoolingProfile, type CurvePoint, type HardwareContext } from "../lib/engine";
+import { writeBenchSection } from "./doc-section";
 
 const PROFILES = 10_000;
 const loadAtStart = os.loadavg()[0]!;
@@ -111,9 +112,5 @@ const section = [
   "<!-- bench:engine:end -->",
 ].join("\n");
 
-const docFile = path.join(root, "docs/benchmarks.md");
-const existing = existsSync(docFile) ? readFileSync(docFile, "utf8") : "# Benchmarks\n";
-const re = /<!-- bench:engine:start -->[\s\S]*?<!-- bench:engine:end -->/;
-const updated = re.test(existing) ? existing.replace(re, section) : `${existing.trimEnd()}\n\n${section}\n`;
-writeFileSync(docFile, updated);
+writeBenchSection("engine", section);
 console.log(section);
