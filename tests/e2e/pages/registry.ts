@@ -18,7 +18,7 @@ export class CoolerModelsList extends Screen {
 
   /** Opens the edit form of a cooler model; answers the form. */
   async edit(name: string): Promise<Locator> {
-    await this.button(`Edit ${name}`).click();
+    await this.pressUntilShown(this.button(`Edit ${name}`), this.editForm);
     return this.editForm;
   }
 

@@ -42,6 +42,19 @@ export class Screen {
     }).toPass({ timeout: 60_000 });
   }
 
+  /**
+   * Presses a button that opens something on this screen (a form, a panel) and waits until it is
+   * shown, pressing again while it is not: a press that lands before the page's scripts have
+   * attached does nothing, and on a busy machine the button is there, from the server's HTML, a
+   * moment before it works. Only for buttons that open — pressing twice must be harmless.
+   */
+  async pressUntilShown(button: Locator, shown: Locator): Promise<void> {
+    await expect(async () => {
+      await button.click();
+      await expect(shown).toBeVisible({ timeout: 2_000 });
+    }).toPass({ timeout: 60_000 });
+  }
+
   async expectAccessible(): Promise<void> {
     await expectAccessible(this.page);
   }
