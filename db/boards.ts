@@ -3,24 +3,12 @@ import { asc, count, eq } from "drizzle-orm";
 import { boardModels, boardRevisions, productionLots, type BoardModel, type BoardRevision } from "./schema";
 import type { Executor } from "./client";
 import { compareVersions } from "@/lib/engine";
+import { revisionFieldsOf, type RevisionField } from "@/lib/registry/revision-fields";
 
-export type BoardRevisionInput = Pick<
-  BoardRevision,
-  "revision" | "memoryBytes" | "baseAddress" | "slotCount" | "maxPointsPerCurve" | "pwmFrequencyHz" | "tachPulsesPerRev" | "notes"
->;
+export type BoardRevisionInput = Pick<BoardRevision, RevisionField>;
 
-export const revisionView = (r: BoardRevision) => ({
-  id: r.id,
-  boardModelId: r.boardModelId,
-  revision: r.revision,
-  memoryBytes: r.memoryBytes,
-  baseAddress: r.baseAddress,
-  slotCount: r.slotCount,
-  maxPointsPerCurve: r.maxPointsPerCurve,
-  pwmFrequencyHz: r.pwmFrequencyHz,
-  tachPulsesPerRev: r.tachPulsesPerRev,
-  notes: r.notes,
-});
+/** A revision as the API shows it: its ids and its own fields, without timestamps. */
+export const revisionView = (r: BoardRevision) => ({ id: r.id, boardModelId: r.boardModelId, ...revisionFieldsOf(r) });
 
 /** Revisions in semver order (text order would put 10.0.0 before 2.0.0). */
 export function sortRevisions<T extends { revision: string }>(rows: T[]): T[] {

@@ -2,7 +2,7 @@
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, type UseFormReturn } from "react-hook-form";
 import { apiCall, operationKey } from "@/lib/api/client";
 import { createBoardModel, createBoardRevision, getBoardRevision, listBoardModels, updateBoardModel, updateBoardRevision } from "@/lib/api/endpoints";
 import type { BoardModelBody, BoardModelView, BoardRevisionBody, BoardRevisionView } from "@/lib/api/operations/registry-schemas";
@@ -13,6 +13,7 @@ import { Panel } from "@/components/ui/panel";
 import { NumberField } from "./number-field";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
+import { REVISION_NUMBER_FIELDS, REVISION_NUMBER_KEYS, REVISION_TEXT_FIELDS, revisionFieldsOf, revisionNumberLabel } from "@/lib/registry/revision-fields";
 
 /** Client-side checks with the API body's own schema, loaded when the form first validates. */
 const boardModelBodyResolver = lazyZodResolver(() => import("@/lib/api/operations/registry-schemas").then((m) => m.boardModelBody));
@@ -62,6 +63,40 @@ export function BoardModelForm({ editing, onDone }: { editing?: BoardModelView; 
   );
 }
 
+/** A number typed in a box, or an address typed as decimal or 0x… hex; empty is NaN, which the schema refuses with the field's message. */
+const numberFromText = (v: string | number) => (String(v).trim() === "" ? Number.NaN : Number(String(v).trim()));
+
+/** A board revision's fields in form order, from their one definition (lib/registry/revision-fields). */
+function RevisionInputs({ form, idPrefix }: { form: UseFormReturn<BoardRevisionBody>; idPrefix: string }) {
+  const { errors } = form.formState;
+  const { revision, notes } = REVISION_TEXT_FIELDS;
+  return (
+    <>
+      <Field id={`${idPrefix}-revision`} label={revision.label} hint={revision.hint} error={errors.revision?.message}>
+        <Input {...describedBy(`${idPrefix}-revision`, errors.revision?.message)} {...form.register("revision")} />
+      </Field>
+      {REVISION_NUMBER_KEYS.map((key) => {
+        const f = REVISION_NUMBER_FIELDS[key];
+        const id = `${idPrefix}-${key}`;
+        const error = errors[key]?.message;
+        const reg = form.register(key, { setValueAs: numberFromText });
+        return f.hex ? (
+          <Field key={key} id={id} label={revisionNumberLabel(f)} hint={f.hint} error={error}>
+            <Input {...describedBy(id, error)} {...reg} />
+          </Field>
+        ) : (
+          <NumberField key={key} id={id} label={revisionNumberLabel(f)} hint={f.hint} error={error} reg={reg} step="1" />
+        );
+      })}
+      <div className="md:col-span-2">
+        <Field id={`${idPrefix}-notes`} label={notes.label} error={errors.notes?.message}>
+          <Textarea rows={2} {...describedBy(`${idPrefix}-notes`, errors.notes?.message)} {...form.register("notes")} />
+        </Field>
+      </div>
+    </>
+  );
+}
+
 const REVISION_DEFAULTS: Partial<BoardRevisionBody> = { pwmFrequencyHz: 25000, tachPulsesPerRev: 2, notes: "" };
 
 export function BoardRevisionForm({ boardModels }: { boardModels: BoardModelView[] }) {
@@ -76,8 +111,6 @@ export function BoardRevisionForm({ boardModels }: { boardModels: BoardModelView
     },
     onError: (err) => showServerIssues(form, err),
   });
-  const { errors } = form.formState;
-  const num = (name: keyof BoardRevisionBody) => form.register(name, { setValueAs: (v: string) => (v === "" ? Number.NaN : Number(v)) });
   return (
     <Panel title="Add a board revision">
       <form onSubmit={(e) => void form.handleSubmit((v) => create.mutate(v))(e)} className="grid gap-3 md:grid-cols-2" noValidate>
@@ -87,25 +120,7 @@ export function BoardRevisionForm({ boardModels }: { boardModels: BoardModelView
             {boardModels.map((b) => <option key={b.id} value={b.id}>{b.name}</option>)}
           </Select>
         </Field>
-        <Field id="br-rev" label="Revision" hint="Semantic version, e.g. 2.1.0." error={errors.revision?.message}>
-          <Input {...describedBy("br-rev", errors.revision?.message)} {...form.register("revision")} />
-        </Field>
-        <NumberField id="br-mem" label="Profile memory (bytes)" error={errors.memoryBytes?.message} reg={num("memoryBytes")} step="1" />
-        <Field id="br-base" label="Base address" hint="Decimal, or hex as 0x0801F800." error={errors.baseAddress?.message}>
-          <Input
-            {...describedBy("br-base", errors.baseAddress?.message)}
-            {...form.register("baseAddress", { setValueAs: (v: string) => (v.trim() === "" ? Number.NaN : Number(v.trim())) })}
-          />
-        </Field>
-        <NumberField id="br-slots" label="Profile slots" error={errors.slotCount?.message} reg={num("slotCount")} step="1" />
-        <NumberField id="br-points" label="Max points per curve" error={errors.maxPointsPerCurve?.message} reg={num("maxPointsPerCurve")} step="1" />
-        <NumberField id="br-pwm" label="PWM frequency (Hz)" error={errors.pwmFrequencyHz?.message} reg={num("pwmFrequencyHz")} step="1" />
-        <NumberField id="br-tach" label="Tach pulses per revolution" error={errors.tachPulsesPerRev?.message} reg={num("tachPulsesPerRev")} step="1" />
-        <div className="md:col-span-2">
-          <Field id="br-notes" label="Notes" error={errors.notes?.message}>
-            <Textarea rows={2} {...describedBy("br-notes", errors.notes?.message)} {...form.register("notes")} />
-          </Field>
-        </div>
+        <RevisionInputs form={form} idPrefix="br" />
         <div className="md:col-span-2">
           <Button type="submit" disabled={create.isPending || !boardModelId}>Add revision</Button>
         </div>
@@ -114,21 +129,10 @@ export function BoardRevisionForm({ boardModels }: { boardModels: BoardModelView
   );
 }
 
-const revisionBodyOf = (r: BoardRevisionView): BoardRevisionBody => ({
-  revision: r.revision,
-  memoryBytes: r.memoryBytes,
-  baseAddress: r.baseAddress,
-  slotCount: r.slotCount,
-  maxPointsPerCurve: r.maxPointsPerCurve,
-  pwmFrequencyHz: r.pwmFrequencyHz,
-  tachPulsesPerRev: r.tachPulsesPerRev,
-  notes: r.notes,
-});
-
 /** Corrects a revision's limits; once boards of it shipped the server only accepts note changes. */
 export function BoardRevisionEditForm({ revision, onDone }: { revision: BoardRevisionView; onDone: () => void }) {
   const qc = useQueryClient();
-  const form = useForm<BoardRevisionBody>({ resolver: boardRevisionBodyResolver, defaultValues: revisionBodyOf(revision) });
+  const form = useForm<BoardRevisionBody>({ resolver: boardRevisionBodyResolver, defaultValues: revisionFieldsOf(revision) });
   const save = useMutation({
     mutationFn: (v: BoardRevisionBody) => apiCall(updateBoardRevision, { params: { id: revision.id }, body: v }),
     onSuccess: () => {
@@ -138,31 +142,11 @@ export function BoardRevisionEditForm({ revision, onDone }: { revision: BoardRev
     },
     onError: (err) => showServerIssues(form, err),
   });
-  const { errors } = form.formState;
-  const num = (name: keyof BoardRevisionBody) => form.register(name, { setValueAs: (v: string) => (v === "" ? Number.NaN : Number(v)) });
   return (
     <Panel title={`Edit revision ${revision.revision}`}>
       <form onSubmit={(e) => void form.handleSubmit((v) => save.mutate(v))(e)} className="grid gap-3 md:grid-cols-2" noValidate>
         {save.error && <div className="md:col-span-2"><ErrorNotice error={save.error} besideFields={fieldsOf(form)} /></div>}
-        <Field id="bre-rev" label="Revision" hint="Semantic version, e.g. 2.1.0." error={errors.revision?.message}>
-          <Input {...describedBy("bre-rev", errors.revision?.message)} {...form.register("revision")} />
-        </Field>
-        <NumberField id="bre-mem" label="Profile memory (bytes)" error={errors.memoryBytes?.message} reg={num("memoryBytes")} step="1" />
-        <Field id="bre-base" label="Base address" hint="Decimal, or hex as 0x0801F800." error={errors.baseAddress?.message}>
-          <Input
-            {...describedBy("bre-base", errors.baseAddress?.message)}
-            {...form.register("baseAddress", { setValueAs: (v: string | number) => (String(v).trim() === "" ? Number.NaN : Number(String(v).trim())) })}
-          />
-        </Field>
-        <NumberField id="bre-slots" label="Profile slots" error={errors.slotCount?.message} reg={num("slotCount")} step="1" />
-        <NumberField id="bre-points" label="Max points per curve" error={errors.maxPointsPerCurve?.message} reg={num("maxPointsPerCurve")} step="1" />
-        <NumberField id="bre-pwm" label="PWM frequency (Hz)" error={errors.pwmFrequencyHz?.message} reg={num("pwmFrequencyHz")} step="1" />
-        <NumberField id="bre-tach" label="Tach pulses per revolution" error={errors.tachPulsesPerRev?.message} reg={num("tachPulsesPerRev")} step="1" />
-        <div className="md:col-span-2">
-          <Field id="bre-notes" label="Notes" error={errors.notes?.message}>
-            <Textarea rows={2} {...describedBy("bre-notes", errors.notes?.message)} {...form.register("notes")} />
-          </Field>
-        </div>
+        <RevisionInputs form={form} idPrefix="bre" />
         <div className="flex gap-2 md:col-span-2">
           <Button type="submit" disabled={save.isPending}>Save changes</Button>
           <Button type="button" variant="secondary" onClick={onDone}>Cancel</Button>

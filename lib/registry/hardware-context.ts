@@ -1,4 +1,5 @@
 import type { BoardRevision as EngineBoardRevision, HardwareContext, MotorComponent, SoundTable } from "@/lib/engine";
+import type { RevisionNumberKey } from "./revision-fields";
 
 /** The registry's fields the engine needs; plain objects, so client and server can both map them. */
 export interface ComponentFields {
@@ -27,14 +28,9 @@ export interface CoolerFields {
   radiatorKPerWAtMaxFan: number;
 }
 
-export interface RevisionFields {
+/** A board revision's version and its numbers (./revision-fields lists them with their units). */
+export interface RevisionFields extends Record<RevisionNumberKey, number> {
   revision: string;
-  memoryBytes: number;
-  baseAddress: number;
-  slotCount: number;
-  maxPointsPerCurve: number;
-  pwmFrequencyHz: number;
-  tachPulsesPerRev: number;
 }
 
 export function toEngineComponent(c: ComponentFields): MotorComponent {

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { isValidRange, isValidVersion } from "@/lib/versioning/semver-helpers";
 import { timestamp } from "./timestamp";
 import type { ComponentFields, CoolerFields, RevisionFields } from "@/lib/registry/hardware-context";
+import { REVISION_NUMBER_FIELDS, REVISION_NUMBER_KEYS, REVISION_TEXT_FIELDS, type RevisionNumberField, type RevisionNumberKey } from "@/lib/registry/revision-fields";
 
 /** Request and view schemas of the hardware registry; forms use the same ones as the API. */
 
@@ -109,27 +110,22 @@ export const boardModelBody = z.strictObject({
 });
 export type BoardModelBody = z.infer<typeof boardModelBody>;
 
+/** One schema per board-revision number, built from that number's definition. */
+function revisionNumbers<S extends z.ZodType>(schema: (f: RevisionNumberField) => S): Record<RevisionNumberKey, S> {
+  return Object.fromEntries(REVISION_NUMBER_KEYS.map((k) => [k, schema(REVISION_NUMBER_FIELDS[k])])) as Record<RevisionNumberKey, S>;
+}
+
 export const boardRevisionBody = z.strictObject({
   revision: z.string().trim().refine((v) => isValidVersion(v), "Use a semantic version such as 2.1.0."),
-  memoryBytes: num("the memory size").int("Whole bytes.").min(16, "At least 16 bytes.").max(65535, "At most 65,535 bytes (the bank format's limit)."),
-  baseAddress: num("the base address").int("A whole address.").min(0, "At least 0.").max(0xffffffff, "At most 0xFFFFFFFF."),
-  slotCount: num("the slot count").int("A whole number.").min(1, "At least 1 slot.").max(16, "At most 16 slots."),
-  maxPointsPerCurve: num("the point limit").int("A whole number.").min(2, "At least 2 points.").max(32, "At most 32 points."),
-  pwmFrequencyHz: num("the PWM frequency").int("Whole hertz.").min(100, "At least 100 Hz.").max(100000, "At most 100 kHz."),
-  tachPulsesPerRev: num("the tach pulses").int("A whole number.").min(1, "At least 1.").max(12, "At most 12."),
-  notes: z.string().trim().max(500, "Use at most 500 characters."),
+  ...revisionNumbers((f) => num(f.noun).int(f.wholeMessage).min(f.min, f.minMessage).max(f.max, f.maxMessage)),
+  notes: z.string().trim().max(REVISION_TEXT_FIELDS.notes.maxChars, `Use at most ${REVISION_TEXT_FIELDS.notes.maxChars} characters.`),
 });
 export type BoardRevisionBody = z.infer<typeof boardRevisionBody>;
 
 /** A board revision's limits as the engine reads them. */
 export const revisionFieldsView = z.object({
   revision: z.string(),
-  memoryBytes: z.number(),
-  baseAddress: z.number(),
-  slotCount: z.number(),
-  maxPointsPerCurve: z.number(),
-  pwmFrequencyHz: z.number(),
-  tachPulsesPerRev: z.number(),
+  ...revisionNumbers(() => z.number()),
 }) satisfies z.ZodType<RevisionFields>;
 
 export const boardRevisionView = revisionFieldsView.extend({ id: z.string(), boardModelId: z.string(), notes: z.string() });
