@@ -2,6 +2,7 @@ import "server-only";
 import { asc, count, eq } from "drizzle-orm";
 import { boardModels, boardRevisions, productionLots, type BoardModel, type BoardRevision } from "./schema";
 import type { Executor } from "./client";
+import { returnedRow } from "./rows";
 import { compareVersions } from "@/lib/engine";
 import { revisionFieldsOf, type RevisionField } from "@/lib/registry/revision-fields";
 
@@ -61,27 +62,19 @@ export async function countLotsOf(db: Executor, by: { boardModelId: string } | {
 }
 
 export async function insertBoardModel(tx: Executor, input: { name: string; serialPrefix: string; description: string }) {
-  const [row] = await tx.insert(boardModels).values(input).returning();
-  if (!row) throw new Error("INSERT … RETURNING gave no row");
-  return row;
+  return returnedRow(tx.insert(boardModels).values(input).returning());
 }
 
 export async function updateBoardModelRow(tx: Executor, { id, ...input }: { id: string; name: string; serialPrefix: string; description: string }) {
-  const [row] = await tx.update(boardModels).set({ ...input, updatedAt: new Date() }).where(eq(boardModels.id, id)).returning();
-  if (!row) throw new Error("UPDATE … RETURNING gave no row");
-  return row;
+  return returnedRow(tx.update(boardModels).set({ ...input, updatedAt: new Date() }).where(eq(boardModels.id, id)).returning());
 }
 
 export async function insertBoardRevision(tx: Executor, input: BoardRevisionInput & { boardModelId: string }) {
-  const [row] = await tx.insert(boardRevisions).values(input).returning();
-  if (!row) throw new Error("INSERT … RETURNING gave no row");
-  return row;
+  return returnedRow(tx.insert(boardRevisions).values(input).returning());
 }
 
 export async function updateBoardRevisionRow(tx: Executor, { id, ...input }: BoardRevisionInput & { id: string }) {
-  const [row] = await tx.update(boardRevisions).set({ ...input, updatedAt: new Date() }).where(eq(boardRevisions.id, id)).returning();
-  if (!row) throw new Error("UPDATE … RETURNING gave no row");
-  return row;
+  return returnedRow(tx.update(boardRevisions).set({ ...input, updatedAt: new Date() }).where(eq(boardRevisions.id, id)).returning());
 }
 
 /** A board model with its revisions in semver order, as the API shows it. */

@@ -2,6 +2,7 @@ import "server-only";
 import { and, count, eq, ilike, inArray, type SQL } from "drizzle-orm";
 import { components, type Component } from "./schema";
 import type { Executor } from "./client";
+import { returnedRow } from "./rows";
 import { likeText, orderFor, pageWindow } from "./list-helpers";
 
 export type ComponentInput = Pick<
@@ -53,13 +54,9 @@ export async function componentKinds(db: Executor, { ids }: { ids: string[] }): 
 }
 
 export async function insertComponent(tx: Executor, input: ComponentInput): Promise<Component> {
-  const [row] = await tx.insert(components).values(input).returning();
-  if (!row) throw new Error("INSERT … RETURNING gave no row");
-  return row;
+  return returnedRow(tx.insert(components).values(input).returning());
 }
 
 export async function updateComponentRow(tx: Executor, { id, ...input }: ComponentInput & { id: string }): Promise<Component> {
-  const [row] = await tx.update(components).set({ ...input, updatedAt: new Date() }).where(eq(components.id, id)).returning();
-  if (!row) throw new Error("UPDATE … RETURNING gave no row");
-  return row;
+  return returnedRow(tx.update(components).set({ ...input, updatedAt: new Date() }).where(eq(components.id, id)).returning());
 }

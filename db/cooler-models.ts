@@ -3,6 +3,7 @@ import { alias } from "drizzle-orm/pg-core";
 import { count, eq, ilike, sql } from "drizzle-orm";
 import { boardModels, components, coolerModels, profiles, type CoolerModel } from "./schema";
 import type { Executor } from "./client";
+import { returnedRow } from "./rows";
 import { likeText, orderFor, pageWindow } from "./list-helpers";
 
 export type CoolerModelInput = Pick<
@@ -70,13 +71,9 @@ export async function countProfilesOf(db: Executor, { coolerModelId }: { coolerM
 }
 
 export async function insertCoolerModel(tx: Executor, input: CoolerModelInput) {
-  const [row] = await tx.insert(coolerModels).values(input).returning();
-  if (!row) throw new Error("INSERT … RETURNING gave no row");
-  return row;
+  return returnedRow(tx.insert(coolerModels).values(input).returning());
 }
 
 export async function updateCoolerModelRow(tx: Executor, { id, ...input }: CoolerModelInput & { id: string }) {
-  const [row] = await tx.update(coolerModels).set({ ...input, updatedAt: new Date() }).where(eq(coolerModels.id, id)).returning();
-  if (!row) throw new Error("UPDATE … RETURNING gave no row");
-  return row;
+  return returnedRow(tx.update(coolerModels).set({ ...input, updatedAt: new Date() }).where(eq(coolerModels.id, id)).returning());
 }
