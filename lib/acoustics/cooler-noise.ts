@@ -63,28 +63,51 @@ export function coolerTotalDbA1m(hw: HardwareContext, fanRpm: number, pumpRpm: n
   return prepareCoolerTotal(hw)(fanRpm, pumpRpm);
 }
 
+/** One source of prepareCoolerTotal: relative sound power of `count` units at 1 m for an RPM. */
+function sourcePower(c: MotorComponent, count: number): (rpm: number) => number {
+  if (c.soundTable) {
+    const power = prepareSoundTablePower(c.soundTable);
+    // Table levels are at the table's distance; to 1 m by the inverse-square law (×d² in power).
+    const factor = count * c.soundTable.distanceM ** 2;
+    return (rpm) => factor * power(rpm);
+  }
+  const exponent = (c.soundExponent ?? DEFAULT_SOUND_EXPONENT) / 10;
+  if (!(c.soundRefRpm > 0)) return () => 0;
+  const scale = (count * 10 ** (c.soundRefDbA / 10)) / c.soundRefRpm ** exponent;
+  return (rpm) => (rpm > 0 ? scale * rpm ** exponent : 0);
+}
+
 /**
  * coolerTotalDbA1m with per-component constants computed once. A source costs one power
  * per call: without a sound table Lref and k are folded into one scale; with a table each
- * segment is the power law its two points imply (prepareSoundTablePower).
+ * segment is the power law its two points imply (prepareSoundTablePower). A curve table
+ * repeats speeds over long runs of rows (held below the first point, full speed from the
+ * critical temperature on, stopped fans), so the last speed of each source and the last
+ * total are kept and a repeat costs no power or logarithm: the same numbers, computed once.
  */
 export function prepareCoolerTotal(hw: HardwareContext): (fanRpm: number, pumpRpm: number) => number {
-  const source = (c: MotorComponent, count: number): ((rpm: number) => number) => {
-    if (c.soundTable) {
-      const power = prepareSoundTablePower(c.soundTable);
-      // Table levels are at the table's distance; to 1 m by the inverse-square law (×d² in power).
-      const factor = count * c.soundTable.distanceM ** 2;
-      return (rpm) => factor * power(rpm);
-    }
-    const exponent = (c.soundExponent ?? DEFAULT_SOUND_EXPONENT) / 10;
-    if (!(c.soundRefRpm > 0)) return () => 0;
-    const scale = (count * 10 ** (c.soundRefDbA / 10)) / c.soundRefRpm ** exponent;
-    return (rpm) => (rpm > 0 ? scale * rpm ** exponent : 0);
-  };
-  const fans = source(hw.fan, hw.fanCount);
-  const pump = source(hw.pump, 1);
+  const fans = sourcePower(hw.fan, hw.fanCount);
+  const pump = sourcePower(hw.pump, 1);
+  let lastFanRpm = Number.NaN;
+  let lastFanPower = 0;
+  let lastPumpRpm = Number.NaN;
+  let lastPumpPower = 0;
+  let lastTotalDbA = Number.NaN;
   return (fanRpm, pumpRpm) => {
-    const sum = fans(fanRpm) + pump(pumpRpm);
-    return sum > 0 ? 10 * Math.log10(sum) : -Infinity;
+    const sameFans = fanRpm === lastFanRpm;
+    const samePump = pumpRpm === lastPumpRpm;
+    // Both speeds as last time (NaN never equals itself, so the first call computes): the last total is this one.
+    if (sameFans && samePump) return lastTotalDbA;
+    if (!sameFans) {
+      lastFanPower = fans(fanRpm);
+      lastFanRpm = fanRpm;
+    }
+    if (!samePump) {
+      lastPumpPower = pump(pumpRpm);
+      lastPumpRpm = pumpRpm;
+    }
+    const sum = lastFanPower + lastPumpPower;
+    lastTotalDbA = sum > 0 ? 10 * Math.log10(sum) : -Infinity;
+    return lastTotalDbA;
   };
 }

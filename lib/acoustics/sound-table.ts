@@ -1,4 +1,18 @@
-import type { SoundTable } from "../hardware/types";
+import type { SoundTable, SoundTablePoint } from "../hardware/types";
+
+/**
+ * The table's points of a turning motor (RPM above 0) by rising RPM. A valid table is
+ * already so and is used as it is (it is only read); any other is copied, filtered and
+ * sorted (a stable sort, so points at the same RPM keep their order either way).
+ */
+function runningPoints(table: SoundTable): readonly SoundTablePoint[] {
+  const points = table.points;
+  let usable = true;
+  for (let i = 0; i < points.length && usable; i++) {
+    if (!(points[i]!.rpm > 0) || (i > 0 && points[i]!.rpm < points[i - 1]!.rpm)) usable = false;
+  }
+  return usable ? points : points.filter((p) => p.rpm > 0).sort((a, b) => a.rpm - b.rpm);
+}
 
 /**
  * A measured sound table, prepared once: RPM → A-weighted level of one unit at the
@@ -18,7 +32,7 @@ import type { SoundTable } from "../hardware/types";
  * points out of order are sorted here so that the result is still defined.
  */
 export function prepareSoundTable(table: SoundTable): (rpm: number) => number {
-  const points = [...table.points].filter((p) => p.rpm > 0).sort((a, b) => a.rpm - b.rpm);
+  const points = [...runningPoints(table)]; // kept by the returned function, so its own copy
   const logs = points.map((p) => Math.log10(p.rpm));
   const levels = points.map((p) => p.soundDbA);
   const n = points.length;
@@ -49,7 +63,7 @@ export function soundTableDbA(table: SoundTable, rpm: number): number {
  * the ends and 0 when stopped, exactly as prepareSoundTable.
  */
 export function prepareSoundTablePower(table: SoundTable): (rpm: number) => number {
-  const points = [...table.points].filter((p) => p.rpm > 0).sort((a, b) => a.rpm - b.rpm);
+  const points = runningPoints(table);
   const n = points.length;
   if (n === 0) return () => 0;
   const segments = points.slice(1).map((hi, i) => {

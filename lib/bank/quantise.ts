@@ -1,14 +1,9 @@
 import type { CoolingProfile, CurveSettings, ProfileSettings } from "../profile/types";
-import {
-  DUTY_STEP_PCT,
-  HYSTERESIS_STEP_C,
-  MAX_DUTY_CODE,
-  MAX_HYSTERESIS_CODE,
-  MAX_RAMP_CODE,
-  MAX_TEMP_CODE,
-  RAMP_STEP_PCT_PER_SEC,
-  TEMP_STEP_C,
-} from "./layout";
+import * as layout from "./layout";
+
+// Read once: where this file runs as CommonJS (tsx, bundlers in development) every use of an
+// imported name is a getter call, and these functions run for every point validated.
+const { DUTY_STEP_PCT, HYSTERESIS_STEP_C, MAX_DUTY_CODE, MAX_HYSTERESIS_CODE, MAX_RAMP_CODE, MAX_TEMP_CODE, RAMP_STEP_PCT_PER_SEC, TEMP_STEP_C } = layout;
 
 // Guards against 0.3 / 0.1 = 2.9999999999999996 style floating-point error.
 const EPS = 1e-9;
@@ -36,14 +31,25 @@ export const dutyFromCode = (code: number): number => code * DUTY_STEP_PCT;
 export const hysteresisFromCode = (code: number): number => Math.round(code) / 10;
 export const rampFromCode = (code: number): number => code * RAMP_STEP_PCT_PER_SEC;
 
+/** A point, critical or fan-stop temperature as stored: 0.5 °C steps, rounded down. */
+export const storedTempC = (tempC: number): number => tempFromCode(tempCode(tempC));
+/** A point or sensor-loss duty as stored: 0.5 % steps, rounded up. */
+export const storedDutyPct = (dutyPct: number): number => dutyFromCode(dutyCode(dutyPct));
+/** A hysteresis as stored: 0.1 °C steps, rounded up. */
+export const storedHysteresisC = (hysteresisC: number): number => hysteresisFromCode(hysteresisCode(hysteresisC));
+/** A ramp-up limit as stored: 0.5 %/s steps, rounded up. */
+export const storedRampUpPctPerSec = (pctPerSec: number): number => rampFromCode(rampUpCode(pctPerSec));
+/** A ramp-down limit as stored: 0.5 %/s steps, rounded down. */
+export const storedRampDownPctPerSec = (pctPerSec: number): number => rampFromCode(rampDownCode(pctPerSec));
+
 /** One curve as stored: points, hysteresis and ramp limits on their steps, rounded toward more cooling. */
 export function quantiseCurve<C extends CurveSettings>(curve: C): C {
   return {
     ...curve,
-    points: curve.points.map((p) => ({ tempC: tempFromCode(tempCode(p.tempC)), dutyPct: dutyFromCode(dutyCode(p.dutyPct)) })),
-    hysteresisC: hysteresisFromCode(hysteresisCode(curve.hysteresisC)),
-    rampUpPctPerSec: rampFromCode(rampUpCode(curve.rampUpPctPerSec)),
-    rampDownPctPerSec: rampFromCode(rampDownCode(curve.rampDownPctPerSec)),
+    points: curve.points.map((p) => ({ tempC: storedTempC(p.tempC), dutyPct: storedDutyPct(p.dutyPct) })),
+    hysteresisC: storedHysteresisC(curve.hysteresisC),
+    rampUpPctPerSec: storedRampUpPctPerSec(curve.rampUpPctPerSec),
+    rampDownPctPerSec: storedRampDownPctPerSec(curve.rampDownPctPerSec),
   };
 }
 
@@ -55,11 +61,11 @@ export function quantiseCurve<C extends CurveSettings>(curve: C): C {
  */
 export function quantise<P extends ProfileSettings | CoolingProfile>(profile: P): P {
   const fans = quantiseCurve(profile.fans);
-  if (profile.fans.stopBelowTempC !== undefined) fans.stopBelowTempC = tempFromCode(tempCode(profile.fans.stopBelowTempC));
+  if (profile.fans.stopBelowTempC !== undefined) fans.stopBelowTempC = storedTempC(profile.fans.stopBelowTempC);
   return {
     ...profile,
-    criticalTempC: tempFromCode(tempCode(profile.criticalTempC)),
-    sensorLossDutyPct: dutyFromCode(dutyCode(profile.sensorLossDutyPct)),
+    criticalTempC: storedTempC(profile.criticalTempC),
+    sensorLossDutyPct: storedDutyPct(profile.sensorLossDutyPct),
     pump: quantiseCurve(profile.pump),
     fans,
   };

@@ -3,7 +3,12 @@ import { requireListenerDistance } from "../acoustics/near-field";
 import { requireFinite } from "../guards/input-error";
 import type { HardwareContext } from "../hardware/types";
 import type { ProfileSettings } from "../profile/types";
-import { fanStateAt, pumpStateAt } from "../speeds/at-temp";
+import { CurveReader } from "../speeds/curve";
+import * as rpm from "../speeds/rpm";
+
+// Read once: where this file runs as CommonJS (tsx, bundlers in development) every use of an
+// imported name is a getter call, and this runs twice per row.
+const { dutyToRpm } = rpm;
 
 /** One row of the temperature → speed → noise table a profile is plotted from. */
 export interface CurveRow {
@@ -29,8 +34,10 @@ export interface CurveTableOptions {
 
 /**
  * Steady-state pump and fan duty, RPM and estimated noise at each liquid
- * temperature from `fromC` to `toC` (default 20–70 °C in 1 °C steps), from
- * `dutyAtTemp`, `dutyToRpm` and `coolerTotalDbA1m` (same sums as `coolerNoise`).
+ * temperature from `fromC` to `toC` (default 20–70 °C in 1 °C steps): each row is
+ * what `pumpStateAt`, `fanStateAt` and `coolerTotalDbA1m` (same sums as `coolerNoise`)
+ * give at its temperature, computed in one pass — the curves are walked once
+ * (CurveReader) and nothing is allocated per row but the row.
  * Refuses a listener distance inside the cooler's near field (requireListenerDistance).
  */
 export function evaluateCurves(profile: ProfileSettings, hw: HardwareContext, options: CurveTableOptions = {}): CurveRow[] {
@@ -40,20 +47,28 @@ export function evaluateCurves(profile: ProfileSettings, hw: HardwareContext, op
   const distanceM = requireListenerDistance(hw, requireFinite("distanceM", options.distanceM ?? 1, 0.01, 1000));
   const distanceOffsetDb = 20 * Math.log10(distanceM);
   const totalDbA1m = prepareCoolerTotal(hw);
+  const pumpCurve = new CurveReader(profile.pump.points);
+  const fanCurve = new CurveReader(profile.fans.points);
+  const { criticalTempC } = profile;
+  const { stopBelowTempC } = profile.fans;
   const rows: CurveRow[] = [];
   const count = Math.floor((toC - fromC) / stepC + 1e-9);
   for (let i = 0; i <= count; i++) {
     const tempC = fromC + i * stepC;
-    const pump = pumpStateAt(profile, hw, tempC);
-    const fans = fanStateAt(profile, hw, tempC);
-    const soundDbA1m = totalDbA1m(fans.rpm, pump.rpm);
+    // pumpStateAt and fanStateAt (lib/speeds/at-temp.ts): 100 % from the critical temperature on; 0 % to the fans below their stop temperature.
+    const critical = tempC >= criticalTempC;
+    const pumpDutyPct = critical ? 100 : pumpCurve.dutyAt(tempC);
+    const fanDutyPct = critical ? 100 : stopBelowTempC !== undefined && tempC < stopBelowTempC ? 0 : fanCurve.dutyAt(tempC);
+    const pumpRpm = dutyToRpm(pumpDutyPct, hw.pump);
+    const fanRpm = dutyToRpm(fanDutyPct, hw.fan);
+    const soundDbA1m = totalDbA1m(fanRpm, pumpRpm);
     rows.push({
       tempC,
-      pumpDutyPct: pump.dutyPct,
-      pumpRpm: pump.rpm,
-      fanDutyPct: fans.dutyPct,
-      fanRpm: fans.rpm,
-      fansStopped: fans.stopped,
+      pumpDutyPct,
+      pumpRpm,
+      fanDutyPct,
+      fanRpm,
+      fansStopped: fanRpm === 0,
       soundDbA1m,
       soundDbAAtDistance: soundDbA1m - distanceOffsetDb,
     });

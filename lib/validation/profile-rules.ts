@@ -1,9 +1,13 @@
 import { bankBytes, DUTY_STEP_PCT, TEMP_STEP_C } from "../bank/layout";
-import { dutyCode, dutyFromCode, quantiseCurve, tempCode, tempFromCode } from "../bank/quantise";
+import * as quantise from "../bank/quantise";
 import type { HardwareContext } from "../hardware/types";
 import type { CoolingProfile, CurveKind, CurveSettings, FanCurve, PumpCurve } from "../profile/types";
 import { dutyAtTemp, maxDutyPct } from "../speeds/curve";
 import type { ValidationIssue } from "./types";
+
+// Read once: where this file runs as CommonJS (tsx, bundlers in development) every use of an
+// imported name is a getter call, and these run for every point.
+const { storedDutyPct, storedHysteresisC, storedRampDownPctPerSec, storedRampUpPctPerSec, storedTempC } = quantise;
 
 const CURVES: readonly CurveKind[] = ["pump", "fans"];
 const LABEL: Record<CurveKind, string> = { pump: "pump", fans: "fan" };
@@ -16,16 +20,17 @@ const warning = (code: string, path: string, message: string): ValidationIssue =
 const pointNo = (index: number): number => index + 1;
 
 function orderRules(kind: CurveKind, curve: CurveSettings, out: ValidationIssue[]): void {
-  curve.points.forEach((p, i) => {
-    const prev = curve.points[i - 1];
-    if (!prev) return;
+  const points = curve.points;
+  for (let i = 1; i < points.length; i++) {
+    const p = points[i]!;
+    const prev = points[i - 1]!;
     if (!(p.tempC > prev.tempC)) {
       out.push(error("curve.temps_not_increasing", `/${kind}/points/${i}/tempC`, `${LABEL[kind]} point ${pointNo(i)} is at ${fmt(p.tempC)} °C, not above point ${pointNo(i - 1)} at ${fmt(prev.tempC)} °C: temperatures must strictly increase; sort the points or remove the duplicate.`));
     }
     if (p.dutyPct < prev.dutyPct) {
       out.push(error("curve.duties_decreasing", `/${kind}/points/${i}/dutyPct`, `${LABEL[kind]} point ${pointNo(i)} asks for ${fmt(p.dutyPct)} %, less than the ${fmt(prev.dutyPct)} % of point ${pointNo(i - 1)}: duties must not fall as the liquid warms; raise it to at least ${fmt(prev.dutyPct)} %.`));
     }
-  });
+  }
 }
 
 /**
@@ -40,11 +45,20 @@ export interface ReadableProfile {
   fans?: FanCurve;
 }
 
-const readableCurves = (doc: ReadableProfile): [CurveKind, CurveSettings][] => CURVES.flatMap((k): [CurveKind, CurveSettings][] => (doc[k] ? [[k, doc[k]]] : []));
+/** The curves that could be read, with their kind; found once per validation and handed to each rule. */
+type ReadableCurves = readonly (readonly [CurveKind, CurveSettings])[];
 
-function safetyRules(doc: ReadableProfile, out: ValidationIssue[]): void {
+function readableCurves(doc: ReadableProfile): ReadableCurves {
+  const curves: (readonly [CurveKind, CurveSettings])[] = [];
+  for (const kind of CURVES) {
+    const curve = doc[kind];
+    if (curve) curves.push([kind, curve]);
+  }
+  return curves;
+}
+
+function safetyRules(doc: ReadableProfile, curves: ReadableCurves, out: ValidationIssue[]): void {
   const critical = doc.criticalTempC;
-  const curves = readableCurves(doc);
   if (critical !== undefined) {
     for (const [kind, curve] of curves) {
       const atCritical = dutyAtTemp(curve.points, critical);
@@ -54,15 +68,17 @@ function safetyRules(doc: ReadableProfile, out: ValidationIssue[]): void {
     }
   }
   // With one curve unreadable its duties are unknown, but a sensor-loss duty below the readable curve's highest is wrong whatever the other says.
-  const highest = Math.max(...curves.map(([, c]) => maxDutyPct(c.points)));
+  let highest = -Infinity;
+  for (const [, c] of curves) highest = Math.max(highest, maxDutyPct(c.points));
   if (doc.sensorLossDutyPct !== undefined && curves.length > 0 && doc.sensorLossDutyPct < highest) {
     out.push(error("sensor_loss.below_curve_duty", "/sensorLossDutyPct", `The sensor-loss duty ${fmt(doc.sensorLossDutyPct)} % is below the highest curve duty ${fmt(highest)} %: with the sensor lost the liquid may be hot, so set it to at least ${fmt(highest)} % (100 % is usual).`));
   }
-  doc.pump?.points.forEach((p, i) => {
-    if (p.dutyPct <= 0) {
+  const pumpPoints = doc.pump?.points ?? [];
+  for (let i = 0; i < pumpPoints.length; i++) {
+    if (pumpPoints[i]!.dutyPct <= 0) {
       out.push(error("pump.zero_duty", `/pump/points/${i}/dutyPct`, "A pump must never stop while the CPU makes heat: give this point a duty above 0 %, at least the pump's minimum duty."));
     }
-  });
+  }
   const stop = doc.fans?.stopBelowTempC;
   if (stop !== undefined && critical !== undefined && stop >= critical) {
     out.push(error("fans.stop_at_or_above_critical", "/fans/stopBelowTempC", `The fans would stop below ${fmt(stop)} °C, at or above the critical temperature ${fmt(critical)} °C: set the stop temperature well below it.`));
@@ -73,15 +89,17 @@ function safetyRules(doc: ReadableProfile, out: ValidationIssue[]): void {
   }
 }
 
-function hardwareRules(doc: ReadableProfile, hw: HardwareContext, out: ValidationIssue[]): void {
-  doc.pump?.points.forEach((p, i) => {
+function hardwareRules(doc: ReadableProfile, curves: ReadableCurves, hw: HardwareContext, out: ValidationIssue[]): void {
+  const pumpPoints = doc.pump?.points ?? [];
+  for (let i = 0; i < pumpPoints.length; i++) {
+    const p = pumpPoints[i]!;
     if (p.dutyPct > 0 && p.dutyPct < hw.pump.minDutyPct) {
       out.push(error("pump.below_min_duty", `/pump/points/${i}/dutyPct`, `${fmt(p.dutyPct)} % is below the pump's minimum duty ${fmt(hw.pump.minDutyPct)} %: raise it to at least ${fmt(hw.pump.minDutyPct)} %.`));
     }
-  });
+  }
   fanBelowMinDutyRules(doc, hw, out);
   const limit = hw.boardRevision.maxPointsPerCurve;
-  for (const [kind, curve] of readableCurves(doc)) {
+  for (const [kind, curve] of curves) {
     const n = curve.points.length;
     if (n > limit) {
       out.push(error("board.too_many_points", `/${kind}/points`, `The ${LABEL[kind]} curve has ${n} points; board revision ${hw.boardRevision.version} stores at most ${limit}: remove ${n - limit}.`));
@@ -111,58 +129,59 @@ function fanBelowMinDutyRules(doc: ReadableProfile, hw: HardwareContext, out: Va
   if (!fans) return;
   const stops = hw.fan.stopsAtZeroDuty === true;
   const stopC = fans.stopBelowTempC;
-  fans.points.forEach((p, i) => {
+  const points = fans.points;
+  for (let i = 0; i < points.length; i++) {
+    const p = points[i]!;
     if (stops && p.dutyPct <= 0) {
       if (stopC === undefined) {
         out.push(error("fans.zero_duty_stops_fan", `/fans/points/${i}/dutyPct`, `Fan point ${pointNo(i)} asks for 0 %, and this fan stops at 0 % duty: the fans would stop at ${fmt(p.tempC)} °C without a fan stop temperature, so without its hysteresis and safety checks. Set stopBelowTempC to stop them (e.g. ${fmt(p.tempC)} °C), or give this point at least the fan's minimum duty ${fmt(hw.fan.minDutyPct)} %.`));
       } else if (p.tempC >= stopC) {
         out.push(error("fans.zero_duty_stops_fan", `/fans/points/${i}/dutyPct`, `Fan point ${pointNo(i)} asks for 0 % at ${fmt(p.tempC)} °C, at or above the fan stop temperature ${fmt(stopC)} °C, and this fan stops at 0 % duty: the fans would stop there although the stop temperature says they run. Raise this point to at least the fan's minimum duty ${fmt(hw.fan.minDutyPct)} %, or raise stopBelowTempC above ${fmt(p.tempC)} °C.`));
       }
-      return;
+      continue;
     }
     if (p.dutyPct < hw.fan.minDutyPct) {
       const stopAdvice = stops ? "Raise it, or use stopBelowTempC to stop them." : "Raise it; this fan does not stop at 0 % duty.";
       out.push(warning("fans.below_min_duty", `/fans/points/${i}/dutyPct`, `Fan point ${pointNo(i)}: ${fmt(p.dutyPct)} % is below the fan's minimum duty ${fmt(hw.fan.minDutyPct)} %, so the fans hold their minimum ${fmt(hw.fan.rpmAtMinDuty)} RPM there. ${stopAdvice}`));
     }
-  });
+  }
   if (!stops && stopC !== undefined) {
     out.push(warning("fans.stop_on_fan_that_holds_speed", "/fans/stopBelowTempC", `The fans are set to stop below ${fmt(stopC)} °C, but this fan keeps its minimum speed at 0 % duty: below ${fmt(stopC)} °C they run at ${fmt(hw.fan.rpmAtMinDuty)} RPM, not stopped. Use a fan that stops at 0 % duty, or remove stopBelowTempC.`));
   }
 }
 
-function quantisationRules(doc: ReadableProfile, out: ValidationIssue[]): void {
-  for (const [kind, curve] of readableCurves(doc)) {
-    const q = quantiseCurve(curve);
-    curve.points.forEach((p, i) => {
-      const qp = q.points[i]!;
-      const prev = q.points[i - 1];
-      if (prev && curve.points[i - 1]!.tempC < p.tempC && !(qp.tempC > prev.tempC)) {
-        out.push(error("quantisation.temps_collide", `/${kind}/points/${i}/tempC`, `Stored in ${TEMP_STEP_C} °C steps this point falls on ${fmt(qp.tempC)} °C like the point before: space the points at least ${TEMP_STEP_C} °C apart.`));
+function quantisationRules(doc: ReadableProfile, curves: ReadableCurves, out: ValidationIssue[]): void {
+  for (const [kind, curve] of curves) {
+    const points = curve.points;
+    let prevStoredTempC = Number.NaN;
+    for (let i = 0; i < points.length; i++) {
+      const p = points[i]!;
+      const storedPointTempC = storedTempC(p.tempC);
+      const storedPointDutyPct = storedDutyPct(p.dutyPct);
+      if (i > 0 && points[i - 1]!.tempC < p.tempC && !(storedPointTempC > prevStoredTempC)) {
+        out.push(error("quantisation.temps_collide", `/${kind}/points/${i}/tempC`, `Stored in ${TEMP_STEP_C} °C steps this point falls on ${fmt(storedPointTempC)} °C like the point before: space the points at least ${TEMP_STEP_C} °C apart.`));
       }
-      if (qp.tempC !== p.tempC) {
-        out.push(warning("quantisation.loss", `/${kind}/points/${i}/tempC`, `Stored as ${fmt(qp.tempC)} °C (${TEMP_STEP_C} °C steps, rounded down); write ${fmt(qp.tempC)} to see exactly what the board runs.`));
+      if (storedPointTempC !== p.tempC) {
+        out.push(warning("quantisation.loss", `/${kind}/points/${i}/tempC`, `Stored as ${fmt(storedPointTempC)} °C (${TEMP_STEP_C} °C steps, rounded down); write ${fmt(storedPointTempC)} to see exactly what the board runs.`));
       }
-      if (qp.dutyPct !== p.dutyPct) {
-        out.push(warning("quantisation.loss", `/${kind}/points/${i}/dutyPct`, `Stored as ${fmt(qp.dutyPct)} % (${DUTY_STEP_PCT} % steps, rounded up); write ${fmt(qp.dutyPct)} to see exactly what the board runs.`));
+      if (storedPointDutyPct !== p.dutyPct) {
+        out.push(warning("quantisation.loss", `/${kind}/points/${i}/dutyPct`, `Stored as ${fmt(storedPointDutyPct)} % (${DUTY_STEP_PCT} % steps, rounded up); write ${fmt(storedPointDutyPct)} to see exactly what the board runs.`));
       }
-    });
-    for (const field of ["hysteresisC", "rampUpPctPerSec", "rampDownPctPerSec"] as const) {
-      if (q[field] !== curve[field]) {
-        out.push(warning("quantisation.loss", `/${kind}/${field}`, `Stored as ${fmt(q[field])}; write that value to see exactly what the board runs.`));
-      }
+      prevStoredTempC = storedPointTempC;
     }
+    settingLoss(`/${kind}/hysteresisC`, curve.hysteresisC, storedHysteresisC(curve.hysteresisC), "", out);
+    settingLoss(`/${kind}/rampUpPctPerSec`, curve.rampUpPctPerSec, storedRampUpPctPerSec(curve.rampUpPctPerSec), "", out);
+    settingLoss(`/${kind}/rampDownPctPerSec`, curve.rampDownPctPerSec, storedRampDownPctPerSec(curve.rampDownPctPerSec), "", out);
   }
-  const storedTemp = (c: number): number => tempFromCode(tempCode(c));
-  const single: [string, number | undefined, (v: number) => number][] = [
-    ["/criticalTempC", doc.criticalTempC, storedTemp],
-    ["/sensorLossDutyPct", doc.sensorLossDutyPct, (d) => dutyFromCode(dutyCode(d))],
-    ["/fans/stopBelowTempC", doc.fans?.stopBelowTempC, storedTemp],
-  ];
-  for (const [path, before, store] of single) {
-    if (before === undefined) continue;
-    const after = store(before);
-    if (before !== after) out.push(warning("quantisation.loss", path, `Stored as ${fmt(after)}${path.endsWith("TempC") ? " °C" : ""}; write that value to see exactly what the board runs.`));
-  }
+  if (doc.criticalTempC !== undefined) settingLoss("/criticalTempC", doc.criticalTempC, storedTempC(doc.criticalTempC), " °C", out);
+  if (doc.sensorLossDutyPct !== undefined) settingLoss("/sensorLossDutyPct", doc.sensorLossDutyPct, storedDutyPct(doc.sensorLossDutyPct), "", out);
+  const stop = doc.fans?.stopBelowTempC;
+  if (stop !== undefined) settingLoss("/fans/stopBelowTempC", stop, storedTempC(stop), " °C", out);
+}
+
+/** A single setting the stored format changes: warns with the value the board runs (the message is written only then). */
+function settingLoss(path: string, before: number, after: number, unit: string, out: ValidationIssue[]): void {
+  if (before !== after) out.push(warning("quantisation.loss", path, `Stored as ${fmt(after)}${unit}; write that value to see exactly what the board runs.`));
 }
 
 /**
@@ -175,9 +194,10 @@ function quantisationRules(doc: ReadableProfile, out: ValidationIssue[]): void {
  */
 export function profileRuleIssues(doc: CoolingProfile | ReadableProfile, hw?: HardwareContext): ValidationIssue[] {
   const out: ValidationIssue[] = [];
-  for (const [kind, curve] of readableCurves(doc)) orderRules(kind, curve, out);
-  safetyRules(doc, out);
-  if (hw) hardwareRules(doc, hw, out);
-  quantisationRules(doc, out);
+  const curves = readableCurves(doc);
+  for (const [kind, curve] of curves) orderRules(kind, curve, out);
+  safetyRules(doc, curves, out);
+  if (hw) hardwareRules(doc, curves, hw, out);
+  quantisationRules(doc, curves, out);
   return out;
 }
