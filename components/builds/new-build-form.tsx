@@ -3,7 +3,7 @@
 import dynamic from "next/dynamic";
 import { useState } from "react";
 import { useRouter } from "next/navigation";
-import { useMutation, useQuery } from "@tanstack/react-query";
+import { keepPreviousData, useMutation, useQuery } from "@tanstack/react-query";
 import { useForm, useWatch } from "react-hook-form";
 import { apiCall, apiQuery, apiUploadJson } from "@/lib/api/client";
 import { AppError } from "@/lib/api/errors";
@@ -38,7 +38,11 @@ export function NewBuildForm() {
   const boardModelId = useWatch({ control: form.control, name: "boardModelId" });
   const chosenSlots = useWatch({ control: form.control, name: "slots" });
   const revisionRange = useWatch({ control: form.control, name: "revisionRange" });
-  const options = useQuery(apiQuery(getBuildOptions, { query: { boardModelId } }));
+  // While a picked board model's options load, the previous answer keeps the board list in place:
+  // were its options gone for a moment, the list would fall back to showing the first board model
+  // while the form holds the picked one. Revisions and versions come only from the current answer.
+  const options = useQuery({ ...apiQuery(getBuildOptions, { query: { boardModelId } }), placeholderData: keepPreviousData });
+  const current = options.isPlaceholderData ? undefined : options.data;
   const create = useMutation({
     mutationFn: async (values: FormValues) => {
       if (!file) throw new AppError("validation_failed", "Pick the firmware image file.");
@@ -55,7 +59,8 @@ export function NewBuildForm() {
     onError: (err) => showServerIssues(form, err),
   });
   const { errors } = form.formState;
-  const candidates = options.data?.candidates ?? [];
+  // The versions on offer are those written for the chosen board model's coolers: none until one is chosen.
+  const candidates = boardModelId ? (current?.candidates ?? []) : [];
   const chosen = (chosenSlots ?? []).filter(Boolean).map((id) => candidates.find((c) => c.id === id)).filter((c) => c !== undefined);
   const bankBytes = bankBytesFromVersionImages(chosen.map((c) => c.encodedBytes));
 
@@ -79,7 +84,7 @@ export function NewBuildForm() {
             ))}
           </Select>
         </Field>
-        {options.data && boardModelId && options.data.revisions.length === 0 && <p className="text-xs text-ink-600">This board model has no revisions yet.</p>}
+        {current && boardModelId && current.revisions.length === 0 && <p className="text-xs text-ink-600">This board model has no revisions yet.</p>}
         <div className="grid gap-4 sm:grid-cols-2">
           <Field id="version" label="Build version" hint="Semantic version, e.g. 1.5.0" error={errors.version?.message}>
             <Input {...describedBy("version", errors.version?.message)} {...form.register("version")} autoComplete="off" />
@@ -90,16 +95,16 @@ export function NewBuildForm() {
         </div>
         <fieldset className="space-y-2">
           <legend className="text-sm font-medium text-ink-800">Slots (published profile versions)</legend>
-          {options.data && candidates.length === 0 && (
-            <p className="text-xs text-ink-600">
-              {boardModelId ? "No profile version is published for this board model's coolers yet; publish one from Profiles first." : "Pick a board model to see its profile versions."}
-            </p>
+          {!boardModelId ? (
+            <p className="text-xs text-ink-600">Pick a board model to see its profile versions.</p>
+          ) : (
+            current && candidates.length === 0 && <p className="text-xs text-ink-600">No profile version is published for this board model&apos;s coolers yet; publish one from Profiles first.</p>
           )}
           {Array.from({ length: slotCount }, (_, i) => (
             <Field key={i} id={`slot-${i}`} label={`Slot ${i + 1}`} error={i === 0 ? errors.slots?.message ?? errors.slots?.[0]?.message : errors.slots?.[i]?.message}>
               <Select {...describedBy(`slot-${i}`)} {...form.register(`slots.${i}`)} defaultValue="">
                 <option value="">{i === 0 ? "Pick a profile version…" : "(empty)"}</option>
-                {options.data?.candidates.map((c) => (
+                {candidates.map((c) => (
                   <option key={c.id} value={c.id}>
                     {c.coolerModel} · {c.profileName} {c.version} ({c.encodedBytes} B, boards {c.boardRange})
                   </option>
@@ -121,8 +126,8 @@ export function NewBuildForm() {
             </Button>
           </div>
         </fieldset>
-        {options.data && boardModelId && options.data.revisions.length > 0 && (
-          <BankFit bankBytes={bankBytes} slots={chosen.length} revisionRange={revisionRange} revisions={options.data.revisions} />
+        {current && boardModelId && current.revisions.length > 0 && (
+          <BankFit bankBytes={bankBytes} slots={chosen.length} revisionRange={revisionRange} revisions={current.revisions} />
         )}
         <Field id="firmware" label="Firmware image" hint={`.bin (raw bytes) or Intel HEX .hex, at most ${UPLOAD_MAX_BYTES.firmware / 1024 / 1024} MiB`} error={fileError}>
           <FilePicker

@@ -88,7 +88,7 @@ test.describe("user admin", () => {
 });
 
 test.describe("new build form", () => {
-  test("one sidebar entry is current, no hint to pick a board while the slot lists are full, slots are removed by a button, and the bank is sized against each revision before creating", async ({ page }) => {
+  test("one sidebar entry is current, nothing offered in the slots until a board is picked and then that board's versions, slots are removed by a button, and the bank is sized against each revision before creating", async ({ page }) => {
     test.setTimeout(120_000);
     await signInPage(page, ACCOUNTS.engineer);
     const form = await new NewBuildForm(page).goto();
@@ -99,13 +99,28 @@ test.describe("new build form", () => {
     await expect(pipeline.currentNavEntries).toHaveText("Builds");
     await form.goto();
 
-    // Once the board is picked the lists fill, and the hint asking to pick a board goes away.
-    // (Before that the form offers the first board model's versions; in the test database other
-    // tests have added board models, so what it offers before a pick is not checked here.)
+    // Before a board model is picked the slot lists offer nothing and say to pick one first, also
+    // once the form's options have loaded (the board list is filled from the same answer).
+    await expect(form.boardModelOption("TC-1 cooler controller")).toBeAttached();
+    await expect(form.pickBoardFirstHint).toBeVisible();
+    await expect(form.slots).toHaveCount(2);
+    await expect(form.offeredVersions(1)).toHaveCount(0);
+    await expect(form.offeredVersions(2)).toHaveCount(0);
+
+    // Once the board is picked the lists offer that board's versions, the ones the API gives for
+    // it, the hint asking to pick a board goes away, and the list still shows the picked board
+    // (not the first one, which other tests' board models may be).
     const version = `${100 + Math.floor(Math.random() * 150)}.${Math.floor(Math.random() * 256)}.${Math.floor(Math.random() * 256)}`;
     await form.describe({ board: "TC-1 cooler controller", version, revisions: ">=1.0.0 <3.0.0" });
     await expect(form.slot(1).locator("option", { hasText: "Tarn 240 · Quiet office" }).first()).toBeAttached();
     await expect(form.slotsHint).toHaveCount(0);
+    await expect(form.shownBoardModel).toHaveText("TC-1 cooler controller");
+    const answer = await page.request.get(`/api/v1/builds/options?boardModelId=${await form.boardModel.inputValue()}`);
+    expect(answer.status()).toBe(200);
+    const forBoard = ((await answer.json()) as { candidates: { id: string }[] }).candidates.map((c) => c.id).sort();
+    expect(forBoard.length).toBeGreaterThan(0);
+    expect(await form.offeredVersionIds(1)).toEqual(forBoard);
+    expect(await form.offeredVersionIds(2)).toEqual(forBoard);
 
     // Slots: Remove the last slot is a button, and removes one; the last one stays.
     await expect(form.slots).toHaveCount(2);

@@ -32,9 +32,38 @@ export class NewBuildForm extends Screen {
   }
 
   async describe({ board, version, revisions }: { board: string; version: string; revisions: string }): Promise<void> {
-    await this.page.getByLabel("Board model").selectOption({ label: board });
+    await this.boardModel.selectOption({ label: board });
     await this.page.getByLabel("Build version").fill(version);
     await this.page.getByLabel("Board revisions").fill(revisions);
+  }
+
+  get boardModel(): Locator {
+    return this.page.getByLabel("Board model");
+  }
+
+  /** The board model list's entry `name`: there once the form's options have loaded. */
+  boardModelOption(name: string): Locator {
+    return this.boardModel.locator("option", { hasText: name });
+  }
+
+  /** The board model the list shows as picked. */
+  get shownBoardModel(): Locator {
+    return this.boardModel.locator("option:checked");
+  }
+
+  /** The profile versions slot `n` offers: its options that pick something (not the prompt or "(empty)"). */
+  offeredVersions(n: number): Locator {
+    return this.slot(n).locator('option:not([value=""])');
+  }
+
+  /** The ids of the profile versions slot `n` offers, sorted. */
+  async offeredVersionIds(n: number): Promise<string[]> {
+    return (await this.offeredVersions(n).evaluateAll((options) => options.map((o) => (o as HTMLOptionElement).value))).sort();
+  }
+
+  /** The note under Slots that asks for a board model before any version is offered. */
+  get pickBoardFirstHint(): Locator {
+    return this.page.getByText("Pick a board model to see its profile versions.", { exact: true });
   }
 
   /** The option of slot `n` whose text contains `text`, once the list is filled for the chosen board. */
