@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq, lte, or, sql } from "drizzle-orm";
+import { and, desc, eq, inArray, lte, or, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import {
   boardRevisions,
@@ -23,11 +23,12 @@ const pump = alias(components, "pump");
  * fixed name so PostgreSQL plans it once per connection. The inner select walks the btree
  * (board_model_id, serial_from) backwards to the last lot starting at or below the serial
  * (LIMIT 1 keeps the planner from sorting; the caller checks serial_to). Joined to it: the
- * board revision, and every build that matters for the answer (the shipped one, and the
- * board model's production builds, newer ones picked in code by semver) with their slots,
- * profiles and hardware. Left joins keep the lot when a build has no slots.
+ * board revision, and the builds that matter for the answer — the shipped one and the board
+ * model's production builds (newer ones picked in code by semver) — with their stage as it
+ * is now. Their slots are read apart by id (`listSlotsOfBuilds`): fixed once a build leaves
+ * draft, so the caller may keep them.
  */
-function buildLookupBySerial(db: Database) {
+function buildLotBySerial(db: Database) {
   const lot = db
     .select({
       id: productionLots.id,
@@ -79,6 +80,49 @@ function buildLookupBySerial(db: Database) {
         revisionRange: builds.revisionRange,
         withdrawnReason: builds.withdrawnReason,
       },
+    })
+    .from(lot)
+    .innerJoin(boardRevisions, eq(boardRevisions.id, lot.boardRevisionId))
+    .innerJoin(builds, or(eq(builds.id, lot.buildId), and(eq(builds.boardModelId, lot.boardModelId), eq(builds.stage, "production"))))
+    .prepare("support_lot_by_serial");
+}
+
+const prepared = new WeakMap<Database, ReturnType<typeof buildLotBySerial>>();
+
+type LotRow = Awaited<ReturnType<ReturnType<typeof buildLotBySerial>["execute"]>>[number];
+export type LookupBuild = LotRow["build"];
+export interface LotBySerial {
+  lot: LotRow["lot"];
+  revision: LotRow["revision"];
+  /** The shipped build and the board model's production builds, each once, with their stage now. */
+  builds: LookupBuild[];
+}
+
+/**
+ * The lot holding this serial of the board model with this prefix, its revision, and the
+ * builds that matter for the answer. Undefined when no lot holds the serial.
+ */
+export async function findLotBySerial(db: Database, { prefix, serialNumber }: { prefix: string; serialNumber: number }): Promise<LotBySerial | undefined> {
+  let statement = prepared.get(db);
+  if (!statement) {
+    statement = buildLotBySerial(db);
+    prepared.set(db, statement);
+  }
+  const rows = await statement.execute({ prefix, serial: serialNumber });
+  const first = rows[0];
+  if (!first || first.lot.serialTo < serialNumber) return undefined;
+  return { lot: first.lot, revision: first.revision, builds: rows.map((r) => r.build) };
+}
+
+/**
+ * The slots of these builds with their published versions, profiles and hardware, one row
+ * per slot, in slot order. A slot whose cooler, fan or pump is missing comes with those null.
+ */
+export async function listSlotsOfBuilds(db: Executor, { buildIds }: { buildIds: string[] }) {
+  if (!buildIds.length) return [];
+  return db
+    .select({
+      buildId: buildSlots.buildId,
       slotIndex: buildSlots.slotIndex,
       profileVersionId: profileVersions.id,
       version: profileVersions.version,
@@ -121,39 +165,16 @@ function buildLookupBySerial(db: Database) {
         flowAtMaxRpmLpm: pump.flowAtMaxRpmLpm,
       },
     })
-    .from(lot)
-    .innerJoin(boardRevisions, eq(boardRevisions.id, lot.boardRevisionId))
-    .innerJoin(builds, or(eq(builds.id, lot.buildId), and(eq(builds.boardModelId, lot.boardModelId), eq(builds.stage, "production"))))
-    .leftJoin(buildSlots, eq(buildSlots.buildId, builds.id))
-    .leftJoin(profileVersions, eq(profileVersions.id, buildSlots.profileVersionId))
-    .leftJoin(profiles, eq(profiles.id, profileVersions.profileId))
+    .from(buildSlots)
+    .innerJoin(profileVersions, eq(profileVersions.id, buildSlots.profileVersionId))
+    .innerJoin(profiles, eq(profiles.id, profileVersions.profileId))
     .leftJoin(coolerModels, eq(coolerModels.id, profiles.coolerModelId))
     .leftJoin(fan, eq(fan.id, coolerModels.fanComponentId))
     .leftJoin(pump, eq(pump.id, coolerModels.pumpComponentId))
-    .orderBy(builds.id, buildSlots.slotIndex)
-    .prepare("support_lookup_by_serial");
+    .where(inArray(buildSlots.buildId, buildIds))
+    .orderBy(buildSlots.buildId, buildSlots.slotIndex);
 }
-
-const prepared = new WeakMap<Database, ReturnType<typeof buildLookupBySerial>>();
-
-export type LookupRow = Awaited<ReturnType<ReturnType<typeof buildLookupBySerial>["execute"]>>[number];
-
-/**
- * The lot holding this serial of the board model with this prefix, its revision, and the
- * rows of the builds that matter for the answer (one per slot; one with null slot fields
- * for a build without slots). Undefined when no lot holds the serial.
- */
-export async function findLookupBySerial(db: Database, { prefix, serialNumber }: { prefix: string; serialNumber: number }): Promise<LookupRow[] | undefined> {
-  let statement = prepared.get(db);
-  if (!statement) {
-    statement = buildLookupBySerial(db);
-    prepared.set(db, statement);
-  }
-  const rows = await statement.execute({ prefix, serial: serialNumber });
-  const first = rows[0];
-  if (!first || first.lot.serialTo < serialNumber) return undefined;
-  return rows;
-}
+export type BuildSlotRow = Awaited<ReturnType<typeof listSlotsOfBuilds>>[number];
 
 export async function recordLookup(db: Executor, { userId, serial, found }: { userId: string; serial: string; found: boolean }): Promise<void> {
   await db.insert(recentLookups).values({ userId, serial, found });

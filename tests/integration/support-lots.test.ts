@@ -3,7 +3,7 @@ import { and, eq, sql } from "drizzle-orm";
 import { closeDb, demoActor, getDb } from "./support/db";
 import { createLot } from "@/lib/use-cases/lots/create";
 import { importLots } from "@/lib/use-cases/lots/import";
-import { findLookupBySerial } from "@/db/lookup";
+import { findLotBySerial } from "@/db/lookup";
 import { boardModels, builds, productionLots } from "@/db/schema";
 import { parseLotsCsv } from "@/lib/lots/csv";
 import { lookupSerial } from "@/lib/use-cases/support/lookup";
@@ -90,11 +90,11 @@ describe("production lots", () => {
 describe("serial lookup", () => {
   it("finds the lot at both ends of its range and nothing in a gap", async () => {
     const db = getDb();
-    expect((await findLookupBySerial(db, { prefix: "TC1", serialNumber: 10_000 }))?.[0]?.lot.lotCode).toBe("TW-2501");
-    expect((await findLookupBySerial(db, { prefix: "TC1", serialNumber: 29_999 }))?.[0]?.lot.lotCode).toBe("TW-2501");
-    expect(await findLookupBySerial(db, { prefix: "TC1", serialNumber: 9_999 })).toBeUndefined();
-    expect(await findLookupBySerial(db, { prefix: "TC1", serialNumber: 80_000 })).toBeUndefined();
-    expect(await findLookupBySerial(db, { prefix: "ZZ9", serialNumber: 10_000 })).toBeUndefined();
+    expect((await findLotBySerial(db, { prefix: "TC1", serialNumber: 10_000 }))?.lot.lotCode).toBe("TW-2501");
+    expect((await findLotBySerial(db, { prefix: "TC1", serialNumber: 29_999 }))?.lot.lotCode).toBe("TW-2501");
+    expect(await findLotBySerial(db, { prefix: "TC1", serialNumber: 9_999 })).toBeUndefined();
+    expect(await findLotBySerial(db, { prefix: "TC1", serialNumber: 80_000 })).toBeUndefined();
+    expect(await findLotBySerial(db, { prefix: "ZZ9", serialNumber: 10_000 })).toBeUndefined();
   });
 
   it("shows the withdrawn build with its reason and the newer production build's changes", async () => {

@@ -4,6 +4,7 @@ import { recordAudit, type AuditActor } from "@/db/audit";
 import { componentKinds } from "@/db/components";
 import { countProfilesOf, getCoolerModelView, insertCoolerModel, lockCoolerModel, updateCoolerModelRow, type CoolerModelInput } from "@/db/cooler-models";
 import { AppError } from "@/lib/api/errors";
+import { forgetBuildSlots } from "@/lib/use-cases/support/build-slots";
 
 /** The fan and pump references must name a fan and a pump; a foreign key alone cannot say which kind (422 naming the field). */
 async function checkParts(tx: Executor, input: Pick<CoolerModelInput, "fanComponentId" | "pumpComponentId">) {
@@ -33,7 +34,7 @@ export async function createCoolerModel(db: Database, actor: AuditActor, input: 
  * profiles are versioned against board ranges of this cooler's board, so moving it would orphan them.
  */
 export async function updateCoolerModel(db: Database, actor: AuditActor, { id, ...input }: CoolerModelInput & { id: string }) {
-  return db.transaction(async (tx) => {
+  const updated = await db.transaction(async (tx) => {
     const before = await lockCoolerModel(tx, { id });
     if (!before) throw new AppError("not_found", "No such cooler model.");
     await checkParts(tx, input);
@@ -49,4 +50,7 @@ export async function updateCoolerModel(db: Database, actor: AuditActor, { id, .
     await recordAudit(tx, actor, { action: "cooler_model.update", entityType: "cooler_model", entityId: id, before, after: row });
     return viewOf(tx, id);
   });
+  // The serial lookup shows a slot's cooler figures from memory; after the commit, not before.
+  forgetBuildSlots();
+  return updated;
 }
