@@ -59,6 +59,16 @@ export function NewBuildForm() {
     onError: (err) => showServerIssues(form, err),
   });
   const { errors } = form.formState;
+  // Slot versions and the revision range were chosen for the previous board model (versions are
+  // for its coolers, the range is over its revisions): kept, they would be sent with the new board
+  // while the lists show nothing picked, and the server would refuse them. So they start over, and
+  // so do the messages about them.
+  function forgetOldBoard() {
+    form.setValue("slots", Array.from({ length: slotCount }, () => ""));
+    form.setValue("revisionRange", "");
+    form.clearErrors(["slots", "revisionRange"]);
+    if (!create.isPending) create.reset();
+  }
   // The versions on offer are those written for the chosen board model's coolers: none until one is chosen.
   const candidates = boardModelId ? (current?.candidates ?? []) : [];
   const chosen = (chosenSlots ?? []).filter(Boolean).map((id) => candidates.find((c) => c.id === id)).filter((c) => c !== undefined);
@@ -77,7 +87,7 @@ export function NewBuildForm() {
         })}
       >
         <Field id="boardModelId" label="Board model" error={errors.boardModelId?.message}>
-          <Select {...describedBy("boardModelId", errors.boardModelId?.message)} {...form.register("boardModelId")} defaultValue="">
+          <Select {...describedBy("boardModelId", errors.boardModelId?.message)} {...form.register("boardModelId", { onChange: forgetOldBoard })} defaultValue="">
             <option value="" disabled>Pick a board model…</option>
             {options.data?.boardModels.map((b) => (
               <option key={b.id} value={b.id}>{b.name}</option>

@@ -88,9 +88,14 @@ test.describe("user admin", () => {
 });
 
 test.describe("new build form", () => {
-  test("one sidebar entry is current, nothing offered in the slots until a board is picked and then that board's versions, slots are removed by a button, and the bank is sized against each revision before creating", async ({ page }) => {
+  test("one sidebar entry is current, nothing offered in the slots until a board is picked and then that board's versions, slots are removed by a button, switching board clears the picked versions and range, and the bank is sized against each revision before creating", async ({ page }) => {
     test.setTimeout(120_000);
     await signInPage(page, ACCOUNTS.engineer);
+    // A second board model, with no coolers (so no profile versions) yet, to switch to.
+    const otherBoard = `Bench board ${Date.now()}`;
+    const serialPrefix = `B${Math.random().toString(36).slice(2, 8).toUpperCase().padEnd(6, "0")}`;
+    const made = await page.request.post("/api/v1/board-models", { data: { name: otherBoard, serialPrefix, description: "Second board for the new-build form's switch check." } });
+    expect(made.status(), await made.text()).toBe(201);
     const form = await new NewBuildForm(page).goto();
     await expect(form.currentNavEntries).toHaveCount(1);
     await expect(form.currentNavEntries).toHaveText("New build");
@@ -130,6 +135,34 @@ test.describe("new build form", () => {
     await expect(form.removeSlot).toBeDisabled();
     await form.addSlot.click();
     await expect(form.slots).toHaveCount(2);
+
+    // Switching board model after picking a version and a range: the version was for the old
+    // board's coolers and the range over its revisions, so both are gone, in the lists and in what
+    // a submit sends, which the form then says is still needed instead of sending old ids.
+    await form.pickSlot(1, "Tarn 240 · Quiet office");
+    await expect(form.bankFit).toContainText("The bank takes");
+    await form.boardModel.selectOption({ label: otherBoard });
+    await expect(form.shownBoardModel).toHaveText(otherBoard);
+    await expect(form.slotsHint).toHaveText(/^No profile version is published for this board model's coolers yet/);
+    await expect(form.slot(1)).toHaveValue("");
+    await expect(form.slot(2)).toHaveValue("");
+    await expect(form.revisionRange).toHaveValue("");
+    await expect(form.buildVersion).toHaveValue(version);
+    await form.createButton.click();
+    await expect(form.fieldError("slot-0")).toHaveText(/^(Pick a profile version\.|Put at least one profile version in a slot\.)$/);
+    await expect(form.fieldError("revisionRange")).toHaveText(/^Give the board revisions/);
+    await expect(form.alert(/another board model|does not exist|does not fit/)).toHaveCount(0);
+    expect(new URL(page.url()).pathname).toBe("/builds/new");
+
+    // Back to the first board: its versions are offered again, none is picked, and the bank check
+    // counts no slot (it counted the old pick while the lists showed none).
+    await form.boardModel.selectOption({ label: "TC-1 cooler controller" });
+    await expect(form.slotOption(1, "Tarn 240 · Quiet office")).toBeAttached();
+    await expect(form.slot(1)).toHaveValue("");
+    await expect(form.slot(2)).toHaveValue("");
+    await expect(form.fieldError("slot-0")).toHaveCount(0);
+    await expect(form.bankFit).toContainText("Pick profile versions to see the bank's size.");
+    await form.revisionRange.fill(">=1.0.0 <3.0.0");
 
     // The bank the two slots make, against each revision's profile memory and slot count (demo revisions).
     await form.pickSlot(1, "Tarn 240 · Quiet office");

@@ -33,12 +33,25 @@ export class NewBuildForm extends Screen {
 
   async describe({ board, version, revisions }: { board: string; version: string; revisions: string }): Promise<void> {
     await this.boardModel.selectOption({ label: board });
-    await this.page.getByLabel("Build version").fill(version);
-    await this.page.getByLabel("Board revisions").fill(revisions);
+    await this.buildVersion.fill(version);
+    await this.revisionRange.fill(revisions);
   }
 
   get boardModel(): Locator {
     return this.page.getByLabel("Board model");
+  }
+
+  get buildVersion(): Locator {
+    return this.page.getByLabel("Build version");
+  }
+
+  get revisionRange(): Locator {
+    return this.page.getByLabel("Board revisions");
+  }
+
+  /** The message a field of this form shows under it when what it holds is refused (field ids: `revisionRange`, `slot-0`, …). */
+  fieldError(id: string): Locator {
+    return this.page.locator(`[id="${id}-error"]`);
   }
 
   /** The board model list's entry `name`: there once the form's options have loaded. */
@@ -116,9 +129,13 @@ export class NewBuildForm extends Screen {
     await this.chooseFile("Firmware image", { name, mimeType: "application/octet-stream", buffer: bytes });
   }
 
+  get createButton(): Locator {
+    return this.button("Create build");
+  }
+
   /** Submits and waits for the new build's page; answers its path. */
   async create(): Promise<string> {
-    await this.button("Create build").click();
+    await this.createButton.click();
     await this.page.waitForURL(/\/builds\/[0-9a-f-]{36}$/);
     return new URL(this.page.url()).pathname;
   }
