@@ -10,7 +10,7 @@ import type { CoolingProfile } from "@/lib/engine";
 // From its own module, not the engine's index: the index would bring the validators and the encoder into the page.
 import { evaluateCurves } from "@/lib/evaluation/curve-table";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
-import { coolingBranchRpm } from "@/lib/registry/editor-evaluation";
+import { coolingBranchRpm } from "@/lib/registry/cooling-branch";
 import { documentText } from "@/lib/registry/starter-profile";
 import { Select } from "@/components/ui/field";
 import { EstimateCaution, Notice } from "@/components/ui/notice";

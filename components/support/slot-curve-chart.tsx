@@ -2,7 +2,7 @@
 
 import { Area, CartesianGrid, ComposedChart, Legend, Line, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { evaluateCurves } from "@/lib/evaluation/curve-table";
-import { coolingBranchRpm } from "@/lib/registry/editor-evaluation";
+import { coolingBranchRpm } from "@/lib/registry/cooling-branch";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import type { LookupResult, LookupSlot } from "@/lib/api/operations/support";
 import { evenTicks } from "@/components/profiles/charts/plot-geometry";

@@ -1,11 +1,9 @@
 import {
   bankBytes,
   componentLevelDbA,
-  dutyAtTemp,
   dutyToRpm,
   evaluateCurves,
   identicalSourcesDb,
-  isValidRange,
   loadSweep,
   quantise,
   validateProfileText,
@@ -17,7 +15,8 @@ import {
   type ValidationIssue,
 } from "@/lib/engine";
 import { flashedStateAt, slotCodes } from "@/lib/firmware";
-import { fitRange, misfitReasons, rangeFitMessage, type RevisionCapacity } from "./range-fit";
+import { coolingBranchRpm } from "./cooling-branch";
+import { fitAdmittedRevisions, misfitReasons, rangeFitMessage, type RevisionCapacity } from "./range-fit";
 
 /** One plotted temperature: authored and as-flashed speeds, and the estimated sound level. */
 export interface PlotRow {
@@ -57,20 +56,6 @@ export function plotRangeC(profile: ProfileSettings): { fromC: number; toC: numb
   const lo = Math.min(PLOT_FROM_C, ...temps.map((t) => Math.floor(t / 5) * 5));
   const hi = Math.max(PLOT_TO_C, ...temps.map((t) => Math.ceil(t / 5) * 5));
   return { fromC: Math.max(0, lo), toC: Math.min(100, hi) };
-}
-
-/**
- * Pump or fan RPM while the liquid cools at `tempC`: the firmware holds the curve's
- * input at T + hysteresis (play operator, lib/transient), so the falling branch is the
- * curve read there; full speed at or above the critical temperature; fans at 0 % while
- * the held temperature is below the stop temperature (standing still only if they stop at 0 % duty).
- */
-export function coolingBranchRpm(profile: ProfileSettings, hw: HardwareContext, kind: CurveKind, tempC: number): number {
-  const motor = kind === "pump" ? hw.pump : hw.fan;
-  if (tempC >= profile.criticalTempC) return dutyToRpm(100, motor);
-  const held = tempC + profile[kind].hysteresisC;
-  if (kind === "fans" && profile.fans.stopBelowTempC !== undefined && held < profile.fans.stopBelowTempC) return dutyToRpm(0, motor);
-  return dutyToRpm(dutyAtTemp(profile[kind].points, held), motor);
 }
 
 /**
@@ -143,16 +128,19 @@ export function safeLoadSweep(profile: CoolingProfile, hw: HardwareContext, ambi
 
 /**
  * Bytes of a bank holding this profile alone against each board revision, judged against
- * the range typed in the publish form with the same rule publishing applies (fitRange:
- * points per curve, profile memory, a slot, for every revision the range admits), so the
- * gauge and a publish refusal cannot disagree. `rangeProblem` is the sentence publishing
- * would refuse with; null when the range is fine, empty or not yet a valid range.
+ * the range typed in the publish form with the same rule publishing applies (points per
+ * curve, profile memory, a slot, for every revision the range admits: fitAdmittedRevisions),
+ * so the gauge and a publish refusal cannot disagree. `admitted` is what the range admits,
+ * in version order (admittedRevisions in range-match.ts, loaded when a range is checked);
+ * null while the range is empty or not yet a valid range. `rangeProblem` is the sentence
+ * publishing would refuse with; null when the range is fine or not (yet) judged.
  */
-export function memoryUse(profile: CoolingProfile, boardRange: string | null, revisions: readonly RevisionCapacity[]) {
+export function memoryUse(profile: CoolingProfile, boardRange: string | null, revisions: readonly RevisionCapacity[], admitted: readonly string[] | null) {
   const imageBytes = bankBytes([{ pumpPoints: profile.pump.points.length, fanPoints: profile.fans.points.length }]);
   const needs = { pointsPerCurve: Math.max(profile.pump.points.length, profile.fans.points.length), encodedBytes: imageBytes };
-  const range = boardRange?.trim() && isValidRange(boardRange.trim()) ? boardRange.trim() : null;
-  const fit = range ? fitRange(range, revisions, needs) : null;
+  const range = boardRange?.trim() ?? "";
+  const inRange = range === "" || admitted === null ? null : admitted.flatMap((revision) => revisions.filter((r) => r.revision === revision));
+  const fit = inRange ? fitAdmittedRevisions(inRange, needs) : null;
   const rows = revisions.map((r) => {
     const reasons = misfitReasons(r, needs);
     return {
@@ -165,6 +153,6 @@ export function memoryUse(profile: CoolingProfile, boardRange: string | null, re
       inRange: fit ? fit.inRange.includes(r.revision) : null,
     };
   });
-  const rangeProblem = !range || !fit ? null : fit.inRange.length === 0 ? `No board revision satisfies "${range}".` : fit.misfits.length > 0 ? rangeFitMessage(range, fit) : null;
+  const rangeProblem = !fit ? null : fit.inRange.length === 0 ? `No board revision satisfies "${range}".` : fit.misfits.length > 0 ? rangeFitMessage(range, fit) : null;
   return { rows, rangeProblem, suggestedRange: fit?.suggestedRange ?? null };
 }

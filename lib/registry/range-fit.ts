@@ -1,7 +1,5 @@
-// semver's own function modules, not its index: the editor screen loads this module.
-import compare from "semver/functions/compare";
-import valid from "semver/functions/valid";
-import { satisfiesRange } from "@/lib/versioning/semver-helpers";
+// No semver here: the editor screen loads this module with the page, and judges the revisions a
+// range admits (lib/registry/range-match.ts, semver's range matching) only when a range is checked.
 
 /** What a board revision offers a profile version: its points per curve, profile memory and slots. */
 export interface RevisionCapacity {
@@ -9,6 +7,26 @@ export interface RevisionCapacity {
   maxPointsPerCurve: number;
   memoryBytes: number;
   slotCount: number;
+}
+
+/** The range a first version is offered for: every release of the board. */
+export const FIRST_VERSION_BOARD_RANGE = ">=1.0.0";
+
+/** The range the publish form starts with: the latest version's, or the first version's default. */
+export function startingBoardRange(latestBoardRange: string | undefined): string {
+  return latestBoardRange ?? FIRST_VERSION_BOARD_RANGE;
+}
+
+/**
+ * What a range admits among the revisions it was checked against (admittedRevisions in
+ * range-match.ts), judged where semver is at hand, so a screen showing it needs no range matching.
+ */
+export interface RangeAdmission {
+  range: string;
+  /** The revision numbers it was checked against. */
+  checked: string[];
+  /** Those it admits, in version order; null when the range is not valid. */
+  admitted: string[] | null;
 }
 
 /** What a profile version needs of every revision in its range. */
@@ -46,11 +64,11 @@ export function misfitReasons(rev: RevisionCapacity, needs: VersionNeeds): strin
 }
 
 /**
- * Every board revision a declared range admits, checked for points per curve, memory and
- * slots, so a version is never published for a revision that cannot hold it.
+ * The revisions a declared range admits (in version order, as `revisionsInRange` in
+ * range-match.ts gives them), checked for points per curve, memory and slots, so a version
+ * is never published for a revision that cannot hold it.
  */
-export function fitRange(range: string, revisions: readonly RevisionCapacity[], needs: VersionNeeds): RangeFit {
-  const inRange = revisions.filter((r) => valid(r.revision) && satisfiesRange(r.revision, range)).sort((a, b) => compare(a.revision, b.revision));
+export function fitAdmittedRevisions(inRange: readonly RevisionCapacity[], needs: VersionNeeds): RangeFit {
   const checked = inRange.map((r) => ({ revision: r.revision, reasons: misfitReasons(r, needs) }));
   let best: string[] = [];
   let run: string[] = [];

@@ -1,6 +1,7 @@
 import { contentHashHex, crc32, encodeBank, isRevisionCompatible, satisfiesRange, validateProfileText, type CoolingProfile, type HardwareContext, type ValidationIssue } from "@/lib/engine";
 import { toHardwareContext, type ComponentFields, type CoolerFields, type RevisionFields } from "./hardware-context";
-import { fitRange, rangeFitMessage } from "./range-fit";
+import { rangeFitMessage } from "./range-fit";
+import { fitRange } from "./range-match";
 
 export interface VersionImage {
   document: CoolingProfile;

@@ -1,6 +1,7 @@
 import { memoryUse } from "@/lib/registry/editor-evaluation";
-import type { RevisionCapacity } from "@/lib/registry/range-fit";
+import type { RangeAdmission, RevisionCapacity } from "@/lib/registry/range-fit";
 import type { CoolingProfile } from "@/lib/engine";
+import { useRangeAdmission } from "./use-range-admission";
 
 function verdict(r: ReturnType<typeof memoryUse>["rows"][number]): { text: string; fault: boolean } {
   if (r.inRange === false) return { text: r.fits ? "outside the range" : `outside the range; could not hold it (${r.reasons.join("; ")})`, fault: false };
@@ -11,10 +12,12 @@ function verdict(r: ReturnType<typeof memoryUse>["rows"][number]): { text: strin
 /**
  * Bank image bytes of this profile against each board revision's profile memory, judged
  * against the range typed in the publish form by the rule publishing applies, so the two
- * agree before anything is published.
+ * agree before anything is published. `knownRanges`: what the server judged the ranges the
+ * screen opens with to admit; any other range loads semver's range matching when first typed.
  */
-export function MemoryGauge({ profile, revisions, boardRange }: { profile: CoolingProfile; revisions: readonly RevisionCapacity[]; boardRange: string | null }) {
-  const { rows, rangeProblem } = memoryUse(profile, boardRange, revisions);
+export function MemoryGauge({ profile, revisions, boardRange, knownRanges }: { profile: CoolingProfile; revisions: readonly RevisionCapacity[]; boardRange: string | null; knownRanges: readonly RangeAdmission[] }) {
+  const { admitted, pending } = useRangeAdmission(boardRange, revisions, knownRanges);
+  const { rows, rangeProblem } = memoryUse(profile, boardRange, revisions, admitted);
   return (
     <div className="space-y-3">
       <ul className="space-y-2 text-sm" aria-label="Memory use per board revision">
@@ -37,7 +40,11 @@ export function MemoryGauge({ profile, revisions, boardRange }: { profile: Cooli
         })}
       </ul>
       <p role="status" className={`text-sm ${rangeProblem ? "font-medium text-signal-fault" : "text-ink-600"}`} data-testid="range-fit">
-        {boardRange?.trim() ? (rangeProblem ?? `Every revision in "${boardRange.trim()}" holds this profile.`) : "Type a board revision range under Publish to check it here."}
+        {boardRange?.trim()
+          ? pending
+            ? `Checking which revisions "${boardRange.trim()}" admits…`
+            : (rangeProblem ?? `Every revision in "${boardRange.trim()}" holds this profile.`)
+          : "Type a board revision range under Publish to check it here."}
       </p>
     </div>
   );

@@ -1,29 +1,35 @@
 "use client";
 
 import { hex32 } from "@/lib/hex/address";
-import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { useEffect, useState } from "react";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useEffect, useMemo, useState } from "react";
 import { useForm } from "react-hook-form";
-import { apiCall, operationKey } from "@/lib/api/client";
-import { getProfile, publishVersion } from "@/lib/api/endpoints";
+import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
+import { getProfile, getVersion, publishVersion } from "@/lib/api/endpoints";
 import type { PublishBody } from "@/lib/api/operations/profile-schemas";
-import type { VersionSuggestion } from "@/lib/engine";
+import { suggestNextVersion, type CoolingProfile } from "@/lib/engine";
 import { Button } from "@/components/ui/button";
 import { lazyZodResolver } from "@/components/ui/lazy-resolver";
 import { Field, Input, Textarea, describedBy } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
+import { loadRangeMatch } from "./use-range-admission";
 
 /** The publish body without the text (the editor's); its schema loads when the form first validates. */
 const resolver = lazyZodResolver(() => import("@/lib/api/operations/profile-schemas").then((m) => m.publishBody.omit({ text: true })));
 type PublishForm = Omit<PublishBody, "text">;
 
-/** Publish the editor's text as a new immutable version; the server encodes and checks it again. */
+/**
+ * Publish the editor's text as a new immutable version; the server encodes and checks it again.
+ * The version number is suggested from what changed since the latest version (its document is
+ * fetched here, and the rule and semver come with this form, not with the page).
+ */
 export function PublishPanel({
   profileId,
   getText,
-  suggestion,
+  latest,
+  current,
   defaultRange,
   onRangeChange,
   blocked,
@@ -31,13 +37,22 @@ export function PublishPanel({
   profileId: string;
   /** The editor's text as it is now: read when the form is sent. */
   getText: () => string;
-  suggestion: VersionSuggestion | null;
+  /** The latest published version, if any. */
+  latest: { id: string; version: string } | undefined;
+  /** The document in the editor when it passes the schema. */
+  current: CoolingProfile | undefined;
   defaultRange: string;
   /** Called as the range is typed, so the memory gauge can judge it live. */
   onRangeChange?: (range: string) => void;
   blocked: boolean;
 }) {
   const qc = useQueryClient();
+  const latestDoc = useQuery({
+    ...apiQuery(getVersion, { params: { id: latest?.id ?? "" } }),
+    enabled: Boolean(latest),
+  });
+  const latestDocument = latestDoc.data?.version.document as CoolingProfile | undefined;
+  const suggestion = useMemo(() => (latest && latestDocument && current ? suggestNextVersion(latestDocument, current, latest.version) : null), [latest, latestDocument, current]);
   const suggested = suggestion?.version ?? "1.0.0";
   const form = useForm<PublishForm>({ resolver, defaultValues: { version: suggested, changelog: "", boardRange: defaultRange } });
   // Follow the suggestion until the engineer types their own number.
@@ -68,7 +83,8 @@ export function PublishPanel({
           <Input {...describedBy("pub-version", errors.version?.message)} {...form.register("version", { onChange: () => setFollowSuggestion(false) })} />
         </Field>
         <Field id="pub-range" label="Board revision range" hint='Semver range, e.g. ">=1.1.0 <3.0.0". The memory gauge checks every revision it admits as you type.' error={errors.boardRange?.message}>
-          <Input {...describedBy("pub-range", errors.boardRange?.message)} {...form.register("boardRange", { onChange: (e: { target: { value: string } }) => onRangeChange?.(e.target.value) })} />
+          {/* Range matching (semver) is fetched as the field is entered, before the first character counts. */}
+          <Input {...describedBy("pub-range", errors.boardRange?.message)} onFocus={() => void loadRangeMatch().catch(() => undefined)} {...form.register("boardRange", { onChange: (e: { target: { value: string } }) => onRangeChange?.(e.target.value) })} />
         </Field>
       </div>
       <Field id="pub-changelog" label="Changelog" error={errors.changelog?.message}>

@@ -5,11 +5,12 @@ import dynamic from "next/dynamic";
 import Link from "next/link";
 import { memo, useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
 import { apiQuery } from "@/lib/api/client";
-import { getProfile, getVersion } from "@/lib/api/endpoints";
+import { getProfile } from "@/lib/api/endpoints";
 import type { ProfileDetailView } from "@/lib/api/operations/profile-schemas";
-import { operatingPoint, suggestNextVersion, type CoolingProfile } from "@/lib/engine";
+import { operatingPoint } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { evaluateEditorText } from "@/lib/registry/editor-evaluation";
+import { startingBoardRange, type RangeAdmission } from "@/lib/registry/range-fit";
 import { Select } from "@/components/ui/field";
 import { CoolerPicker, useCoolerChoices, type CoolerChoice } from "./hardware-picker";
 import { EstimateCaution, Notice } from "@/components/ui/notice";
@@ -31,7 +32,7 @@ import { VersionHistory } from "./version-history";
 // Monaco is heavy: it loads on this route only, in the browser only. The live plot is our own
 // small SVG (no chart library on the keystroke path), so it ships with the page.
 const JsonEditor = dynamic(() => import("./json-editor"), { ssr: false, loading: () => <div className="h-full animate-pulse rounded bg-ink-100" aria-label="Loading the editor" /> });
-// The publish form (react-hook-form) is its own chunk, loaded only for people who may publish.
+// The publish form (react-hook-form, the version suggestion with semver) is its own chunk, loaded only for people who may publish.
 const PublishPanel = dynamic(() => import("./publish-panel").then((m) => m.PublishPanel));
 
 // Panels outside the keystroke path re-render only when their (deferred) inputs change.
@@ -49,18 +50,23 @@ declare global {
 }
 
 const NO_ISSUES: never[] = [];
+const NO_RANGES: RangeAdmission[] = [];
 
-export function ProfileWorkspace({ id, canWrite }: { id: string; canWrite: boolean }) {
+/**
+ * `knownRanges`: what the ranges the memory gauge opens with admit, judged on the server, so the
+ * first screen needs no range matching (semver's loads when someone types another range).
+ */
+export function ProfileWorkspace({ id, canWrite, knownRanges = NO_RANGES }: { id: string; canWrite: boolean; knownRanges?: RangeAdmission[] }) {
   const q = useQuery(apiQuery(getProfile, { params: { id } }));
   if (q.isPending) return <div className="h-96 animate-pulse rounded-md bg-white shadow-panel" aria-label="Loading the profile" />;
   if (q.isError)
     return (
       <ErrorNotice error={q.error} onRetry={() => void q.refetch()} />
     );
-  return <Workspace detail={q.data} canWrite={canWrite} />;
+  return <Workspace detail={q.data} canWrite={canWrite} knownRanges={knownRanges} />;
 }
 
-function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: boolean }) {
+function Workspace({ detail, canWrite, knownRanges }: { detail: ProfileDetailView; canWrite: boolean; knownRanges: RangeAdmission[] }) {
   const { profile, cooler, revisions, versions } = detail;
   const [text, setText] = useState<string>(() => profile.draftText ?? "{}\n");
   const [revisionId, setRevisionId] = useState(revisions[revisions.length - 1]?.id ?? "");
@@ -114,18 +120,9 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
 
   const latest = versions[0];
   // The range typed in the publish form, live: the memory gauge judges it as publishing will.
-  const defaultRange = latest?.boardRange ?? ">=1.0.0";
+  const defaultRange = startingBoardRange(latest?.boardRange);
   const [publishRange, setPublishRange] = useState(defaultRange);
-  const latestDoc = useQuery({
-    ...apiQuery(getVersion, { params: { id: latest?.id ?? "" } }),
-    enabled: Boolean(latest),
-  });
   const current = deferredEvaluation?.profile;
-  const latestDocument = latestDoc.data?.version.document as CoolingProfile | undefined;
-  const suggestion = useMemo(() => {
-    if (!latest || !latestDocument || !current) return null;
-    return suggestNextVersion(latestDocument, current, latest.version);
-  }, [latest, latestDocument, current]);
 
   useEffect(() => {
     // Keystroke → markers and plots committed: measured by `npm run bench:editor`.
@@ -251,7 +248,7 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
                 <MemoOperatingPanel profile={deferredEvaluation.profile} hw={deferredHw} inputs={operatingInputs} onInputs={setOperatingInputs} />
               </Panel>
               <Panel title="Memory">
-                <MemoMemoryGauge profile={deferredEvaluation.profile} revisions={revisions} boardRange={canWrite ? publishRange : (latest?.boardRange ?? null)} />
+                <MemoMemoryGauge profile={deferredEvaluation.profile} revisions={revisions} boardRange={canWrite ? publishRange : (latest?.boardRange ?? null)} knownRanges={knownRanges} />
               </Panel>
             </>
           )}
@@ -260,7 +257,7 @@ function Workspace({ detail, canWrite }: { detail: ProfileDetailView; canWrite: 
 
       {canWrite && (
         <Panel title="Publish">
-          <MemoPublishPanel profileId={profile.id} getText={getText} suggestion={suggestion} defaultRange={defaultRange} onRangeChange={setPublishRange} blocked={errors > 0 || !deferredEvaluation?.profile} />
+          <MemoPublishPanel profileId={profile.id} getText={getText} latest={latest} current={current} defaultRange={defaultRange} onRangeChange={setPublishRange} blocked={errors > 0 || !deferredEvaluation?.profile} />
         </Panel>
       )}
       <Panel title="Version history" actions={versions.length >= 2 ? <Link className="text-sm text-copper-700 underline" href={`/profiles/${profile.id}/compare`}>Compare versions</Link> : undefined}>

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { memoryUse } from "@/lib/registry/editor-evaluation";
+import { admittedRevisions } from "@/lib/registry/range-match";
 import { buildVersionImage } from "@/lib/registry/version-image";
 import type { CoolingProfile } from "@/lib/engine";
 
@@ -28,13 +29,16 @@ const sevenPoints: CoolingProfile = {
   },
 };
 
+/** The gauge as the editor shows it for a typed range: what the range admits, then the fit. */
+const gaugeFor = (boardRange: string) => memoryUse(sevenPoints, boardRange, revisions, admittedRevisions(boardRange, revisions));
+
 function publish(boardRange: string) {
   return buildVersionImage({ text: JSON.stringify(sevenPoints), version: "1.0.0", boardRange, cooler, fan, pump, revisions });
 }
 
 describe("the editor's memory gauge judges the typed range as publishing does", () => {
   it("names revision 1.0.0 as unable to hold a 7-point curve under >=1.0.0, with the same sentence publishing refuses with", () => {
-    const gauge = memoryUse(sevenPoints, ">=1.0.0", revisions);
+    const gauge = gaugeFor(">=1.0.0");
     const refused = publish(">=1.0.0");
     expect(refused.ok).toBe(false);
     expect(gauge.rangeProblem).toBe(refused.ok ? null : refused.message);
@@ -45,7 +49,7 @@ describe("the editor's memory gauge judges the typed range as publishing does", 
   });
 
   it("finds no problem where publishing accepts, and counts the image bytes the encoder writes", () => {
-    const gauge = memoryUse(sevenPoints, ">=1.1.0", revisions);
+    const gauge = gaugeFor(">=1.1.0");
     const accepted = publish(">=1.1.0");
     expect(accepted.ok).toBe(true);
     expect(gauge.rangeProblem).toBeNull();
@@ -54,7 +58,15 @@ describe("the editor's memory gauge judges the typed range as publishing does", 
   });
 
   it("says nothing about a range still being typed", () => {
-    expect(memoryUse(sevenPoints, ">=1.", revisions).rangeProblem).toBeNull();
-    expect(memoryUse(sevenPoints, ">=1.", revisions).rows.every((r) => r.inRange === null)).toBe(true);
+    expect(admittedRevisions(">=1.", revisions)).toBeNull();
+    expect(gaugeFor(">=1.").rangeProblem).toBeNull();
+    expect(gaugeFor(">=1.").rows.every((r) => r.inRange === null)).toBe(true);
+  });
+
+  it("takes what the range admits in version order, whatever order the revisions come in", () => {
+    const shuffled = [revisions[2]!, revisions[0]!, revisions[1]!];
+    expect(admittedRevisions(" >=1.0.0 <2.0.0 ", shuffled)).toEqual(["1.0.0", "1.1.0"]);
+    const gauge = memoryUse(sevenPoints, ">=1.0.0", shuffled, admittedRevisions(">=1.0.0", shuffled));
+    expect(gauge.rangeProblem).toBe(gaugeFor(">=1.0.0").rangeProblem);
   });
 });
