@@ -171,8 +171,22 @@ class Scanner {
   }
 }
 
+/**
+ * The last text scanned and its scan. The editor scans each text twice: when validating it, and
+ * when a handle on the plot then writes into it (lib/curve-edit); the second is this one. A scan is
+ * never changed by its readers.
+ */
+let lastScan: { text: string; maxDepth: number; scan: JsonScan } | null = null;
+
 /** Scans JSON text; never throws. */
 export function scanJson(text: string, maxDepth = 64): JsonScan {
+  if (lastScan && lastScan.maxDepth === maxDepth && lastScan.text === text) return lastScan.scan;
+  const scan = scanUncached(text, maxDepth);
+  lastScan = { text, maxDepth, scan };
+  return scan;
+}
+
+function scanUncached(text: string, maxDepth: number): JsonScan {
   const scanner = new Scanner(text, maxDepth);
   try {
     scanner.document();

@@ -1,6 +1,6 @@
 "use client";
 
-import { useState, type KeyboardEvent, type PointerEvent as ReactPointerEvent } from "react";
+import { memo, useState, type KeyboardEvent, type PointerEvent as ReactPointerEvent } from "react";
 import { pointValueText } from "@/lib/curve-edit";
 import type { CoolingProfile, CurveKind } from "@/lib/engine";
 import { targetKey, type CurveEditing, type EditTarget } from "../editor/use-curve-editing";
@@ -50,6 +50,97 @@ interface Props {
   dutyToY: (kind: CurveKind, dutyPct: number) => number;
 }
 
+/** Why the last edit of a handle stopped short, beside it (left of it near the plot's right edge). */
+function Reason({ text, cx, cy, onLeft }: { text: string; cx: number; cy: number; onLeft: boolean }) {
+  return (
+    <text x={onLeft ? cx - 10 : cx + 10} y={cy - 10} textAnchor={onLeft ? "end" : "start"} fontSize={11} fill={C.critical} stroke="white" strokeWidth={3} paintOrder="stroke" pointerEvents="none" data-testid="handle-reason">
+      {text.length > 70 ? `${text.slice(0, 68)}…` : text}
+    </text>
+  );
+}
+
+interface PointHandleProps {
+  kind: CurveKind;
+  index: number;
+  tempC: number;
+  dutyPct: number;
+  cx: number;
+  cy: number;
+  /** Where the board stores the point, when that differs and is on the plot. */
+  ghostCx: number | null;
+  ghostCy: number | null;
+  ghostTitle: string | null;
+  focused: boolean;
+  editing: CurveEditing | null;
+  reason: string | null;
+  reasonOnLeft: boolean;
+  onDragStart: (start: DragStart, e: ReactPointerEvent<SVGElement>) => void;
+  setFocused: (update: (f: string | null) => string | null) => void;
+}
+
+/**
+ * One curve point as a focusable slider. Its props are numbers and stable callbacks, so a
+ * keystroke or a drag step re-renders (and writes to the DOM) only the handles that moved.
+ */
+const PointHandle = memo(function PointHandle({ kind, index, tempC, dutyPct, cx, cy, ghostCx, ghostCy, ghostTitle, focused, editing, reason, reasonOnLeft, onDragStart, setFocused }: PointHandleProps) {
+  const key = `${kind}/${index}`;
+  const onKeyDown = (e: KeyboardEvent<SVGElement>) => {
+    if (!editing) return;
+    if (e.key === "Delete" || e.key === "Backspace") {
+      e.preventDefault();
+      editing.removePoint(kind, index);
+      return;
+    }
+    const step = keyStep(e, 0.5, 5);
+    if (!step) return;
+    e.preventDefault();
+    performance.mark("lk-drag");
+    editing.movePoint(kind, index, step.dx !== 0 ? { tempC: tempC + step.dx } : { dutyPct: dutyPct + step.dy }, true);
+  };
+  const onPointerDown = (e: ReactPointerEvent<SVGElement>) => {
+    if (!editing || e.button !== 0) return;
+    e.preventDefault();
+    e.currentTarget.focus();
+    onDragStart({ target: { type: "point", kind, index }, anchorTempC: tempC }, e);
+  };
+  return (
+    <g>
+      {ghostCx !== null && ghostCy !== null && (
+        <circle cx={ghostCx} cy={ghostCy} r={6} fill="none" stroke={colour(kind)} strokeDasharray="2 2" aria-hidden="true" data-testid="flashed-ghost">
+          <title>{ghostTitle}</title>
+        </circle>
+      )}
+      {focused && <circle cx={cx} cy={cy} r={10} fill="none" stroke={C.operating} strokeWidth={2} aria-hidden="true" />}
+      {editing ? (
+        <circle
+          data-handle={key}
+          cx={cx}
+          cy={cy}
+          r={6}
+          fill="white"
+          stroke={colour(kind)}
+          strokeWidth={2.5}
+          className="cursor-grab outline-none"
+          role="slider"
+          tabIndex={0}
+          aria-label={`${kind === "pump" ? "pump" : "fan"} point ${index + 1}`}
+          aria-valuenow={dutyPct}
+          aria-valuemin={0}
+          aria-valuemax={100}
+          aria-valuetext={pointValueText(kind, index, { tempC, dutyPct })}
+          onPointerDown={onPointerDown}
+          onKeyDown={onKeyDown}
+          onFocus={() => setFocused(() => key)}
+          onBlur={() => setFocused((f) => (f === key ? null : f))}
+        />
+      ) : (
+        <circle cx={cx} cy={cy} r={4} fill={colour(kind)} aria-hidden="true" />
+      )}
+      {reason !== null && <Reason text={reason} cx={cx} cy={cy} onLeft={reasonOnLeft} />}
+    </g>
+  );
+});
+
 /**
  * The points of both curves as focusable sliders, their as-flashed ghosts, the fan
  * stop and the hysteresis handles, and the reason beside a handle that stopped.
@@ -58,12 +149,8 @@ export function CurveHandles({ profile, flashed, x, fromC, toC, bottom, editing,
   const [focused, setFocused] = useState<string | null>(null);
   const notice = editing?.notice ?? null;
   const inRange = (t: number) => t >= fromC && t <= toC;
-  const reasonAt = (key: string, cx: number, cy: number) =>
-    notice?.key === key ? (
-      <text x={cx > x.range[1] - 220 ? cx - 10 : cx + 10} y={cy - 10} textAnchor={cx > x.range[1] - 220 ? "end" : "start"} fontSize={11} fill={C.critical} stroke="white" strokeWidth={3} paintOrder="stroke" pointerEvents="none" data-testid="handle-reason">
-        {notice.text.length > 70 ? `${notice.text.slice(0, 68)}…` : notice.text}
-      </text>
-    ) : null;
+  const onLeftAt = (cx: number) => cx > x.range[1] - 220;
+  const reasonAt = (key: string, cx: number, cy: number) => (notice?.key === key ? <Reason text={notice.text} cx={cx} cy={cy} onLeft={onLeftAt(cx)} /> : null);
   const startDrag = (target: EditTarget, anchorTempC: number) => (e: ReactPointerEvent<SVGElement>) => {
     if (!editing || e.button !== 0) return;
     e.preventDefault();
@@ -77,58 +164,27 @@ export function CurveHandles({ profile, flashed, x, fromC, toC, bottom, editing,
         profile[kind].points.map((p, i) => {
           const key = `${kind}/${i}`;
           const cx = x(p.tempC);
-          const cy = dutyToY(kind, p.dutyPct);
           const q = flashed?.[kind].points[i];
-          const ghost = q && (q.tempC !== p.tempC || q.dutyPct !== p.dutyPct) && inRange(q.tempC);
-          const valueText = pointValueText(kind, i, p);
-          const onKeyDown = (e: KeyboardEvent<SVGElement>) => {
-            if (!editing) return;
-            if (e.key === "Delete" || e.key === "Backspace") {
-              e.preventDefault();
-              editing.removePoint(kind, i);
-              return;
-            }
-            const step = keyStep(e, 0.5, 5);
-            if (!step) return;
-            e.preventDefault();
-            performance.mark("lk-drag");
-            editing.movePoint(kind, i, step.dx !== 0 ? { tempC: p.tempC + step.dx } : { dutyPct: p.dutyPct + step.dy }, true);
-          };
+          const ghost = q && (q.tempC !== p.tempC || q.dutyPct !== p.dutyPct) && inRange(q.tempC) ? q : null;
           return (
-            <g key={key}>
-              {ghost && (
-                <circle cx={x(q.tempC)} cy={dutyToY(kind, q.dutyPct)} r={6} fill="none" stroke={colour(kind)} strokeDasharray="2 2" aria-hidden="true" data-testid="flashed-ghost">
-                  <title>{`As flashed: ${fmt(q.tempC)} °C, ${fmt(q.dutyPct)} %`}</title>
-                </circle>
-              )}
-              {focused === key && <circle cx={cx} cy={cy} r={10} fill="none" stroke={C.operating} strokeWidth={2} aria-hidden="true" />}
-              {editing ? (
-                <circle
-                  data-handle={key}
-                  cx={cx}
-                  cy={cy}
-                  r={6}
-                  fill="white"
-                  stroke={colour(kind)}
-                  strokeWidth={2.5}
-                  className="cursor-grab outline-none"
-                  role="slider"
-                  tabIndex={0}
-                  aria-label={`${kind === "pump" ? "pump" : "fan"} point ${i + 1}`}
-                  aria-valuenow={p.dutyPct}
-                  aria-valuemin={0}
-                  aria-valuemax={100}
-                  aria-valuetext={valueText}
-                  onPointerDown={startDrag({ type: "point", kind, index: i }, p.tempC)}
-                  onKeyDown={onKeyDown}
-                  onFocus={() => setFocused(key)}
-                  onBlur={() => setFocused((f) => (f === key ? null : f))}
-                />
-              ) : (
-                <circle cx={cx} cy={cy} r={4} fill={colour(kind)} aria-hidden="true" />
-              )}
-              {reasonAt(key, cx, cy)}
-            </g>
+            <PointHandle
+              key={key}
+              kind={kind}
+              index={i}
+              tempC={p.tempC}
+              dutyPct={p.dutyPct}
+              cx={cx}
+              cy={dutyToY(kind, p.dutyPct)}
+              ghostCx={ghost ? x(ghost.tempC) : null}
+              ghostCy={ghost ? dutyToY(kind, ghost.dutyPct) : null}
+              ghostTitle={ghost ? `As flashed: ${fmt(ghost.tempC)} °C, ${fmt(ghost.dutyPct)} %` : null}
+              focused={focused === key}
+              editing={editing}
+              reason={notice?.key === key ? notice.text : null}
+              reasonOnLeft={onLeftAt(cx)}
+              onDragStart={onDragStart}
+              setFocused={setFocused}
+            />
           );
         }),
       )}

@@ -1,12 +1,12 @@
 "use client";
 
-import { memo, useEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from "react";
+import { memo, useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from "react";
 import type { CoolingProfile, CurveKind, HardwareContext } from "@/lib/engine";
 import type { PlotRow } from "@/lib/registry/editor-evaluation";
 import { TEMP_STEP_C } from "@/lib/bank/layout";
 import { snapToStep } from "@/lib/curve-edit";
 import type { CurveEditing } from "../editor/use-curve-editing";
-import { bandPath, dutyToHandleRpm, evenTicks, handleRpmToDuty, linePath, linearScale, placeLimitLabels, type DutyAxis } from "./plot-geometry";
+import { bandPath, dutyToHandleRpm, evenTicks, handleRpmToDuty, linePath, linearScale, placeLimitLabels, type DutyAxis, type LinearScale } from "./plot-geometry";
 import { CurveHandles, type DragStart } from "./curve-handles";
 import { PLOT_COLOURS as C, PlotLegend } from "./plot-legend";
 
@@ -53,6 +53,53 @@ interface Props {
   /** Null when the viewer may not edit: the points are drawn, not offered as handles. */
   editing: CurveEditing | null;
 }
+
+/** Grid, ticks and axis titles: the same from one keystroke to the next, so React skips them. */
+const PlotFrame = memo(function PlotFrame({
+  x,
+  y,
+  yDb,
+  xTicks,
+  rpmTicks,
+  dbTicks,
+  width,
+  plotW,
+  plotH,
+}: {
+  x: LinearScale;
+  y: LinearScale;
+  yDb: LinearScale;
+  xTicks: number[];
+  rpmTicks: number[];
+  dbTicks: number[];
+  width: number;
+  plotW: number;
+  plotH: number;
+}) {
+  const plotRight = M.left + plotW;
+  return (
+    <>
+      {xTicks.map((t) => (
+        <g key={`x${t}`}>
+          <line x1={x(t)} x2={x(t)} y1={M.top} y2={M.top + plotH} stroke={C.grid} />
+          <text x={x(t)} y={M.top + plotH + 14} textAnchor="middle" fontSize={11} fill={C.axis}>{t}</text>
+        </g>
+      ))}
+      {rpmTicks.map((t) => (
+        <g key={`y${t}`}>
+          <line x1={M.left} x2={plotRight} y1={y(t)} y2={y(t)} stroke={C.grid} />
+          <text x={M.left - 6} y={y(t) + 4} textAnchor="end" fontSize={11} fill={C.axis}>{t}</text>
+        </g>
+      ))}
+      {dbTicks.map((t) => (
+        <text key={`db${t}`} x={plotRight + 6} y={yDb(t) + 4} fontSize={11} fill={C.axis}>{t}</text>
+      ))}
+      <text x={M.left + plotW / 2} y={HEIGHT - 6} textAnchor="middle" fontSize={12} fill={C.axis}>Liquid temperature (°C)</text>
+      <text transform={`translate(14 ${M.top + plotH / 2}) rotate(-90)`} textAnchor="middle" fontSize={12} fill={C.axis}>RPM</text>
+      <text transform={`translate(${width - 8} ${M.top + plotH / 2}) rotate(90)`} textAnchor="middle" fontSize={12} fill={C.axis}>dB(A) at 1 m</text>
+    </>
+  );
+});
 
 /**
  * The live editor plot: pump and fan RPM (authored solid, as flashed dashed), their
@@ -108,7 +155,18 @@ function LiveCurvePlot({ rows, limits, profile, flashed, hw, operating, editing 
   };
   const labels = placeLimitLabels(limitLines.map((l) => ({ id: l.id, y: y(l.rpm) })), curveYsAt);
 
-  const motors: Record<CurveKind, DutyAxis> = { pump: hw.pump, fans: hw.fan };
+  const motors = useMemo<Record<CurveKind, DutyAxis>>(() => ({ pump: hw.pump, fans: hw.fan }), [hw.pump, hw.fan]);
+  // Stable callbacks for the point handles (memoised: only the handles that moved re-render).
+  const editingNow = useRef(editing);
+  useLayoutEffect(() => {
+    editingNow.current = editing;
+  }, [editing]);
+  const onDragStart = useCallback((start: DragStart, e: ReactPointerEvent<SVGElement>) => {
+    drag.current = start;
+    svgRef.current?.setPointerCapture(e.pointerId);
+    editingNow.current?.beginGesture();
+  }, []);
+  const dutyToY = useCallback((kind: CurveKind, duty: number) => y(dutyToHandleRpm(duty, motors[kind])), [y, motors]);
   const toData = (e: { clientX: number; clientY: number }) => {
     const box = svgRef.current?.getBoundingClientRect();
     if (!box) return null;
@@ -174,24 +232,7 @@ function LiveCurvePlot({ rows, limits, profile, flashed, hw, operating, editing 
           onDoubleClick={onDoubleClick}
         >
           <g aria-hidden="true">
-            {xTicks.map((t) => (
-              <g key={`x${t}`}>
-                <line x1={x(t)} x2={x(t)} y1={M.top} y2={M.top + plotH} stroke={C.grid} />
-                <text x={x(t)} y={M.top + plotH + 14} textAnchor="middle" fontSize={11} fill={C.axis}>{t}</text>
-              </g>
-            ))}
-            {rpmAxis.ticks.map((t) => (
-              <g key={`y${t}`}>
-                <line x1={M.left} x2={plotRight} y1={y(t)} y2={y(t)} stroke={C.grid} />
-                <text x={M.left - 6} y={y(t) + 4} textAnchor="end" fontSize={11} fill={C.axis}>{t}</text>
-              </g>
-            ))}
-            {dbAxis.ticks.map((t) => (
-              <text key={`db${t}`} x={plotRight + 6} y={yDb(t) + 4} fontSize={11} fill={C.axis}>{t}</text>
-            ))}
-            <text x={M.left + plotW / 2} y={HEIGHT - 6} textAnchor="middle" fontSize={12} fill={C.axis}>Liquid temperature (°C)</text>
-            <text transform={`translate(14 ${M.top + plotH / 2}) rotate(-90)`} textAnchor="middle" fontSize={12} fill={C.axis}>RPM</text>
-            <text transform={`translate(${width - 8} ${M.top + plotH / 2}) rotate(90)`} textAnchor="middle" fontSize={12} fill={C.axis}>dB(A) at 1 m</text>
+            <PlotFrame x={x} y={y} yDb={yDb} xTicks={xTicks} rpmTicks={rpmAxis.ticks} dbTicks={dbAxis.ticks} width={width} plotW={plotW} plotH={plotH} />
 
             <path d={series.pumpBand} fill={C.pump} fillOpacity={0.12} data-series="pump-hysteresis" />
             <path d={series.fanBand} fill={C.fan} fillOpacity={0.12} data-series="fan-hysteresis" />
@@ -230,12 +271,8 @@ function LiveCurvePlot({ rows, limits, profile, flashed, hw, operating, editing 
               toC={toC}
               bottom={M.top + plotH}
               editing={editing}
-              onDragStart={(start, e) => {
-                drag.current = start;
-                svgRef.current?.setPointerCapture(e.pointerId);
-                editing?.beginGesture();
-              }}
-              dutyToY={(kind, duty) => y(dutyToHandleRpm(duty, motors[kind]))}
+              onDragStart={onDragStart}
+              dutyToY={dutyToY}
             />
           )}
         </svg>

@@ -72,6 +72,17 @@ function JsonEditor({
       automaticLayout: true,
       ariaLabel: label,
       quickSuggestions: { strings: true, other: true, comments: false },
+      // Work Monaco would do after every edit, measured on the keystroke path (bench:editor's
+      // profile) and not needed for a profile document: sticky scroll re-reads the outline
+      // (document symbols from the JSON worker), bracket pairs are re-coloured, colour swatches,
+      // links and unicode highlights are recomputed in a worker (each request first copies the
+      // edit to that worker). Folding stays, from indentation on the main thread, not the worker.
+      stickyScroll: { enabled: false },
+      bracketPairColorization: { enabled: false },
+      colorDecorators: false,
+      links: false,
+      unicodeHighlight: { ambiguousCharacters: false, invisibleCharacters: false, nonBasicASCII: false },
+      foldingStrategy: "indentation",
     }),
     [readOnly, label],
   );

@@ -31,5 +31,21 @@ export function setupMonaco(): typeof monaco {
     enableSchemaRequest: false,
     schemas: [{ uri: profileSchema.$id, fileMatch: [PROFILE_MODEL_URI, "*.profile.json"], schema: profileSchema }],
   });
+  // Only what the editor uses from the JSON worker: completion and hover from the schema, the
+  // outline and formatting on command. Left out, because each would send every edit to the worker:
+  // its diagnostics (with validation off it still ran 500 ms after each edit and cleared markers,
+  // redrawing them), colour swatches, and folding ranges (the editor folds by indentation).
+  monaco.json.jsonDefaults.setModeConfiguration({
+    documentFormattingEdits: true,
+    documentRangeFormattingEdits: true,
+    completionItems: true,
+    hovers: true,
+    documentSymbols: true,
+    tokens: true,
+    colors: false,
+    foldingRanges: false,
+    diagnostics: false,
+    selectionRanges: true,
+  });
   return monaco;
 }

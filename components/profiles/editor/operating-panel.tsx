@@ -2,7 +2,7 @@
 
 import dynamic from "next/dynamic";
 import { memo, useEffect, useMemo, useState } from "react";
-import { listenerDistanceProblem, operatingPoint, type CoolingProfile, type HardwareContext } from "@/lib/engine";
+import { listenerDistanceProblem, type CoolingProfile, type HardwareContext, type OperatingPoint } from "@/lib/engine";
 import { safeLoadSweep } from "@/lib/registry/editor-evaluation";
 import { Field, Input } from "@/components/ui/field";
 
@@ -51,24 +51,25 @@ export function parseOperatingInputs({ heatLoadW, ambientC, distanceM }: Operati
   return { load, ambient, distance, loadError, ambientError, distanceError };
 }
 
-/** Heat load and ambient in; settled liquid temperature, speeds and noise out (operatingPoint), and a load sweep. */
-export function OperatingPanel({ profile, hw, inputs, onInputs }: { profile: CoolingProfile; hw: HardwareContext; inputs: OperatingInputs; onInputs: (next: OperatingInputs) => void }) {
+/**
+ * Heat load and ambient in; settled liquid temperature, speeds and noise out, and a load sweep.
+ * `point` is operatingPoint for these inputs (null when they are refused; without the listener
+ * distance when that is refused), computed once per edit by the workspace, which also marks it
+ * on the live plot.
+ */
+export function OperatingPanel({ profile, hw, point, inputs, onInputs }: { profile: CoolingProfile; hw: HardwareContext; point: OperatingPoint | null; inputs: OperatingInputs; onInputs: (next: OperatingInputs) => void }) {
   const { heatLoadW, ambientC, distanceM } = inputs;
-  const { load, ambient, distance, loadError, ambientError, distanceError } = parseOperatingInputs(inputs, hw);
-  const point = useMemo(() => {
-    if (loadError || ambientError) return null;
-    try {
-      // A refused distance leaves the rest of the operating point standing; only the level at that distance is not shown.
-      return operatingPoint(profile, hw, { heatLoadW: load, ambientC: ambient, ...(distanceError ? {} : { distanceM: distance }) });
-    } catch {
-      return null;
-    }
-  }, [profile, hw, load, ambient, distance, loadError, ambientError, distanceError]);
-  const sweep = useMemo(
-    () => (ambientError ? [] : safeLoadSweep(profile, hw, ambient).map((p) => ({ heatLoadW: p.heatLoadW, liquidTempC: Math.round(p.liquidTempC * 10) / 10, soundDbA: Math.round(p.noise.totalDbA1m * 10) / 10 }))),
-    [profile, hw, ambient, ambientError],
+  const { ambient, loadError, ambientError, distanceError } = parseOperatingInputs(inputs, hw);
+  // The sweep (31 operating points) is computed only once the curve has rested, for the chart that shows it then.
+  const sweepInputs = useMemo(() => ({ profile, hw, ambientC: ambientError ? null : ambient }), [profile, hw, ambient, ambientError]);
+  const settled = useSettled(sweepInputs, SWEEP_SETTLE_MS);
+  const shownSweep = useMemo(
+    () =>
+      settled.ambientC === null
+        ? []
+        : safeLoadSweep(settled.profile, settled.hw, settled.ambientC).map((p) => ({ heatLoadW: p.heatLoadW, liquidTempC: Math.round(p.liquidTempC * 10) / 10, soundDbA: Math.round(p.noise.totalDbA1m * 10) / 10 })),
+    [settled],
   );
-  const shownSweep = useSettled(sweep, SWEEP_SETTLE_MS);
   return (
     <div className="space-y-3">
       <div className="grid grid-cols-3 gap-3">

@@ -35,6 +35,30 @@ function NumberCell({ value, label, disabled, onCommit }: { value: number; label
   );
 }
 
+/** One point's row: its numbers are props, so an edit re-renders only the rows it changed. */
+const PointRow = memo(function PointRow({ kind, index, tempC, dutyPct, rpm, soundDbA, editing }: { kind: CurveKind; index: number; tempC: number; dutyPct: number; rpm: number; soundDbA: number; editing: CurveEditing | null }) {
+  return (
+    <tr className="border-t border-ink-100">
+      <td className="py-1 pr-2 tabular-nums text-ink-600">{index + 1}</td>
+      <td className="py-1 pr-2">
+        <NumberCell value={tempC} label={`${noun(kind)} point ${index + 1} temperature (°C)`} disabled={!editing} onCommit={(v) => editing?.movePoint(kind, index, { tempC: v }, true)} />
+      </td>
+      <td className="py-1 pr-2">
+        <NumberCell value={dutyPct} label={`${noun(kind)} point ${index + 1} duty (%)`} disabled={!editing} onCommit={(v) => editing?.movePoint(kind, index, { dutyPct: v }, true)} />
+      </td>
+      <td className="py-1 pr-2 text-right tabular-nums">{Math.round(rpm)}</td>
+      <td className="py-1 pr-2 text-right tabular-nums">{Number.isFinite(soundDbA) ? soundDbA.toFixed(1) : "—"}</td>
+      <td className="py-1 text-right">
+        {editing && (
+          <button type="button" className="rounded px-1.5 text-ink-600 hover:bg-ink-100 hover:text-signal-fault" aria-label={`Remove ${noun(kind).toLowerCase()} point ${index + 1}`} onClick={() => editing.removePoint(kind, index)}>
+            ×
+          </button>
+        )}
+      </td>
+    </tr>
+  );
+});
+
 /** The curve points as a table (temperature, duty, RPM, level), edited in step with the text and the plot. */
 function PointsTable({ profile, hw, editing }: { profile: CoolingProfile; hw: HardwareContext; editing: CurveEditing | null }) {
   const tables = useMemo(() => (["pump", "fans"] as const).map((kind) => ({ kind, rows: pointRows(profile, hw, kind) })), [profile, hw]);
@@ -56,24 +80,7 @@ function PointsTable({ profile, hw, editing }: { profile: CoolingProfile; hw: Ha
             </thead>
             <tbody>
               {rows.map((r, i) => (
-                <tr key={i} className="border-t border-ink-100">
-                  <td className="py-1 pr-2 tabular-nums text-ink-600">{i + 1}</td>
-                  <td className="py-1 pr-2">
-                    <NumberCell value={r.tempC} label={`${noun(kind)} point ${i + 1} temperature (°C)`} disabled={!editing} onCommit={(v) => editing?.movePoint(kind, i, { tempC: v }, true)} />
-                  </td>
-                  <td className="py-1 pr-2">
-                    <NumberCell value={r.dutyPct} label={`${noun(kind)} point ${i + 1} duty (%)`} disabled={!editing} onCommit={(v) => editing?.movePoint(kind, i, { dutyPct: v }, true)} />
-                  </td>
-                  <td className="py-1 pr-2 text-right tabular-nums">{Math.round(r.rpm)}</td>
-                  <td className="py-1 pr-2 text-right tabular-nums">{Number.isFinite(r.soundDbA) ? r.soundDbA.toFixed(1) : "—"}</td>
-                  <td className="py-1 text-right">
-                    {editing && (
-                      <button type="button" className="rounded px-1.5 text-ink-600 hover:bg-ink-100 hover:text-signal-fault" aria-label={`Remove ${noun(kind).toLowerCase()} point ${i + 1}`} onClick={() => editing.removePoint(kind, i)}>
-                        ×
-                      </button>
-                    )}
-                  </td>
-                </tr>
+                <PointRow key={i} kind={kind} index={i} tempC={r.tempC} dutyPct={r.dutyPct} rpm={r.rpm} soundDbA={r.soundDbA} editing={editing} />
               ))}
             </tbody>
           </table>

@@ -6,7 +6,7 @@ import Link from "next/link";
 import { memo, useCallback, useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
 import { apiQuery } from "@/lib/api/client";
 import { getProfile } from "@/lib/api/endpoints";
-import type { ProfileDetailView } from "@/lib/api/operations/profile-schemas";
+import type { ProfileDetailView, VersionView } from "@/lib/api/operations/profile-schemas";
 import { operatingPoint } from "@/lib/engine";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { evaluateEditorText } from "@/lib/registry/editor-evaluation";
@@ -38,7 +38,6 @@ const PublishPanel = dynamic(() => import("./publish-panel").then((m) => m.Publi
 // Panels outside the keystroke path re-render only when their (deferred) inputs change.
 const MemoOperatingPanel = memo(OperatingPanel);
 const MemoMemoryGauge = memo(MemoryGauge);
-const MemoVersionHistory = memo(VersionHistory);
 const MemoPublishPanel = memo(PublishPanel);
 const MemoProblemsList = memo(ProblemsList);
 
@@ -51,6 +50,8 @@ declare global {
 
 const NO_ISSUES: never[] = [];
 const NO_RANGES: RangeAdmission[] = [];
+// The same element every render: React skips it when the workspace re-renders for a keystroke.
+const CAUTION = <EstimateCaution />;
 
 /**
  * `knownRanges`: what the ranges the memory gauge opens with admit, judged on the server, so the
@@ -103,20 +104,22 @@ function Workspace({ detail, canWrite, knownRanges }: { detail: ProfileDetailVie
   const getText = useCallback(() => editor.current?.getText() ?? latestText.current, []);
   const editing = useCurveEditing(editor, evaluation?.profile, hw, canWrite);
   const [operatingInputs, setOperatingInputs] = useState<OperatingInputs>({ heatLoadW: "200", ambientC: "25", distanceM: "1" });
-  // The operating point follows every drag step (one bisection, well under a millisecond).
+  // The operating point follows every drag step (one bisection, well under a millisecond); it is
+  // computed here once per edit, and the operating panel shows the same result in the background pass.
   const operating = useMemo(() => {
     const profileNow = evaluation?.profile;
     const { load, ambient, distance, loadError, ambientError, distanceError } = parseOperatingInputs(operatingInputs, hw);
     if (!profileNow || !hw || loadError || ambientError) return null;
     try {
-      const p = operatingPoint(profileNow, hw, { heatLoadW: load, ambientC: ambient, ...(distanceError ? {} : { distanceM: distance }) });
-      const atListener = distanceError || p.noise.distanceM === 1 ? null : { distanceM: p.noise.distanceM, soundDbA: p.noise.totalDbAAtDistance };
-      return { liquidTempC: p.liquidTempC, fanRpm: p.fans.rpm, soundDbA: p.noise.totalDbA1m, atListener, heatLoadW: load, ambientC: ambient };
+      const point = operatingPoint(profileNow, hw, { heatLoadW: load, ambientC: ambient, ...(distanceError ? {} : { distanceM: distance }) });
+      const atListener = distanceError || point.noise.distanceM === 1 ? null : { distanceM: point.noise.distanceM, soundDbA: point.noise.totalDbAAtDistance };
+      return { point, liquidTempC: point.liquidTempC, fanRpm: point.fans.rpm, soundDbA: point.noise.totalDbA1m, atListener, heatLoadW: load, ambientC: ambient };
     } catch {
       return null;
     }
   }, [evaluation?.profile, hw, operatingInputs]);
   const operatingMark = useMemo<OperatingMark | null>(() => (operating ? { liquidTempC: operating.liquidTempC, fanRpm: operating.fanRpm } : null), [operating]);
+  const deferredPoint = useDeferredValue(operating?.point ?? null);
 
   const latest = versions[0];
   // The range typed in the publish form, live: the memory gauge judges it as publishing will.
@@ -147,13 +150,14 @@ function Workspace({ detail, canWrite, knownRanges }: { detail: ProfileDetailVie
   }, []);
   const onJump = useCallback((line: number, column: number) => editor.current?.reveal(line, column), []);
   const limits = useMemo(() => ({ fanMinRpm: fan.rpmAtMinDuty, fanMaxRpm: fan.maxRpm, pumpMinRpm: pump.rpmAtMinDuty, pumpMaxRpm: pump.maxRpm }), [fan, pump]);
-  const issues = evaluation?.issues ?? NO_ISSUES;
+  // One empty list for every clean text: the editor's markers and the problems list are left alone while the document stays clean.
+  const issues = evaluation && evaluation.issues.length > 0 ? evaluation.issues : NO_ISSUES;
 
   const errors = deferredEvaluation?.issues.filter((i) => i.severity === "error").length ?? 0;
 
   return (
     <div className="space-y-5">
-      <EstimateCaution />
+      {CAUTION}
       <MemoWorkspaceHeader
         detail={detail}
         choices={choices}
@@ -245,7 +249,7 @@ function Workspace({ detail, canWrite, knownRanges }: { detail: ProfileDetailVie
                 <PointsTable profile={deferredEvaluation.profile} hw={deferredHw} editing={editing} />
               </Panel>
               <Panel title={`Operating point · ${deferredHw.name}`}>
-                <MemoOperatingPanel profile={deferredEvaluation.profile} hw={deferredHw} inputs={operatingInputs} onInputs={setOperatingInputs} />
+                <MemoOperatingPanel profile={deferredEvaluation.profile} hw={deferredHw} point={deferredPoint} inputs={operatingInputs} onInputs={setOperatingInputs} />
               </Panel>
               <Panel title="Memory">
                 <MemoMemoryGauge profile={deferredEvaluation.profile} revisions={revisions} boardRange={canWrite ? publishRange : (latest?.boardRange ?? null)} knownRanges={knownRanges} />
@@ -260,12 +264,19 @@ function Workspace({ detail, canWrite, knownRanges }: { detail: ProfileDetailVie
           <MemoPublishPanel profileId={profile.id} getText={getText} latest={latest} current={current} defaultRange={defaultRange} onRangeChange={setPublishRange} blocked={errors > 0 || !deferredEvaluation?.profile} />
         </Panel>
       )}
-      <Panel title="Version history" actions={versions.length >= 2 ? <Link className="text-sm text-copper-700 underline" href={`/profiles/${profile.id}/compare`}>Compare versions</Link> : undefined}>
-        <MemoVersionHistory profileId={profile.id} versions={versions} />
-      </Panel>
+      <MemoVersionsPanel profileId={profile.id} versions={versions} />
     </div>
   );
 }
+
+/** The version history with its compare link: nothing here follows the keystrokes. */
+const MemoVersionsPanel = memo(function VersionsPanel({ profileId, versions }: { profileId: string; versions: VersionView[] }) {
+  return (
+    <Panel title="Version history" actions={versions.length >= 2 ? <Link className="text-sm text-copper-700 underline" href={`/profiles/${profileId}/compare`}>Compare versions</Link> : undefined}>
+      <VersionHistory profileId={profileId} versions={versions} />
+    </Panel>
+  );
+});
 
 /** Cooler and board revision choice, save state and import: nothing here follows the keystrokes. */
 function WorkspaceHeader({
