@@ -1,4 +1,7 @@
-import { dutyAtTemp, dutyToRpm, type CurveKind, type HardwareContext, type ProfileSettings } from "@/lib/engine";
+import type { CurveKind, HardwareContext, ProfileSettings } from "@/lib/engine";
+// Engine modules directly (screens load this module): see editor-evaluation.ts.
+import { dutyAtTemp } from "@/lib/speeds/curve";
+import { dutyToRpm } from "@/lib/speeds/rpm";
 
 /**
  * Pump or fan RPM while the liquid cools at `tempC`: the firmware holds the curve's

@@ -1,19 +1,15 @@
-import {
-  bankBytes,
-  componentLevelDbA,
-  dutyToRpm,
-  evaluateCurves,
-  identicalSourcesDb,
-  loadSweep,
-  quantise,
-  validateProfileText,
-  type CoolingProfile,
-  type CurveKind,
-  type HardwareContext,
-  type OperatingPoint,
-  type ProfileSettings,
-  type ValidationIssue,
-} from "@/lib/engine";
+import type { CoolingProfile, CurveKind, HardwareContext, OperatingPoint, ProfileSettings, ValidationIssue } from "@/lib/engine";
+// Engine modules directly, not the engine's API (lib/engine): screens load this module with the
+// page, and the bundler keeps every module the API re-exports that it cannot prove free of side
+// effects (semver's range matching among them) once anything is imported from it.
+import { componentLevelDbA } from "@/lib/acoustics/cooler-noise";
+import { identicalSourcesDb } from "@/lib/acoustics/levels";
+import { bankBytes } from "@/lib/bank/layout";
+import { quantise } from "@/lib/bank/quantise";
+import { evaluateCurves } from "@/lib/evaluation/curve-table";
+import { dutyToRpm } from "@/lib/speeds/rpm";
+import { loadSweep } from "@/lib/thermal/operating-point";
+import { validateProfileText } from "@/lib/validation/validate";
 import { flashedStateAt, slotCodes } from "@/lib/firmware";
 import { coolingBranchRpm } from "./cooling-branch";
 import { fitAdmittedRevisions, misfitReasons, rangeFitMessage, type RevisionCapacity } from "./range-fit";

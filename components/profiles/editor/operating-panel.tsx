@@ -2,7 +2,8 @@
 
 import dynamic from "next/dynamic";
 import { memo, useEffect, useMemo, useState } from "react";
-import { listenerDistanceProblem, type CoolingProfile, type HardwareContext, type OperatingPoint } from "@/lib/engine";
+import type { CoolingProfile, HardwareContext, OperatingPoint } from "@/lib/engine";
+import { listenerDistanceProblem } from "@/lib/acoustics/near-field";
 import { safeLoadSweep } from "@/lib/registry/editor-evaluation";
 import { Field, Input } from "@/components/ui/field";
 

@@ -7,7 +7,9 @@ import { memo, useCallback, useDeferredValue, useEffect, useMemo, useRef, useSta
 import { apiQuery } from "@/lib/api/client";
 import { getProfile } from "@/lib/api/endpoints";
 import type { ProfileDetailView, VersionView } from "@/lib/api/operations/profile-schemas";
-import { operatingPoint } from "@/lib/engine";
+// Engine modules directly, not the engine's API (lib/engine): the bundler keeps every module the
+// API re-exports that it cannot prove free of side effects (semver's among them) in the first load.
+import { operatingPoint } from "@/lib/thermal/operating-point";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 import { evaluateEditorText } from "@/lib/registry/editor-evaluation";
 import { startingBoardRange, type RangeAdmission } from "@/lib/registry/range-fit";

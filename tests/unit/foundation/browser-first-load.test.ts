@@ -22,15 +22,9 @@ const ON_DEMAND_ONLY: { what: string; matches: (spec: string, file: string | nul
   { what: "Monaco", matches: (s) => s === "monaco-editor" || s.startsWith("monaco-editor/") || s === "@monaco-editor/react" },
   { what: "zxcvbn", matches: (s) => s.startsWith("@zxcvbn-ts/") },
   { what: "next-auth's client", matches: (s) => s === "next-auth/react" },
+  // The engine's API (lib/engine) re-exports semver's helpers: screens import engine modules directly.
   { what: "semver (range matching loads when a range is checked, the version suggestion with the publish form)", matches: (s) => s === "semver" || s.startsWith("semver/") },
 ];
-
-/**
- * The engine's public API (lib/engine/index.ts) re-exports every engine module; the bundler keeps
- * only the modules whose exports a screen imports from it (`npm run bench:bundle` measures what it
- * keeps), so an import of it is followed to those modules alone.
- */
-const ENGINE_API = path.join("lib", "engine", "index.ts");
 
 
 
@@ -44,49 +38,13 @@ function typeOnly(clause: string): boolean {
   return names.length > 0 && names.every((n) => n.startsWith("type "));
 }
 
-/** The value names a `{ a, b as c, type D }` clause imports or re-exports (`side` "imported": a, b; "exported": a, c); null for any other clause. */
-function clauseNames(clause: string, side: "imported" | "exported"): string[] | null {
-  const braces = /^\{([^}]*)\}$/.exec(clause.trim());
-  if (!braces) return null;
-  return braces[1]!
-    .split(",")
-    .map((n) => n.trim())
-    .filter((n) => n !== "" && !n.startsWith("type "))
-    .map((n) => {
-      const [name, alias] = n.split(/\s+as\s+/);
-      return side === "exported" ? (alias ?? name!) : name!;
-    });
-}
-
-/** The specifiers a file imports for their value, loaded with it (not type-only, not `import()`), with the names it takes (null: all). */
-function valueImportsNamed(file: string): { spec: string; names: string[] | null }[] {
-  const text = fs.readFileSync(path.join(ROOT, file), "utf8");
-  const out: { spec: string; names: string[] | null }[] = [];
-  for (const m of text.matchAll(/(?:^|\n)\s*(?:import|export)\s+([^;'"]*?)\s+from\s+["']([^"']+)["']/g)) if (!typeOnly(m[1]!)) out.push({ spec: m[2]!, names: clauseNames(m[1]!, "imported") });
-  for (const m of text.matchAll(/(?:^|\n)\s*import\s+["']([^"']+)["']/g)) out.push({ spec: m[1]!, names: null });
-  return out;
-}
-
 /** The specifiers a file imports for their value, loaded with it (not type-only, not `import()`). */
 function valueImports(file: string): string[] {
-  return valueImportsNamed(file).map((i) => i.spec);
-}
-
-/** The modules of the engine's API that provide `names` (specifiers relative to it). */
-function engineModulesFor(names: readonly string[]): string[] {
-  const text = fs.readFileSync(path.join(ROOT, ENGINE_API), "utf8");
+  const text = fs.readFileSync(path.join(ROOT, file), "utf8");
   const out: string[] = [];
-  for (const m of text.matchAll(/(?:^|\n)\s*export\s+(\{[^}]*\})\s+from\s+["']([^"']+)["']/g)) {
-    if ((clauseNames(m[1]!, "exported") ?? []).some((n) => names.includes(n))) out.push(m[2]!);
-  }
+  for (const m of text.matchAll(/(?:^|\n)\s*(?:import|export)\s+([^;'"]*?)\s+from\s+["']([^"']+)["']/g)) if (!typeOnly(m[1]!)) out.push(m[2]!);
+  for (const m of text.matchAll(/(?:^|\n)\s*import\s+["']([^"']+)["']/g)) out.push(m[1]!);
   return out;
-}
-
-/** What loading `file` loads: its value imports, an import of the engine's API standing for the engine modules it names. */
-function loadedWith(file: string): { from: string; spec: string }[] {
-  return valueImportsNamed(file).flatMap(({ spec, names }) =>
-    names && resolveLocal(file, spec) === ENGINE_API ? engineModulesFor(names).map((s) => ({ from: ENGINE_API, spec: s })) : [{ from: file, spec }],
-  );
 }
 
 const isClient = (file: string) => /^\s*(?:\/\/[^\n]*\n\s*)*["']use client["']/.test(fs.readFileSync(path.join(ROOT, file), "utf8"));
@@ -107,8 +65,8 @@ function firstLoad(): Map<string, { spec: string; file: string | null; via: stri
   const queue = [...start];
   while (queue.length) {
     const cur = queue.shift()!;
-    for (const { from, spec } of loadedWith(cur.file)) {
-      const file = resolveLocal(from, spec);
+    for (const spec of valueImports(cur.file)) {
+      const file = resolveLocal(cur.file, spec);
       const client = cur.client || (file !== null && isClient(file));
       const key = file ?? spec;
       if (client && !reached.has(key)) reached.set(key, { spec, file, via: [...cur.via, key] });
@@ -129,9 +87,6 @@ describe("what screens load with the page", () => {
     expect(reached.size).toBeGreaterThan(100);
     expect(reached.has("@tanstack/react-query")).toBe(true);
     expect(reached.has(path.join("lib", "api", "endpoints.ts"))).toBe(true);
-    // An import of the engine's API is followed to the modules that provide the names imported.
-    expect(engineModulesFor(["suggestNextVersion", "operatingPoint"])).toEqual(["../thermal/operating-point", "../versioning/suggest"]);
-    expect(reached.has(path.join("lib", "thermal", "operating-point.ts"))).toBe(true);
     // The charts exist and import recharts; they are only reached through next/dynamic.
     expect(valueImports(path.join("components", "builds", "sound-plot.tsx"))).toContain("recharts");
   });
