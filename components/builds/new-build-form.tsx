@@ -4,7 +4,7 @@ import dynamic from "next/dynamic";
 import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { keepPreviousData, useMutation, useQuery } from "@tanstack/react-query";
-import { useForm, useWatch } from "react-hook-form";
+import { useForm, useWatch, type Resolver } from "react-hook-form";
 import { apiCall, apiQuery, apiUploadJson } from "@/lib/api/client";
 import { AppError } from "@/lib/api/errors";
 import { createBuild, getBuildOptions, uploadFirmware } from "@/lib/api/endpoints";
@@ -25,8 +25,10 @@ import { bankBytesFromVersionImages } from "@/lib/release/bank-fit";
 const BankFit = dynamic(() => import("./bank-fit").then((m) => m.BankFit), { ssr: false, loading: () => <div className="h-24 animate-pulse rounded bg-ink-100" aria-label="Loading the bank size check" /> });
 
 /** The API body without the firmware id: the file is uploaded first, on submit. Its schema loads when the form first validates. */
-const resolver = lazyZodResolver(() => import("@/lib/api/operations/builds").then((m) => m.createBuildBody.omit({ firmwareUploadId: true })));
+const bodyResolver = lazyZodResolver(() => import("@/lib/api/operations/builds").then((m) => m.createBuildBody.omit({ firmwareUploadId: true })));
 type FormValues = Omit<CreateBuildBody, "firmwareUploadId">;
+/** A slot left "(empty)" is not part of the bank: the body is checked, and sent, without it. */
+const resolver: Resolver<FormValues, unknown, FormValues> = (values, context, options) => bodyResolver({ ...values, slots: values.slots.filter(Boolean) }, context, options);
 
 export function NewBuildForm() {
   const router = useRouter();
@@ -111,7 +113,7 @@ export function NewBuildForm() {
             current && candidates.length === 0 && <p className="text-xs text-ink-600">No profile version is published for this board model&apos;s coolers yet; publish one from Profiles first.</p>
           )}
           {Array.from({ length: slotCount }, (_, i) => (
-            <Field key={i} id={`slot-${i}`} label={`Slot ${i + 1}`} error={i === 0 ? errors.slots?.message ?? errors.slots?.[0]?.message : errors.slots?.[i]?.message}>
+            <Field key={i} id={`slot-${i}`} label={`Slot ${i + 1}`} error={i === 0 ? (errors.slots?.root?.message ?? errors.slots?.message ?? errors.slots?.[0]?.message) : errors.slots?.[i]?.message}>
               <Select {...describedBy(`slot-${i}`)} {...form.register(`slots.${i}`)} defaultValue="">
                 <option value="">{i === 0 ? "Pick a profile version…" : "(empty)"}</option>
                 {candidates.map((c) => (

@@ -164,6 +164,14 @@ test.describe("new build form", () => {
     await expect(form.bankFit).toContainText("Pick profile versions to see the bank's size.");
     await form.revisionRange.fill(">=1.0.0 <3.0.0");
 
+    // One version picked, slot 2 left "(empty)": the form finds nothing missing in the slots and
+    // goes on to ask for the firmware image (an empty slot is not part of the bank, not an error).
+    await form.pickSlot(1, "Tarn 240 · Quiet office");
+    await form.createButton.click();
+    await expect(form.alert("Choose the firmware image (.bin or .hex).")).toBeVisible();
+    await expect(form.fieldError("slot-0")).toHaveCount(0);
+    await expect(form.fieldError("slot-1")).toHaveCount(0);
+
     // The bank the two slots make, against each revision's profile memory and slot count (demo revisions).
     await form.pickSlot(1, "Tarn 240 · Quiet office");
     await form.pickSlot(2, "Tarn 360 · Hush");
