@@ -31,7 +31,15 @@ export function localStorage(dir: string): Storage {
         out.end();
         await once(out, "finish");
       } catch (err) {
-        out.destroy();
+        // The file may still be opening (a body refused at its first chunk): removing it before
+        // the open has finished would let the open create it afterwards, an empty file no row
+        // names and no sweep removes. So the stream is closed first, then the file removed.
+        out.on("error", () => undefined); // the request already fails with `err`
+        await new Promise<void>((resolve) => {
+          if (out.closed) return resolve();
+          out.once("close", () => resolve());
+          out.destroy();
+        });
         await fs.rm(file, { force: true });
         throw err;
       }
