@@ -155,4 +155,28 @@ test.describe("direct editing of curves on the plot, as an engineer", () => {
     await expect(page.getByTestId("edit-notice")).toContainText("at least 2 points");
     expect((JSON.parse(await editorText(page)) as Doc).fans.points.length).toBe(2);
   });
+
+  test("a text that stops parsing while being edited keeps the plots of the last one that did, greyed, until it parses again", async ({ page }) => {
+    await openFreshProfile(page);
+    const chart = page.getByTestId("curve-chart");
+    const text = await editorText(page);
+    const doc = JSON.parse(text) as Doc;
+    // A plotted edit first: the plots follow it.
+    doc.fans.points[1]!.dutyPct = Math.min(100, doc.fans.points[1]!.dutyPct + 10);
+    const edited = `${JSON.stringify(doc, null, 2)}\n`;
+    const fanBefore = await chart.getAttribute("data-fan-rpm-40c");
+    await page.evaluate((t) => window.__loopkeeperEditor!.setText(t), edited);
+    await expect.poll(() => chart.getAttribute("data-fan-rpm-40c")).not.toBe(fanBefore);
+    const fanEdited = await chart.getAttribute("data-fan-rpm-40c");
+
+    // The closing brace gone: the note names the problem, and the plots are the edited text's, greyed.
+    await page.evaluate((t) => window.__loopkeeperEditor!.setText(t), edited.trimEnd().slice(0, -1));
+    await expect(page.getByTestId("stale-plots")).toContainText(/The JSON has a problem at line \d+, column \d+/);
+    await expect(chart).toHaveAttribute("data-fan-rpm-40c", fanEdited!);
+    await expect(page.getByRole("slider", { name: "fan point 2" })).toHaveCount(0);
+
+    await page.evaluate((t) => window.__loopkeeperEditor!.setText(t), text);
+    await expect(page.getByTestId("stale-plots")).toHaveCount(0);
+    await expect(chart).toHaveAttribute("data-fan-rpm-40c", fanBefore!);
+  });
 });

@@ -23,6 +23,9 @@ export interface OperatingMark {
   fanRpm: number;
 }
 
+// The legend changes only with the fan stop's presence, not with every edit.
+const Legend = memo(PlotLegend);
+
 const HEIGHT = 340;
 const M = { top: 22, right: 52, bottom: 38, left: 60 };
 
@@ -111,6 +114,11 @@ function LiveCurvePlot({ rows, limits, profile, flashed, hw, operating, editing 
   const [boxRef, width] = useWidth();
   const svgRef = useRef<SVGSVGElement | null>(null);
   const drag = useRef<DragStart | null>(null);
+  // Where the plot is on the page during a drag, read once when the press lands: reading it on
+  // every move would force a layout of whatever the last commit (the table, the operating panel
+  // in the background pass) changed, before the move's own work, and the frame would lay out
+  // again after it. A scroll, a new width or the page changing height (a notice above) reads it again.
+  const dragBox = useRef<DOMRect | null>(null);
   const plotW = Math.max(200, width - M.left - M.right);
   const plotH = HEIGHT - M.top - M.bottom;
 
@@ -163,12 +171,25 @@ function LiveCurvePlot({ rows, limits, profile, flashed, hw, operating, editing 
   }, [editing]);
   const onDragStart = useCallback((start: DragStart, e: ReactPointerEvent<SVGElement>) => {
     drag.current = start;
+    dragBox.current = svgRef.current?.getBoundingClientRect() ?? null;
     svgRef.current?.setPointerCapture(e.pointerId);
     editingNow.current?.beginGesture();
   }, []);
+  useEffect(() => {
+    const forget = () => {
+      dragBox.current = null;
+    };
+    forget();
+    const page = new ResizeObserver(forget);
+    page.observe(document.body);
+    window.addEventListener("scroll", forget, { capture: true, passive: true });
+    return () => {
+      page.disconnect();
+      window.removeEventListener("scroll", forget, { capture: true });
+    };
+  }, [width]);
   const dutyToY = useCallback((kind: CurveKind, duty: number) => y(dutyToHandleRpm(duty, motors[kind])), [y, motors]);
-  const toData = (e: { clientX: number; clientY: number }) => {
-    const box = svgRef.current?.getBoundingClientRect();
+  const toData = (e: { clientX: number; clientY: number }, box: DOMRect | null | undefined = svgRef.current?.getBoundingClientRect()) => {
     if (!box) return null;
     return { tempC: x.invert(e.clientX - box.left), rpm: y.invert(e.clientY - box.top) };
   };
@@ -176,7 +197,8 @@ function LiveCurvePlot({ rows, limits, profile, flashed, hw, operating, editing 
   const onPointerMove = (e: ReactPointerEvent<SVGSVGElement>) => {
     const d = drag.current;
     if (!d || !editing) return;
-    const at = toData(e);
+    dragBox.current ??= svgRef.current?.getBoundingClientRect() ?? null;
+    const at = toData(e, dragBox.current);
     if (!at) return;
     performance.mark("lk-drag", { startTime: e.timeStamp });
     if (d.target.type === "point") {
@@ -192,6 +214,7 @@ function LiveCurvePlot({ rows, limits, profile, flashed, hw, operating, editing 
   const endDrag = () => {
     if (!drag.current) return;
     drag.current = null;
+    dragBox.current = null;
     editing?.endGesture();
   };
   const onDoubleClick = (e: React.MouseEvent<SVGSVGElement>) => {
@@ -217,7 +240,7 @@ function LiveCurvePlot({ rows, limits, profile, flashed, hw, operating, editing 
       data-first-pump-rpm={rows[0]?.pumpRpm ?? ""}
       data-fan-rpm-40c={rows.find((r) => r.tempC === 40)?.fanRpm ?? ""}
     >
-      <PlotLegend hasStop={stop !== undefined} />
+      <Legend hasStop={stop !== undefined} />
       <div ref={boxRef} className="w-full">
         <svg
           ref={svgRef}

@@ -83,6 +83,9 @@ function JsonEditor({
       links: false,
       unicodeHighlight: { ambiguousCharacters: false, invisibleCharacters: false, nonBasicASCII: false },
       foldingStrategy: "indentation",
+      // No inline (ghost text) completion provider exists for a profile document; off, its model
+      // does not re-derive its state from every edit.
+      inlineSuggest: { enabled: false },
     }),
     [readOnly, label],
   );

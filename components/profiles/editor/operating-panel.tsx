@@ -1,32 +1,18 @@
 "use client";
 
 import dynamic from "next/dynamic";
-import { memo, useEffect, useMemo, useState } from "react";
+import { memo, useMemo } from "react";
 import type { CoolingProfile, HardwareContext, OperatingPoint } from "@/lib/engine";
 import { listenerDistanceProblem } from "@/lib/acoustics/near-field";
 import { safeLoadSweep } from "@/lib/registry/editor-evaluation";
 import { Field, Input } from "@/components/ui/field";
+import { useSettled } from "./use-settled";
 
 // memo: the chart (recharts, the heaviest thing on the page to redraw) redraws only for new rows.
 const SweepChart = memo(dynamic(() => import("../charts/sweep-chart"), { ssr: false, loading: () => <div className="h-60 animate-pulse rounded bg-ink-100" /> }));
 
 /** How long the curve must rest before the load sweep chart redraws, ms. */
 const SWEEP_SETTLE_MS = 250;
-
-/**
- * `value` once it has stayed the same for `ms`: the load sweep chart catches up when a drag or
- * typing pauses, while the settled point (the numbers above it, and the mark on the live plot)
- * follows every step.
- */
-function useSettled<T>(value: T, ms: number): T {
-  const [settled, setSettled] = useState(value);
-  useEffect(() => {
-    if (Object.is(settled, value)) return;
-    const timer = setTimeout(() => setSettled(value), ms);
-    return () => clearTimeout(timer);
-  }, [value, settled, ms]);
-  return settled;
-}
 
 const fmt = (n: number, digits = 1) => n.toFixed(digits);
 

@@ -2,7 +2,7 @@
 
 import { hex32 } from "@/lib/hex/address";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { useEffect, useMemo, useState } from "react";
+import { memo, useEffect, useMemo, useState } from "react";
 import { useForm } from "react-hook-form";
 import { apiCall, apiQuery, operationKey } from "@/lib/api/client";
 import { getProfile, getVersion, publishVersion } from "@/lib/api/endpoints";
@@ -15,25 +15,16 @@ import { Notice } from "@/components/ui/notice";
 import { ErrorNotice } from "@/components/ui/error-notice";
 import { fieldsOf, showServerIssues } from "@/components/ui/server-issues";
 import { loadRangeMatch } from "./use-range-admission";
+import { useSettled } from "./use-settled";
 
 /** The publish body without the text (the editor's); its schema loads when the form first validates. */
 const resolver = lazyZodResolver(() => import("@/lib/api/operations/profile-schemas").then((m) => m.publishBody.omit({ text: true })));
 type PublishForm = Omit<PublishBody, "text">;
 
-/**
- * Publish the editor's text as a new immutable version; the server encodes and checks it again.
- * The version number is suggested from what changed since the latest version (its document is
- * fetched here, and the rule and semver come with this form, not with the page).
- */
-export function PublishPanel({
-  profileId,
-  getText,
-  latest,
-  current,
-  defaultRange,
-  onRangeChange,
-  blocked,
-}: {
+/** How long the document must rest before the version suggestion follows it, ms. */
+const SUGGESTION_SETTLE_MS = 250;
+
+interface PublishPanelProps {
   profileId: string;
   /** The editor's text as it is now: read when the form is sent. */
   getText: () => string;
@@ -45,7 +36,22 @@ export function PublishPanel({
   /** Called as the range is typed, so the memory gauge can judge it live. */
   onRangeChange?: (range: string) => void;
   blocked: boolean;
-}) {
+}
+
+/**
+ * Publish the editor's text as a new immutable version; the server encodes and checks it again.
+ * The version number is suggested from what changed since the latest version (its document is
+ * fetched here, and the rule and semver come with this form, not with the page). The suggestion
+ * follows the document once it has rested, as the load sweep chart does: the form (its query,
+ * the suggestion's comparison of both curves) is left alone while a drag or typing goes on. What
+ * is sent is the editor's text when the form is sent, and the server checks it again.
+ */
+export function PublishPanel({ current, ...rest }: PublishPanelProps) {
+  const settled = useSettled(current, SUGGESTION_SETTLE_MS);
+  return <MemoPublishForm current={settled} {...rest} />;
+}
+
+const MemoPublishForm = memo(function PublishForm({ profileId, getText, latest, current, defaultRange, onRangeChange, blocked }: PublishPanelProps) {
   const qc = useQueryClient();
   const latestDoc = useQuery({
     ...apiQuery(getVersion, { params: { id: latest?.id ?? "" } }),
@@ -96,4 +102,4 @@ export function PublishPanel({
       <Button type="submit" disabled={publish.isPending || blocked}>Publish version</Button>
     </form>
   );
-}
+});

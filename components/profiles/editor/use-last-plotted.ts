@@ -1,6 +1,6 @@
 "use client";
 
-import { useMemo, useState } from "react";
+import { useCallback, useLayoutEffect, useMemo, useRef, useState } from "react";
 import type { HardwareContext, ValidationIssue } from "@/lib/engine";
 import { evaluateEditorText, type EditorEvaluation } from "@/lib/registry/editor-evaluation";
 
@@ -17,14 +17,27 @@ export interface PlottedEvaluation {
  * Keeps the last evaluation that produced plots, so a draft that stops parsing (or reopens
  * broken) still shows its curves, greyed. On reopening, `savedPlottableText` (the last draft
  * the server saw pass the schema) stands in until the text plots again.
+ *
+ * `beforeEdit` is called by whatever changes the text, before it does: the evaluation on screen
+ * then is kept if it plotted. Its update joins the text's own, so an edit renders the workspace
+ * once (adjusting the kept evaluation while rendering would render it twice per keystroke).
  */
-export function useLastPlotted(evaluation: EditorEvaluation | null, hw: HardwareContext | null, savedPlottableText: string | null): PlottedEvaluation {
+export function useLastPlotted(evaluation: EditorEvaluation | null, hw: HardwareContext | null, savedPlottableText: string | null): { plotted: PlottedEvaluation; beforeEdit: () => void } {
   const [last, setLast] = useState<EditorEvaluation | null>(null);
+  const shown = useRef(evaluation);
+  useLayoutEffect(() => {
+    shown.current = evaluation;
+  }, [evaluation]);
+  const beforeEdit = useCallback(() => {
+    const now = shown.current;
+    if (now && now.rows.length > 0) setLast(now);
+  }, []);
   const plots = Boolean(evaluation && evaluation.rows.length > 0);
-  // Adjusting state while rendering (not in an effect) keeps the greyed plots one render behind at most.
-  if (plots && last !== evaluation) setLast(evaluation);
   const saved = useMemo(() => (!plots && !last && savedPlottableText && hw ? evaluateEditorText(savedPlottableText, hw) : null), [plots, last, savedPlottableText, hw]);
-  if (plots) return { evaluation, stale: false, problem: undefined };
-  const earlier = last ?? (saved && saved.rows.length > 0 ? saved : null);
-  return { evaluation: earlier, stale: earlier !== null, problem: evaluation?.issues.find((i) => i.severity === "error") };
+  const plotted = useMemo<PlottedEvaluation>(() => {
+    if (plots) return { evaluation, stale: false, problem: undefined };
+    const earlier = last ?? (saved && saved.rows.length > 0 ? saved : null);
+    return { evaluation: earlier, stale: earlier !== null, problem: evaluation?.issues.find((i) => i.severity === "error") };
+  }, [plots, evaluation, last, saved]);
+  return { plotted, beforeEdit };
 }

@@ -66,16 +66,36 @@ export function ProfileWorkspace({ id, canWrite, knownRanges = NO_RANGES }: { id
     return (
       <ErrorNotice error={q.error} onRetry={() => void q.refetch()} />
     );
-  return <Workspace detail={q.data} canWrite={canWrite} knownRanges={knownRanges} />;
+  return <CoolerChoicesLoader detail={q.data} canWrite={canWrite} knownRanges={knownRanges} />;
 }
 
-function Workspace({ detail, canWrite, knownRanges }: { detail: ProfileDetailView; canWrite: boolean; knownRanges: RangeAdmission[] }) {
+/**
+ * The cooler lists (two queries) are read here, above the component that holds the text, so a
+ * keystroke does not run their hooks (key hashing, and an options update after every render).
+ */
+function CoolerChoicesLoader({ detail, canWrite, knownRanges }: { detail: ProfileDetailView; canWrite: boolean; knownRanges: RangeAdmission[] }) {
+  const { choices, loadError } = useCoolerChoices(detail);
+  return <Workspace detail={detail} choices={choices} loadError={loadError} canWrite={canWrite} knownRanges={knownRanges} />;
+}
+
+function Workspace({
+  detail,
+  choices,
+  loadError,
+  canWrite,
+  knownRanges,
+}: {
+  detail: ProfileDetailView;
+  choices: CoolerChoice[];
+  loadError: boolean;
+  canWrite: boolean;
+  knownRanges: RangeAdmission[];
+}) {
   const { profile, cooler, revisions, versions } = detail;
   const [text, setText] = useState<string>(() => profile.draftText ?? "{}\n");
   const [revisionId, setRevisionId] = useState(revisions[revisions.length - 1]?.id ?? "");
   const [coolerId, setCoolerId] = useState(cooler.id);
   const editor = useRef<EditorHandle | null>(null);
-  const { choices, loadError } = useCoolerChoices(detail);
   const chosen = choices.find((c) => c.id === coolerId) ?? choices[0]!;
   const { fan, pump } = chosen;
   const revision = revisions.find((r) => r.id === revisionId) ?? revisions[revisions.length - 1];
@@ -86,11 +106,18 @@ function Workspace({ detail, canWrite, knownRanges }: { detail: ProfileDetailVie
   // renders in a background pass React may interrupt, so typing stays within a frame. The publish
   // form reads the editor's text when it is sent: what is sent is what is on screen (the server
   // checks it again).
-  const plotted = useLastPlotted(evaluation, hw, profile.lastPlottableDraftText);
+  const { plotted, beforeEdit } = useLastPlotted(evaluation, hw, profile.lastPlottableDraftText);
   const deferredEvaluation = useDeferredValue(evaluation);
   const deferredHw = useDeferredValue(hw);
   const { state: save, adopt, keepMine } = useAutosave(profile.id, text, canWrite, profile.draftRevision);
-  const replaceText = useCallback((t: string) => (editor.current ? editor.current.setText(t) : setText(t)), []);
+  const replaceText = useCallback(
+    (t: string) => {
+      if (editor.current) return editor.current.setText(t);
+      beforeEdit();
+      setText(t);
+    },
+    [beforeEdit],
+  );
   const onImported = useCallback(
     (t: string, draftRevision: number) => {
       adopt(t, draftRevision);
@@ -142,10 +169,14 @@ function Workspace({ detail, canWrite, knownRanges }: { detail: ProfileDetailVie
     }
   }, [evaluation]);
 
-  const onEdit = useCallback((t: string) => {
-    performance.mark("lk-edit");
-    setText(t);
-  }, []);
+  const onEdit = useCallback(
+    (t: string) => {
+      performance.mark("lk-edit");
+      beforeEdit();
+      setText(t);
+    },
+    [beforeEdit],
+  );
   const onReady = useCallback((h: EditorHandle) => {
     editor.current = h;
     window.__loopkeeperEditor = h;
