@@ -1,5 +1,6 @@
 "use client";
 
+import { flushSync } from "react-dom";
 import { memo, useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type PointerEvent as ReactPointerEvent } from "react";
 import type { CoolingProfile, CurveKind, HardwareContext } from "@/lib/engine";
 import type { PlotRow } from "@/lib/registry/editor-evaluation";
@@ -201,15 +202,21 @@ function LiveCurvePlot({ rows, limits, profile, flashed, hw, operating, editing 
     const at = toData(e, dragBox.current);
     if (!at) return;
     performance.mark("lk-drag", { startTime: e.timeStamp });
-    if (d.target.type === "point") {
-      const duty = handleRpmToDuty(at.rpm, motors[d.target.kind]);
-      editing.movePoint(d.target.kind, d.target.index, { tempC: snapToStep(at.tempC, TEMP_STEP_C), dutyPct: snapToStep(duty, 0.5) }, false);
-    } else if (d.target.type === "fanStop") {
-      editing.setValue(d.target, snapToStep(at.tempC, TEMP_STEP_C), false);
-    } else {
-      // The band handle sits on the falling branch, hysteresis °C left of its anchor point.
-      editing.setValue(d.target, snapToStep(d.anchorTempC - at.tempC, 0.1), false);
-    }
+    const target = d.target;
+    // The browser delivers pointer moves at the start of a frame. Committed at once (not in the
+    // scheduler's next task, as React does for a continuous event), the step is drawn in the same
+    // frame as the move that caused it, one frame sooner.
+    flushSync(() => {
+      if (target.type === "point") {
+        const duty = handleRpmToDuty(at.rpm, motors[target.kind]);
+        editing.movePoint(target.kind, target.index, { tempC: snapToStep(at.tempC, TEMP_STEP_C), dutyPct: snapToStep(duty, 0.5) }, false);
+      } else if (target.type === "fanStop") {
+        editing.setValue(target, snapToStep(at.tempC, TEMP_STEP_C), false);
+      } else {
+        // The band handle sits on the falling branch, hysteresis °C left of its anchor point.
+        editing.setValue(target, snapToStep(d.anchorTempC - at.tempC, 0.1), false);
+      }
+    });
   };
   const endDrag = () => {
     if (!drag.current) return;
