@@ -86,6 +86,11 @@ function JsonEditor({
       // No inline (ghost text) completion provider exists for a profile document; off, its model
       // does not re-derive its state from every edit.
       inlineSuggest: { enabled: false },
+      // Typed text arrives as the hidden textarea's "input" event, which React treats as discrete
+      // input: the keystroke's markers and plots are committed before the browser draws its next
+      // frame. Through the EditContext API it arrives as "textupdate", which React schedules as a
+      // default update for a later task (a keystroke then took about two frames, bench:editor).
+      editContext: false,
     }),
     [readOnly, label],
   );
