@@ -3,4 +3,7 @@ import { listAudit } from "@/lib/api/operations/admin";
 import { getDb } from "@/db/client";
 import { auditPage } from "@/lib/use-cases/admin/read";
 
+// Every answer depends on who asks and when: never prerendered, and the request is not wrapped for static-generation tracking.
+export const dynamic = "force-dynamic";
+
 export const GET = apiRoute(listAudit, async ({ query }) => auditPage(getDb(), query));

@@ -3,6 +3,9 @@ import { buildOpenApi } from "@/lib/api/openapi";
 import { etagOf, ifNoneMatchHits } from "@/lib/platform/http/etag";
 import pkg from "@/package.json";
 
+// Every answer depends on who asks and when: never prerendered, and the request is not wrapped for static-generation tracking.
+export const dynamic = "force-dynamic";
+
 interface BuiltDocument {
   body: Uint8Array<ArrayBuffer>;
   etag: string;

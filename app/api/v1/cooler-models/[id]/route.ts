@@ -4,4 +4,7 @@ import { getDb } from "@/db/client";
 import { auditActor } from "@/lib/platform/auth/actor";
 import { updateCoolerModel } from "@/lib/use-cases/registry/save-cooler-model";
 
+// Every answer depends on who asks and when: never prerendered, and the request is not wrapped for static-generation tracking.
+export const dynamic = "force-dynamic";
+
 export const PUT = apiRoute(updateCoolerModelOp, async ({ actor, params, body, requestId }) => ({ coolerModel: await updateCoolerModel(getDb(), auditActor(actor, requestId), { id: params.id, ...body }) }));

@@ -3,4 +3,7 @@ import { getVersion } from "@/lib/api/operations/profiles";
 import { getDb } from "@/db/client";
 import { profileVersion } from "@/lib/use-cases/profiles/read";
 
+// Every answer depends on who asks and when: never prerendered, and the request is not wrapped for static-generation tracking.
+export const dynamic = "force-dynamic";
+
 export const GET = apiRoute(getVersion, async ({ params }) => profileVersion(getDb(), { id: params.id }));

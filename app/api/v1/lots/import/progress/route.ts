@@ -7,6 +7,9 @@ import { ImportCancelled, importLotsCsv } from "@/lib/use-cases/lots/import";
 import { IMPORT_PROGRESS_TYPE, type ImportEvent } from "@/lib/lots/import-events";
 import type { ErrorBody } from "@/lib/api/errors";
 
+// Every answer depends on who asks and when: never prerendered, and the request is not wrapped for static-generation tracking.
+export const dynamic = "force-dynamic";
+
 /**
  * The lots import with its progress: one JSON line per batch of rows, then the result (or the
  * error) as the last line. The client going away (Cancel) stops the import between batches and

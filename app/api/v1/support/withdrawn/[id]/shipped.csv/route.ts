@@ -4,4 +4,7 @@ import { getDb } from "@/db/client";
 import { downloadResponse } from "@/lib/platform/http/download";
 import { shippedCsv } from "@/lib/use-cases/support/withdrawn";
 
+// Every answer depends on who asks and when: never prerendered, and the request is not wrapped for static-generation tracking.
+export const dynamic = "force-dynamic";
+
 export const GET = apiRoute(exportShippedCsv, async ({ params }) => downloadResponse(await shippedCsv(getDb(), { buildId: params.id })));
