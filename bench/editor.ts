@@ -280,7 +280,8 @@ async function main() {
     await page.waitForTimeout(1500);
     const loadAfter = os.loadavg()[0]!;
     console.log(`load average (1 min) ${loadBefore.toFixed(2)} at the start, ${loadAfter.toFixed(2)} at the end; ${os.loadavg().map((l) => l.toFixed(2)).join(" / ")} (1 / 5 / 15 min) now, ${os.cpus().length} cores`);
-    const loaded = Math.max(loadBefore, loadAfter) > os.cpus().length * 0.75;
+    // Judged on the load as the cases begin: the bench's own browser and server raise it during the run.
+    const loaded = loadBefore > os.cpus().length * 0.75;
 
     const section = [
       "<!-- bench:editor:start -->",
