@@ -141,6 +141,8 @@ async function main() {
     NEXT_TELEMETRY_DISABLED: "1",
   };
   const nextBin = path.join(root, "node_modules", "next", "dist", "bin", "next");
+  // Whether other work shares the machine is read before the bench's own build raises the load.
+  const loadBeforeBuild = os.loadavg()[0]!;
   if (process.env.BENCH_SKIP_BUILD !== "1" || !fs.existsSync(path.join(root, DIST, "BUILD_ID"))) {
     console.log("[bench] Building the app in production mode…");
     const b = spawnSync(process.execPath, [nextBin, "build"], { cwd: root, env, stdio: "inherit" });
@@ -195,7 +197,7 @@ async function main() {
     await pool.query(`update api_tokens set revoked_at = now() where id = $1`, [tokenId]);
     await pool.end();
   }
-  writeSection(results, database, summariseProfile(profiledRequests, profiledWindow), loadAtStart);
+  writeSection(results, database, summariseProfile(profiledRequests, profiledWindow), { beforeBuild: loadBeforeBuild, atStart: loadAtStart });
 }
 
 interface DatabaseTime {
@@ -321,7 +323,7 @@ function summariseProfile(requests: number, window: { fromUs: number; toUs: numb
   };
 }
 
-function writeSection(results: Result[], database: DatabaseTime | undefined, profile: ProfileSummary | undefined, loadAtStart: number) {
+function writeSection(results: Result[], database: DatabaseTime | undefined, profile: ProfileSummary | undefined, load: { beforeBuild: number; atStart: number }) {
   const cpu = os.cpus();
   const row = (r: Result) => `| ${r.target} | ${r.concurrency} | ${r.requests.toLocaleString("en")} | ${r.rps.toFixed(0)} | ${r.p50.toFixed(2)} | ${r.p99.toFixed(2)} | ${r.errors} |`;
   const find = (target: string, c: number) => results.find((r) => r.concurrency === c && r.target === target);
@@ -346,8 +348,8 @@ function writeSection(results: Result[], database: DatabaseTime | undefined, pro
       `${DURATION_S} s per run after a 3 s warm-up. The app is scripts/serve.mjs on a production build (no profiler during the measured runs); the lookup uses an API token of the support account with rate limiting on, and reads each build's slots once per 5 s (kept in process by build id) ` +
       "(counted in process and sent to PostgreSQL in batches; the budget set high enough that the run is never refused). The floor is `/api/health/live` (a route handler with no I/O); the bare handler is node:http + pg running the lot query as a named prepared statement, no framework.",
     "",
-    `Machine: Node ${process.version}, ${cpu.length} × ${cpu[0]?.model.trim() ?? "CPU"}, ${os.platform()}; load average (1 min) ${loadAtStart.toFixed(1)} before the run and ${os.loadavg()[0]!.toFixed(1)} at its end. ` +
-      (loadAtStart < 1.5
+    `Machine: Node ${process.version}, ${cpu.length} × ${cpu[0]?.model.trim() ?? "CPU"}, ${os.platform()}; load average (1 min) ${load.beforeBuild.toFixed(1)} before the bench began, ${load.atStart.toFixed(1)} as the runs began (after its own build, if it built) and ${os.loadavg()[0]!.toFixed(1)} at its end. ` +
+      (load.beforeBuild < 1.5
         ? "The machine was otherwise quiet, but the load generator, the app, the bare handler and PostgreSQL share its two cores, so the absolute figures are lower than on a server with the load generator elsewhere. "
         : "**Loaded machine**: other work shared the two cores while this ran (besides the load generator, app, bare handler and PostgreSQL); absolute figures are low and noisy. ") +
       `Compare figures within this run (the ratios). Run ${new Date().toISOString().slice(0, 16).replace("T", " ")} UTC.`,
