@@ -12,6 +12,7 @@ import { coolerNoise } from "@/lib/engine";
 import { MEASUREMENT_HEADER } from "@/lib/release/measurements";
 import { tinyPdf } from "@/db/seed/builds";
 import { checkSlots, checkStoredBuild } from "@/lib/use-cases/builds/check";
+import { buildFormOptions } from "@/lib/use-cases/builds/options";
 import { toHardwareContext } from "@/lib/registry/hardware-context";
 
 // Background delivery passes after a transition must not reach anybody's SMTP server.
@@ -146,5 +147,16 @@ describe("build stages", () => {
     const { check } = await checkSlots(getDb(), { boardModelId: await demoBoardId(), revisionRange: ">=1.1.0 <3.0.0", profileVersionIds: versions.map((v) => v.id) });
     expect(check.ok).toBe(false);
     expect(check.ok ? "" : check.issues[0]).toMatch(/is for board revisions \^2\.0\.0; revision 1\.1\.0 is in the build's range/);
+  });
+
+  it("offers the new-build form no revisions or versions until a board model is named, then that board's", async () => {
+    const none = await buildFormOptions(getDb(), {});
+    expect(none.boardModels.length).toBeGreaterThan(0);
+    expect(none.revisions).toEqual([]);
+    expect(none.candidates).toEqual([]);
+    const boardModelId = await demoBoardId();
+    const named = await buildFormOptions(getDb(), { boardModelId });
+    expect(named.revisions.length).toBeGreaterThan(0);
+    expect(named.candidates.length).toBeGreaterThan(0);
   });
 });

@@ -175,7 +175,7 @@ export const getBuildOptions = defineOperation({
   id: "getBuildOptions",
   method: "GET",
   path: "/api/v1/builds/options",
-  summary: "Board models, their revisions and the published profile versions a new build can use",
+  summary: "Board models, and for the one named by boardModelId its revisions and the published profile versions a new build can use",
   tag: "Builds",
   access: "build:create",
   query: buildOptionsQuery,

@@ -608,7 +608,7 @@ export interface paths {
             cookie?: never;
         };
         /**
-         * Board models, their revisions and the published profile versions a new build can use
+         * Board models, and for the one named by boardModelId its revisions and the published profile versions a new build can use
          * @description Roles: admin, engineer, release_manager.
          */
         get: operations["getBuildOptions"];
