@@ -1,4 +1,5 @@
 import { crc32 } from "../checksums/crc32";
+import { hex32 } from "../hex/address";
 import { toHex } from "../checksums/sha256";
 import type { CurveSettings, FanCurve, ProfileSettings } from "../profile/types";
 import {
@@ -27,7 +28,6 @@ const MIN_SLOT_BYTES = SLOT_FIXED_BYTES + 2 * (CURVE_FIXED_BYTES + BYTES_PER_POI
 /** What erased EEPROM or flash reads as. */
 const ERASED_BYTE = 0xff;
 
-const hex32 = (n: number): string => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
 
 class SlotReader {
   constructor(

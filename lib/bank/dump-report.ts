@@ -1,9 +1,9 @@
 import { readIntelHex } from "../hex/read";
+import { hex32 } from "../hex/address";
 import { decodeBank } from "./decode";
 import { judgeSignature, type DumpSignature, type SigningKeyRef, type VerifySignature } from "./dump-signature";
 import { identifySlots, imageBytes, imageSha256, matchBuild, type RegistryBuild, type RegistryVersion, type SlotReport } from "./identify";
 
-const hex32 = (n: number): string => `0x${n.toString(16).toUpperCase().padStart(8, "0")}`;
 
 /** Intel HEX when the text starts with a record mark (after blanks or a UTF-8 byte-order mark); anything else is a raw binary image. */
 export function looksLikeIntelHex(bytes: Uint8Array): boolean {
