@@ -153,8 +153,7 @@ async function main() {
   const results: Result[] = [];
   let database: DatabaseTime | undefined;
   let targets: { name: string; url: (s: string) => string; headers: Record<string, string> }[] = [];
-  let profiledRequests = 0;
-  let profiledWindow = { fromUs: 0, toUs: Infinity };
+  const profiled: Partial<Record<"lookup" | "floor", { dir: string; requests: number; window: { fromUs: number; toUs: number } }>> = {};
   const loadAtStart = os.loadavg()[0]!;
   try {
     // The measured runs go without a profiler; the lookup is profiled alone afterwards.
@@ -181,23 +180,30 @@ async function main() {
     database = await databaseTime(pool);
     await stopAndWait(app);
     app = undefined;
-    // Where the lookup's time goes: a fresh app under --cpu-prof that serves only the lookup.
-    fs.rmSync(PROFILE_DIR, { recursive: true, force: true });
-    app = startApp(env, ["--cpu-prof", `--cpu-prof-dir=${PROFILE_DIR}`]);
-    await waitFor(`http://127.0.0.1:${APP_PORT}/api/health`, 180_000);
-    const lookupTarget = targets.find((t) => t.name === LOOKUP)!;
-    await load(lookupTarget.url, lookupTarget.headers, 10, 3);
-    // CPU profile timestamps are V8 ticks on the monotonic clock, in µs, like hrtime here.
-    const from = Number(process.hrtime.bigint() / 1000n);
-    profiledRequests = (await load(lookupTarget.url, lookupTarget.headers, 10, PROFILE_S)).requests;
-    profiledWindow = { fromUs: from, toUs: Number(process.hrtime.bigint() / 1000n) };
+    // Where the lookup's time goes: a fresh app under --cpu-prof that serves only the lookup, and
+    // another that serves only the floor, so the lookup's cost can be read against the framework's.
+    for (const [name, which] of [["lookup", LOOKUP], ["floor", FLOOR]] as const) {
+      const dir = path.join(PROFILE_DIR, name);
+      fs.rmSync(dir, { recursive: true, force: true });
+      app = startApp(env, ["--cpu-prof", `--cpu-prof-dir=${dir}`]);
+      await waitFor(`http://127.0.0.1:${APP_PORT}/api/health`, 180_000);
+      const target = targets.find((t) => t.name === which)!;
+      await load(target.url, target.headers, 10, 3);
+      // CPU profile timestamps are V8 ticks on the monotonic clock, in µs, like hrtime here.
+      const from = Number(process.hrtime.bigint() / 1000n);
+      const requests = (await load(target.url, target.headers, 10, PROFILE_S)).requests;
+      profiled[name] = { dir, requests, window: { fromUs: from, toUs: Number(process.hrtime.bigint() / 1000n) } };
+      await stopAndWait(app);
+      app = undefined;
+    }
   } finally {
     await stopAndWait(app);
     bare?.kill("SIGTERM");
     await pool.query(`update api_tokens set revoked_at = now() where id = $1`, [tokenId]);
     await pool.end();
   }
-  writeSection(results, database, summariseProfile(profiledRequests, profiledWindow), { beforeBuild: loadBeforeBuild, atStart: loadAtStart });
+  const summary = (p: (typeof profiled)["lookup"]) => (p ? summariseProfile(p.dir, p.requests, p.window) : undefined);
+  writeSection(results, database, summary(profiled.lookup), summary(profiled.floor), { beforeBuild: loadBeforeBuild, atStart: loadAtStart });
 }
 
 interface DatabaseTime {
@@ -233,6 +239,10 @@ interface ProfileSummary {
   byArea: { area: string; busyPct: number; usPerRequest: number }[];
   /** The busiest functions (self time), idle left out. */
   topFunctions: { what: string; busyPct: number }[];
+  /** CPU µs per request of every function (self time), to set one profile against another. */
+  usPerRequestByFunction: Map<string, number>;
+  /** CPU µs per request, idle left out. */
+  busyUsPerRequest: number;
   idlePct: number;
 }
 
@@ -272,12 +282,12 @@ function makeLocator() {
   };
 }
 
-/** The lookup-only CPU profile summarised by area and by function (self time). */
-function summariseProfile(requests: number, window: { fromUs: number; toUs: number }): ProfileSummary | undefined {
-  if (!fs.existsSync(PROFILE_DIR)) return undefined;
-  const file = fs.readdirSync(PROFILE_DIR).find((f) => f.endsWith(".cpuprofile"));
+/** A one-route CPU profile summarised by area and by function (self time). */
+function summariseProfile(dir: string, requests: number, window: { fromUs: number; toUs: number }): ProfileSummary | undefined {
+  if (!fs.existsSync(dir)) return undefined;
+  const file = fs.readdirSync(dir).find((f) => f.endsWith(".cpuprofile"));
   if (!file) return undefined;
-  const profile = JSON.parse(fs.readFileSync(path.join(PROFILE_DIR, file), "utf8")) as {
+  const profile = JSON.parse(fs.readFileSync(path.join(dir, file), "utf8")) as {
     nodes: { id: number; callFrame: { functionName: string; url: string; lineNumber: number; columnNumber: number } }[];
     startTime: number;
     samples: number[];
@@ -320,10 +330,12 @@ function summariseProfile(requests: number, window: { fromUs: number; toUs: numb
     topFunctions: rank(functions)
       .slice(0, 15)
       .map(([what, hits]) => ({ what, busyPct: (100 * hits) / busy })),
+    usPerRequestByFunction: new Map([...functions].map(([what, hits]) => [what, requests ? (hits * usPerHit) / requests : NaN])),
+    busyUsPerRequest: requests ? (busy * usPerHit) / requests : NaN,
   };
 }
 
-function writeSection(results: Result[], database: DatabaseTime | undefined, profile: ProfileSummary | undefined, load: { beforeBuild: number; atStart: number }) {
+function writeSection(results: Result[], database: DatabaseTime | undefined, profile: ProfileSummary | undefined, floorProfile: ProfileSummary | undefined, load: { beforeBuild: number; atStart: number }) {
   const cpu = os.cpus();
   const row = (r: Result) => `| ${r.target} | ${r.concurrency} | ${r.requests.toLocaleString("en")} | ${r.rps.toFixed(0)} | ${r.p50.toFixed(2)} | ${r.p99.toFixed(2)} | ${r.errors} |`;
   const find = (target: string, c: number) => results.find((r) => r.concurrency === c && r.target === target);
@@ -378,12 +390,44 @@ function writeSection(results: Result[], database: DatabaseTime | undefined, pro
           "| function — where | self % |",
           "|---|---:|",
           ...profile.topFunctions.map((p) => `| ${p.what.replace(/\|/g, "\\|")} | ${p.busyPct.toFixed(1)} |`),
+          ...(floorProfile ? beyondTheFloor(profile, floorProfile) : []),
         ]
       : ["- App CPU profile: not taken in this run."]),
     "<!-- bench:lookup:end -->",
   ].join("\n");
   writeBenchSection("lookup", section);
   console.log("[bench] Wrote docs/benchmarks.md (lookup section).");
+}
+
+/**
+ * The lookup's profile set against the floor's, taken the same way (a fresh app serving only that
+ * route, 10 concurrent): CPU µs per request by area, and the functions whose self time per request
+ * grows most from the floor to the lookup.
+ */
+function beyondTheFloor(lookup: ProfileSummary, floor: ProfileSummary): string[] {
+  const floorArea = new Map(floor.byArea.map((a) => [a.area, a.usPerRequest]));
+  const areas = [...new Set([...lookup.byArea.map((a) => a.area), ...floor.byArea.map((a) => a.area)])]
+    .map((area) => ({ area, lookupUs: lookup.byArea.find((a) => a.area === area)?.usPerRequest ?? 0, floorUs: floorArea.get(area) ?? 0 }))
+    .sort((a, b) => b.lookupUs - b.floorUs - (a.lookupUs - a.floorUs));
+  const fns = [...new Set([...lookup.usPerRequestByFunction.keys(), ...floor.usPerRequestByFunction.keys()])]
+    .map((what) => ({ what, lookupUs: lookup.usPerRequestByFunction.get(what) ?? 0, floorUs: floor.usPerRequestByFunction.get(what) ?? 0 }))
+    .sort((a, b) => b.lookupUs - b.floorUs - (a.lookupUs - a.floorUs))
+    .slice(0, 15);
+  const us = (v: number) => v.toFixed(0);
+  return [
+    "",
+    `Against the floor, profiled the same way (a fresh app serving only \`/api/health/live\`, 10 concurrent, ${PROFILE_S} s, ${floor.requests.toLocaleString("en")} requests): main-thread busy time per request (samples not idle, time off the core inside a call included) ${us(floor.busyUsPerRequest)} µs for the floor and ${us(lookup.busyUsPerRequest)} µs for the lookup. By area, largest difference first:`,
+    "",
+    "| where the code lives | floor µs / request | lookup µs / request | lookup − floor |",
+    "|---|---:|---:|---:|",
+    ...areas.slice(0, 12).map((a) => `| ${a.area} | ${us(a.floorUs)} | ${us(a.lookupUs)} | ${us(a.lookupUs - a.floorUs)} |`),
+    "",
+    "Functions whose self time per request grows most from the floor to the lookup:",
+    "",
+    "| function — where | floor µs / request | lookup µs / request | lookup − floor |",
+    "|---|---:|---:|---:|",
+    ...fns.map((f) => `| ${f.what.replace(/\|/g, "\\|")} | ${us(f.floorUs)} | ${us(f.lookupUs)} | ${us(f.lookupUs - f.floorUs)} |`),
+  ];
 }
 
 main().catch((err: unknown) => {
