@@ -56,19 +56,20 @@ export function DumpIdentify() {
             }}
           />
         </Field>
-        <div>
-          <label htmlFor={`${id}-sig`} className="block text-sm font-medium text-ink-800">Signature (.sig, optional)</label>
-          <input
+        <Field id={`${id}-sig`} label="Signature (.sig, optional)" hint="Without one, a signature stored after the CRC or the matching build's is checked.">
+          <FilePicker
             id={`${id}-sig`}
-            type="file"
             accept=".sig,application/octet-stream"
-            className="mt-1 block text-sm"
+            file={sig}
             disabled={progress.busy}
-            onChange={(e) => setSig(e.target.files?.[0] ?? null)}
-            aria-describedby={`${id}-sig-hint`}
+            describedBy={`${id}-sig-hint`}
+            onFile={(f) => {
+              setSig(f);
+              identify.reset();
+              progress.reset();
+            }}
           />
-          <p id={`${id}-sig-hint`} className="mt-1 text-xs text-ink-600">Without one, a signature stored after the CRC or the matching build&apos;s is checked.</p>
-        </div>
+        </Field>
         <Button type="submit" disabled={!file || progress.busy}>{progress.busy ? "Reading…" : "Identify"}</Button>
         <UploadProgressBar state={progress.state} onCancel={progress.cancel} cancelledNote="Cancelled; nothing was identified." />
       </form>

@@ -92,6 +92,21 @@ test.describe("support lookup", () => {
     await expect(result.getByText("Dump is corrupt")).toBeVisible();
     await expect(result).toContainText("CRC-32 mismatch");
   });
+
+  test("a detached signature is chosen in the app's picker: a wrong-sized one is refused with the reason, and removing it lets the dump through", async ({ page }) => {
+    const { bytes } = await demoBankImage("3.0.0");
+    const lookup = await new LookupPage(page).goto();
+    await lookup.chooseSignature({ name: "short.sig", mimeType: "application/octet-stream", buffer: Buffer.alloc(10, 7) });
+    await expect(page.getByTestId(/-sig-chosen$/)).toContainText("short.sig");
+    await expect(page.getByTestId(/-sig-chosen$/)).toContainText("10 B");
+    await lookup.identify({ name: "returned-board.bin", mimeType: "application/octet-stream", buffer: Buffer.from(bytes) });
+    await expect(page.getByText(/The signature file is 10 bytes; a \.sig signature block is \d+/)).toBeVisible();
+    await expect(lookup.dumpResult).toHaveCount(0);
+    await page.getByRole("button", { name: "Remove short.sig", exact: true }).click();
+    await expect(page.getByTestId(/-sig-chosen$/)).toHaveCount(0);
+    await lookup.button("Identify").click();
+    await expect(lookup.dumpResult.getByText("Dump is intact")).toBeVisible();
+  });
 });
 
 test.describe("lots API", () => {

@@ -39,6 +39,11 @@ export class LookupPage extends Screen {
     return this.dumpResult;
   }
 
+  /** Chooses a detached .sig for the next identification (the app's file picker, like the dump's). */
+  async chooseSignature(file: { name: string; mimeType: string; buffer: Buffer }): Promise<void> {
+    await this.chooseFile("Signature (.sig, optional)", file);
+  }
+
   get dumpResult(): Locator {
     return this.page.getByTestId("dump-result");
   }
