@@ -32,6 +32,12 @@ export function DumpIdentify() {
       return progress.run(f.dump.name, ({ signal, onProgress }) => apiUploadJson(identifyDump, { raw: { data: fd } }, { signal, onProgress }));
     },
   });
+  // A new file (or none) for either field: the last answer and progress no longer apply.
+  const chosen = (set: (f: File | null) => void) => (f: File | null) => {
+    set(f);
+    identify.reset();
+    progress.reset();
+  };
   const r = identify.data;
   return (
     <Panel title="Identify a memory dump">
@@ -49,11 +55,7 @@ export function DumpIdentify() {
             file={file}
             disabled={progress.busy}
             describedBy={`${id}-file-hint`}
-            onFile={(f) => {
-              setFile(f);
-              identify.reset();
-              progress.reset();
-            }}
+            onFile={chosen(setFile)}
           />
         </Field>
         <Field id={`${id}-sig`} label="Signature (.sig, optional)" hint="Without one, a signature stored after the CRC or the matching build's is checked.">
@@ -63,11 +65,7 @@ export function DumpIdentify() {
             file={sig}
             disabled={progress.busy}
             describedBy={`${id}-sig-hint`}
-            onFile={(f) => {
-              setSig(f);
-              identify.reset();
-              progress.reset();
-            }}
+            onFile={chosen(setSig)}
           />
         </Field>
         <Button type="submit" disabled={!file || progress.busy}>{progress.busy ? "Reading…" : "Identify"}</Button>
