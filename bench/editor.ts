@@ -99,6 +99,18 @@ async function main() {
     // Monaco loads on demand; on a busy shared machine that can take well over the default 30 s.
     await page.waitForFunction(() => Boolean(window.__loopkeeperEditor), undefined, { timeout: 180_000 });
     await page.getByTestId("curve-chart").waitFor({ timeout: 180_000 });
+    // One waiter in the page for every case: the first measure of that name, or null after the
+    // given time. A string, not a function: the bundler's helper names do not exist in the page.
+    await page.evaluate(`window.__lkMeasure = (name, waitMs) => new Promise((resolve) => {
+      const until = performance.now() + waitMs;
+      const poll = () => {
+        const found = performance.getEntriesByName(name, "measure")[0];
+        if (found) resolve(found);
+        else if (performance.now() > until) resolve(null);
+        else setTimeout(poll, 1);
+      };
+      poll();
+    })`);
 
     // One typing step: a programmatic edit of the Monaco model (fan point 9's duty), timed in the
     // page to the editor's "markers and plots committed" measure.
@@ -116,14 +128,7 @@ async function main() {
         performance.clearMeasures("lk-edit-to-update");
         const start = performance.now();
         window.__loopkeeperEditor.setText(t);
-        const entry = await new Promise((resolve) => {
-          const poll = () => {
-            const found = performance.getEntriesByName("lk-edit-to-update", "measure")[0];
-            if (found) resolve(found);
-            else setTimeout(poll, 1);
-          };
-          poll();
-        });
+        const entry = await window.__lkMeasure("lk-edit-to-update", 60000);
         return entry.startTime + entry.duration - start;
       })(${JSON.stringify(text)})`);
     };
@@ -172,16 +177,7 @@ async function main() {
       // The selection is drawn before the timed key, as it would be on screen before a person types over it.
       await page.evaluate(`new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)))`);
       await page.keyboard.type(i % 2 === 0 ? otherDigit : lastDigit);
-      const ms = await page.evaluate<number | null>(`new Promise((resolve) => {
-        const until = performance.now() + 2000;
-        const poll = () => {
-          const found = performance.getEntriesByName("lk-edit-to-update", "measure")[0];
-          if (found && window.__lkKeyAt !== undefined) resolve(found.startTime + found.duration - window.__lkKeyAt);
-          else if (performance.now() > until) resolve(null);
-          else setTimeout(poll, 1);
-        };
-        poll();
-      })`);
+      const ms = await page.evaluate<number | null>(`window.__lkMeasure("lk-edit-to-update", 2000).then((m) => (m && window.__lkKeyAt !== undefined ? m.startTime + m.duration - window.__lkKeyAt : null))`);
       if (ms !== null && i >= WARMUP) pressSamples.push(ms);
     }
     if ((WARMUP + EDITS) % 2 === 1) {
@@ -222,16 +218,7 @@ async function main() {
     // Waits for the next "drag step → text, markers and plots committed" measure; null when
     // the step changed nothing (the handle stayed on the same 0.5 % step).
     const nextDragMeasure = () =>
-      page.evaluate<number | null>(`new Promise((resolve) => {
-        const until = performance.now() + 400;
-        const poll = () => {
-          const found = performance.getEntriesByName("lk-drag-to-update", "measure")[0];
-          if (found) resolve(found.duration);
-          else if (performance.now() > until) resolve(null);
-          else setTimeout(poll, 1);
-        };
-        poll();
-      })`);
+      page.evaluate<number | null>(`window.__lkMeasure("lk-drag-to-update", 400).then((m) => (m ? m.duration : null))`);
     const clearDrag = () => page.evaluate(`performance.clearMeasures("lk-drag-to-update"); performance.clearMarks("lk-drag")`);
 
     // Drag: fan point 9 (40 °C, 72 % between 68 % and 76 %) held and moved between its own spot and
@@ -300,7 +287,7 @@ async function main() {
       "",
       `### Edit → markers and plots updated (one run; ${WARMUP} warm-up steps per case not counted)`,
       "",
-      "All three cases come from the same run on the same page, so they compare with each other; figures from other runs on this shared machine (2 cores, up to 8 people building and testing at once) do not compare well.",
+      "All cases come from the same run on the same page, so they compare with each other; figures from other runs on this shared machine (2 cores, up to 8 people building and testing at once) do not compare well.",
       "",
       `- **Typing (key presses)**: the browser's own key events into Monaco: the last digit of fan point 9's duty selected (and drawn) and typed over (1 % up, then back), one key every ${KEY_GAP_MS} ms or more (a fast typist's pace); from the keydown event's timestamp to the editor's \`lk-edit-to-update\` measure, taken in the effect that runs after the engine's validation, the Monaco markers and the plot are committed. This is a keystroke as a person makes it.`,
       "- **Typing (programmatic)**: from just before a programmatic edit of the Monaco model (one fan point's duty; `setText` with the whole new text, of which the editor replaces the span that differs) to the editor's `lk-edit-to-update` measure, taken in the effect that runs after the engine's validation, the Monaco markers and the plot are committed.",
